@@ -1,0 +1,48 @@
+// Tracing the copper: which holes and pins are joined by strips, links and wires.
+#pragma once
+
+#include <optional>
+#include <string>
+#include <vector>
+
+#include "board.hpp"
+#include "circuit.hpp"
+
+namespace netcheck {
+
+/// A set of holes (and off-board lugs) joined by copper, links and wires.
+struct Island {
+    int id = 0;
+    std::vector<Hole> holes;     ///< sorted
+    std::vector<PinRef> pins;    ///< on-board pins and off-board lugs in this island, sorted
+};
+
+/// Result of tracing one board. Node ids: holes first (row * cols + col), then off-board lugs in
+/// board order. Island ids are dense, 0..islandCount()-1, numbered in order of first node.
+class Connectivity {
+public:
+    explicit Connectivity(const Board& board);
+
+    int islandCount() const { return islandCount_; }
+    /// Island of a hole; -1 outside the board.
+    int islandOfHole(Hole hole) const;
+    /// Island of an on-board pin or off-board lug; -1 if the board has no such pin.
+    int islandOfPin(const PinRef& pin) const;
+    /// Holes and pins of every island, in id order. Built on demand (costs O(holes)).
+    std::vector<Island> islands() const;
+    /// True when a hole cut removed this hole's copper.
+    bool isHoleCut(Hole hole) const;
+
+private:
+    const Board* board_;
+    std::vector<int> islandOfNode_;
+    std::vector<unsigned char> holeCut_;
+    std::vector<std::pair<PinRef, int>> pinNodes_;  // sorted by PinRef, for islandOfPin
+    int islandCount_ = 0;
+};
+
+/// The board's connectivity as a netlist: each group the pins joined by copper, links and wires,
+/// sorted within and between groups. A pin alone is a group of one.
+std::vector<std::vector<PinRef>> boardNets(const Board& board);
+
+}  // namespace netcheck

@@ -1,0 +1,17 @@
+// Bounds on input size, so absurd files get a clear message instead of exhausting the machine.
+#pragma once
+
+#include <cstddef>
+
+namespace netcheck {
+
+/// Every reader takes these; callers may relax or tighten them (tests do).
+struct ReadLimits {
+    int maxRows = 1000;
+    int maxCols = 1000;
+    std::size_t maxBytes = 64u * 1024u * 1024u;
+    std::size_t maxParts = 100000;  ///< on-board plus off-board parts, and circuit parts
+    int maxDepth = 64;              ///< JSON nesting
+};
+
+}  // namespace netcheck
