@@ -1,0 +1,200 @@
+// Parsing with limits and walking documents with located errors.
+#include "json_reader.hpp"
+
+#include <algorithm>
+#include <cctype>
+
+namespace netcheck {
+
+namespace {
+
+FileError errorAt(std::string_view text, std::string_view fileName, std::size_t offset,
+                  std::string message) {
+    const TextPosition at = positionAt(text, offset);
+    FileError error;
+    error.file = std::string(fileName);
+    error.line = at.line;
+    error.column = at.column;
+    error.message = std::move(message);
+    return error;
+}
+
+bool isBlank(std::string_view text) {
+    return std::all_of(text.begin(), text.end(), [](char c) {
+        return c == ' ' || c == '\t' || c == '\n' || c == '\r';
+    });
+}
+
+// nlohmann's message reads "[json.exception.parse_error.101] parse error at line 3, column 5:
+// syntax error while parsing value - invalid literal; last read: 'x'". We report our own
+// position, so keep only what comes after the position.
+std::string syntaxMessage(const nlohmann::json::parse_error& e) {
+    std::string what = e.what();
+    const std::size_t column = what.find("column ");
+    const std::size_t colon = what.find(": ", column == std::string::npos ? 0 : column);
+    if (colon != std::string::npos) what = what.substr(colon + 2);
+    return "JSON syntax error: " + what;
+}
+
+std::string typeName(const Json& value) {
+    if (value.is_number()) return "a number";
+    if (value.is_string()) return "a string";
+    if (value.is_boolean()) return "true/false";
+    if (value.is_null()) return "null";
+    if (value.is_array()) return "an array";
+    return "an object";
+}
+
+}  // namespace
+
+std::string inQuotes(std::string_view text) {
+    return nlohmann::json(std::string(text))
+        .dump(-1, ' ', false, nlohmann::json::error_handler_t::replace);
+}
+
+ReadResult<Json> parseJsonText(std::string_view text, std::string_view fileName,
+                               const ReadLimits& limits) {
+    ReadResult<Json> result;
+    if (text.size() > limits.maxBytes) {
+        result.error = errorAt(text, fileName, 0,
+                               "the file is " + std::to_string(text.size()) +
+                                   " bytes, more than the limit of " +
+                                   std::to_string(limits.maxBytes));
+        result.error->line = 0;
+        result.error->column = 0;
+        return result;
+    }
+    if (isBlank(text)) {
+        result.error = errorAt(text, fileName, 0, "the file is empty");
+        return result;
+    }
+    // Checked before parsing: nlohmann's parser recurses and a hostile file could exhaust the stack.
+    if (auto deep = findTooDeep(text, limits.maxDepth)) {
+        result.error = errorAt(text, fileName, *deep,
+                               "nesting is deeper than " + std::to_string(limits.maxDepth) +
+                                   " levels");
+        return result;
+    }
+    try {
+        Json document = Json::parse(text.begin(), text.end());
+        if (!document.is_object()) {
+            result.error = errorAt(text, fileName, findValue(text, {}).value_or(0),
+                                   "the file holds " + typeName(document) +
+                                       ", not a JSON object");
+            return result;
+        }
+        result.value = std::move(document);
+    } catch (const nlohmann::json::parse_error& e) {
+        // e.byte counts from 1 and points at the character where reading stopped.
+        result.error = errorAt(text, fileName, e.byte > 0 ? e.byte - 1 : 0, syntaxMessage(e));
+    }
+    return result;
+}
+
+FileError locateError(std::string_view text, std::string_view fileName,
+                      const InvalidInput& problem) {
+    FileError error = errorAt(text, fileName, findValue(text, problem.path).value_or(0),
+                              problem.message);
+    error.path = pathText(problem.path);
+    error.newerVersion = problem.newerVersion;
+    return error;
+}
+
+JsonReader::Step JsonReader::enter(std::string key) {
+    path_.push_back(PathStep{std::move(key), 0, false});
+    return Step(path_);
+}
+
+JsonReader::Step JsonReader::enter(std::size_t index) {
+    path_.push_back(PathStep{{}, index, true});
+    return Step(path_);
+}
+
+void JsonReader::fail(std::string message) const {
+    throw InvalidInput{path_, std::move(message), false};
+}
+
+const Json* JsonReader::find(const Json& object, std::string_view key) {
+    const auto it = object.find(key);
+    return it == object.end() ? nullptr : &*it;
+}
+
+const Json& JsonReader::require(const Json& object, std::string_view key) const {
+    const Json* member = find(object, key);
+    if (!member) fail("missing " + inQuotes(key));
+    return *member;
+}
+
+void JsonReader::expectObject(const Json& value) const {
+    if (!value.is_object()) fail("must be an object {...}, not " + typeName(value));
+}
+
+void JsonReader::expectArray(const Json& value) const {
+    if (!value.is_array()) fail("must be an array [...], not " + typeName(value));
+}
+
+std::string JsonReader::asString(const Json& value) const {
+    if (!value.is_string()) fail("must be a string, not " + typeName(value));
+    return value.get<std::string>();
+}
+
+std::string JsonReader::stringMember(const Json& object, std::string_view key, bool required) {
+    const Json* member = required ? &require(object, key) : find(object, key);
+    if (!member) return {};
+    const auto step = enter(std::string(key));
+    return asString(*member);
+}
+
+long long JsonReader::asInteger(const Json& value) const {
+    if (!value.is_number_integer()) fail("must be a whole number, not " + typeName(value));
+    if (value.is_number_unsigned() &&
+        value.get<unsigned long long>() > static_cast<unsigned long long>(1) << 62) {
+        fail("the number is too large");
+    }
+    return value.get<long long>();
+}
+
+std::vector<std::string> JsonReader::asStringArray(const Json& value) {
+    expectArray(value);
+    std::vector<std::string> strings;
+    strings.reserve(value.size());
+    for (std::size_t i = 0; i < value.size(); ++i) {
+        const auto step = enter(i);
+        strings.push_back(asString(value[i]));
+    }
+    return strings;
+}
+
+void JsonReader::expectName(std::string_view name, std::string_view what) const {
+    if (name.empty()) fail(std::string(what) + " is empty");
+    for (char c : name) {
+        if (c == '.' || std::isspace(static_cast<unsigned char>(c)) ||
+            std::iscntrl(static_cast<unsigned char>(c))) {
+            fail(std::string(what) + " " + inQuotes(name) + " may not contain blanks or '.'");
+        }
+    }
+}
+
+nlohmann::json JsonReader::extras(const Json& object,
+                                  std::initializer_list<std::string_view> known) {
+    nlohmann::json kept = nlohmann::json::object();
+    for (const auto& [key, value] : object.items()) {
+        if (std::find(known.begin(), known.end(), key) == known.end()) {
+            kept[key] = nlohmann::json(value);
+        }
+    }
+    return kept;
+}
+
+void appendExtras(Json& out, const nlohmann::json& extra) {
+    if (!extra.is_object()) return;
+    for (const auto& [key, value] : extra.items()) {
+        if (!out.contains(key)) out[key] = Json(value);
+    }
+}
+
+std::string dumpDocument(const Json& document) {
+    return document.dump(2, ' ', false, nlohmann::json::error_handler_t::replace) + "\n";
+}
+
+}  // namespace netcheck
