@@ -1,0 +1,24 @@
+#include "netcheck/edit/link_commands.hpp"
+
+#include "netcheck/edit/label_text.hpp"
+
+namespace netcheck::edit {
+
+namespace {
+
+std::string linkName(const Link& link) {
+    return joinedName(holeName(link.from), holeName(link.to));
+}
+
+}  // namespace
+
+std::string LinkList::addLabel(const Link& link) { return "Add link " + linkName(link); }
+
+std::string LinkList::removeLabel(const Link& link) { return "Remove link " + linkName(link); }
+
+std::string LinkList::changeLabel(const Link& before, const Link& after) {
+    const bool moved = before.from != after.from || before.to != after.to;
+    return (moved ? "Move link " : "Edit link ") + linkName(before);
+}
+
+}  // namespace netcheck::edit
