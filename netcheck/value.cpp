@@ -1,7 +1,8 @@
 // Reading component values the way makers and IEC 60062 write them.
 //
-// Multiplier letters: p 1e-12, n 1e-9, u/µ 1e-6, m 1e-3, R 1, k/K 1e3, M 1e6, G 1e9, T 1e12, and
-// "meg" (any case) 1e6. Case decides between milli and mega: "2.2mH" and "4m7" are milli, "4M7"
+// Multiplier letters: p 1e-12, n 1e-9, u/µ 1e-6, m 1e-3, R/r 1, k/K 1e3, M 1e6, G 1e9, T 1e12, and
+// "meg"/"Meg"/"MEG" 1e6. Small multipliers are lower case only, so type names such as "1N4148" are
+// not read as quantities. Case decides between milli and mega: "2.2mH" and "4m7" are milli, "4M7"
 // and "1 MΩ" are mega. (SPICE's rule that M is milli belongs to the SPICE importer only.)
 // The letter may stand in place of the decimal point: "4k7" = 4.7k, "R47" = 0.47.
 #include "value.hpp"
@@ -24,13 +25,12 @@ struct Multiplier {
 
 // Longer tokens first so that "meg" wins over "m".
 constexpr std::array kMultipliers{
-    Multiplier{"meg", 1e6},     Multiplier{"MEG", 1e6},  Multiplier{"Meg", 1e6},
-    Multiplier{"\xC2\xB5", 1e-6} /* µ MICRO SIGN */,      Multiplier{"\xCE\xBC", 1e-6} /* μ mu */,
-    Multiplier{"p", 1e-12},     Multiplier{"P", 1e-12},  Multiplier{"n", 1e-9},
-    Multiplier{"N", 1e-9},      Multiplier{"u", 1e-6},   Multiplier{"U", 1e-6},
-    Multiplier{"m", 1e-3},      Multiplier{"R", 1.0},    Multiplier{"r", 1.0},
-    Multiplier{"k", 1e3},       Multiplier{"K", 1e3},    Multiplier{"M", 1e6},
-    Multiplier{"G", 1e9},       Multiplier{"T", 1e12},
+    Multiplier{"meg", 1e6},      Multiplier{"MEG", 1e6},      Multiplier{"Meg", 1e6},
+    Multiplier{"\xC2\xB5", 1e-6} /* µ MICRO SIGN */,         Multiplier{"\xCE\xBC", 1e-6} /* μ mu */,
+    Multiplier{"p", 1e-12},      Multiplier{"n", 1e-9},       Multiplier{"u", 1e-6},
+    Multiplier{"m", 1e-3},       Multiplier{"R", 1.0},        Multiplier{"r", 1.0},
+    Multiplier{"k", 1e3},        Multiplier{"K", 1e3},        Multiplier{"M", 1e6},
+    Multiplier{"G", 1e9},        Multiplier{"T", 1e12},
 };
 
 // Unit words and symbols that may follow a value; they carry no information for comparison.
