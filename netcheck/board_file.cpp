@@ -37,6 +37,10 @@ public:
 
 private:
     void readHeader(const Json& root) {
+        if (!JsonReader::find(root, "format")) {
+            r_.fail("missing \"format\" (a board file starts with \"format\": \"" +
+                    std::string(kBoardFormat) + "\")");
+        }
         const std::string format = r_.stringMember(root, "format", true);
         if (format != kBoardFormat) {
             const auto step = r_.enter("format");
@@ -161,9 +165,10 @@ private:
 
     std::string readRef(const Json& object) {
         const std::string ref = r_.stringMember(object, "ref", true);
+        const std::string where = r_.pathText();
         const auto step = r_.enter("ref");
         r_.expectName(ref, "ref");
-        const auto [it, fresh] = refWhere_.emplace(ref, r_.pathText());
+        const auto [it, fresh] = refWhere_.emplace(ref, where);
         if (!fresh) r_.fail("duplicate ref " + inQuotes(ref) + " (also at " + it->second + ")");
         if (refWhere_.size() > limits_.maxParts) {
             r_.fail("more than " + std::to_string(limits_.maxParts) + " parts");

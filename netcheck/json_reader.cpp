@@ -26,14 +26,23 @@ bool isBlank(std::string_view text) {
 }
 
 // nlohmann's message reads "[json.exception.parse_error.101] parse error at line 3, column 5:
-// syntax error while parsing value - invalid literal; last read: 'x'". We report our own
-// position, so keep only what comes after the position.
+// syntax error while parsing value - invalid literal; last read: '24 }<U+000A>x'; expected end of
+// input". We report our own position and the text around it is in the file, so keep only the
+// reason: "JSON syntax error while parsing value: invalid literal; expected end of input".
 std::string syntaxMessage(const nlohmann::json::parse_error& e) {
     std::string what = e.what();
     const std::size_t column = what.find("column ");
     const std::size_t colon = what.find(": ", column == std::string::npos ? 0 : column);
-    if (colon != std::string::npos) what = what.substr(colon + 2);
-    return "JSON syntax error: " + what;
+    if (colon != std::string::npos) what.erase(0, colon + 2);
+    const std::string lastRead = "; last read: '";
+    if (const std::size_t from = what.find(lastRead); from != std::string::npos) {
+        const std::size_t to = what.find("'; ", from + lastRead.size());
+        what.erase(from, to == std::string::npos ? std::string::npos : to + 1 - from);
+    }
+    if (const std::size_t dash = what.find(" - "); dash != std::string::npos) {
+        what.replace(dash, 3, ": ");
+    }
+    return "JSON " + what;
 }
 
 std::string typeName(const Json& value) {
@@ -146,6 +155,7 @@ std::string JsonReader::stringMember(const Json& object, std::string_view key, b
 }
 
 long long JsonReader::asInteger(const Json& value) const {
+    if (value.is_number_float()) fail("must be a whole number, not " + value.dump());
     if (!value.is_number_integer()) fail("must be a whole number, not " + typeName(value));
     if (value.is_number_unsigned() &&
         value.get<unsigned long long>() > static_cast<unsigned long long>(1) << 62) {
