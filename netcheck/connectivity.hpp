@@ -32,6 +32,12 @@ public:
     std::vector<Island> islands() const;
     /// True when a hole cut removed this hole's copper.
     bool isHoleCut(Hole hole) const;
+    /// True when copper joins `hole` with the next hole along its strip (column + 1).
+    bool joinsNext(Hole hole) const;
+    /// Number of nodes: holes, then off-board lugs.
+    int nodeCount() const { return static_cast<int>(islandOfNode_.size()); }
+    /// Island of a node id (see the class comment); -1 when out of range.
+    int islandOfNode(int node) const;
 
 private:
     const Board* board_;

@@ -1,0 +1,171 @@
+// Checking a board against its intended circuit.
+//
+// What the check decides, in the order a maker reads the report:
+// - Copper: holes are nodes (row * cols + col), then off-board lugs. On strip board adjacent holes
+//   of a row share copper unless a between cut scores the track or either hole is hole-cut; a
+//   hole-cut hole touches no copper at all (a lead in it joins only what else is soldered in the
+//   same hole). On pad board no two holes share copper. Links and wires join their ends. Part pins
+//   sit at their hole's node.
+// - Parts are matched by reference designator. A ref the circuit names (declared, or only used in
+//   a net) that the board lacks is missing-part; a board part (on or off the board) the circuit
+//   never names is extra-part. A pin the circuit uses that the board part lacks, or a declared pin
+//   list that differs from the board part's, is pin-mismatch (that part's pins are then left out
+//   of the net comparison). Values: kinds whose value is a quantity compare numerically
+//   (value-mismatch, an error); other kinds compare as text (value-differs, a warning). An empty
+//   value in the circuit is don't-care.
+// - Orientation: non-polarised two-pin parts of a known kind may sit end for end. Each gets the
+//   orientation whose pins agree best with the copper (the number of pins of other parts in the
+//   same island and the same intended net); a tie keeps the part as written. Two rounds, so
+//   neighbouring flipped parts settle. Pots and trimmers whose lugs 1 and 3 agree better swapped,
+//   with the wiper agreeing as placed, are taken as swapped and get a pot-reversed warning (the
+//   control works backwards but nothing is shorted). Polarised parts keep their pin names; if the
+//   other way round (two pins) or another order (three-pin transistors and regulators) would agree
+//   clearly better - at least two joins and more than twice as many - one reversed-part error
+//   says so, beside the shorts and opens the reversal causes.
+// - Pins of circuit parts that no net lists are don't-care.
+// - short: one error per island holding pins of two or more intended nets, nets sorted, with the
+//   shortest path between pins of the first net and another, and one cut that separates those
+//   two pins without splitting any net of the island (a hole cut in a free hole near the middle of
+//   the path preferred, else a cut between two holes), or "no single cut separates them".
+// - open: one error per net whose pins lie in two or more islands; pieces sorted; links through
+//   the nearest free holes, joining pieces Prim-style.
+// - shared-hole (two or more leads in one hole: part pins, link ends and wire ends all count) and
+//   pin-on-cut (a lead in a hole-cut hole) are errors with or without a circuit.
+// - Warnings: value-differs, pot-reversed, dangling-lead (an island with exactly one pin and no
+//   link or wire end; with a circuit only when the circuit joins that pin to another), and trim
+//   (rows and columns at the edges holding no pin, link end or wire end).
+// - Without a circuit the report lists the islands that hold pins, with the lead findings and
+//   warnings above.
+// Findings are ordered: part findings by ref, shorts by island, opens by net, hole findings by
+// hole; the same board always gives the same report.
+#include "check.hpp"
+
+#include <algorithm>
+#include <map>
+
+#include "check_context.hpp"
+#include "circuit_match.hpp"
+#include "lead_findings.hpp"
+#include "open_locator.hpp"
+#include "short_locator.hpp"
+
+namespace netcheck {
+
+namespace {
+
+void findShorts(const CheckContext& context, const std::vector<PlacedNet>& nets,
+                std::vector<Finding>& errors) {
+    const Connectivity& copper = context.copper();
+    std::vector<int> firstNet(static_cast<std::size_t>(copper.islandCount()), -1);
+    std::map<int, std::vector<const PlacedNet*>> shorted;
+    for (std::size_t n = 0; n < nets.size(); ++n) {
+        for (const NetPin& pin : nets[n].pins) {
+            const int island = copper.islandOfNode(pin.node);
+            int& first = firstNet[static_cast<std::size_t>(island)];
+            if (first < 0) first = static_cast<int>(n);
+            if (first != static_cast<int>(n)) shorted[island];
+        }
+    }
+    if (shorted.empty()) return;
+    for (const PlacedNet& net : nets) {
+        for (const NetPin& pin : net.pins) {
+            auto it = shorted.find(copper.islandOfNode(pin.node));
+            if (it == shorted.end()) continue;
+            if (it->second.empty() || it->second.back() != &net) it->second.push_back(&net);
+        }
+    }
+    for (const auto& [island, islandNets] : shorted) {
+        errors.push_back(locateShort(context, island, islandNets));
+    }
+}
+
+void findOpens(const CheckContext& context, const std::vector<PlacedNet>& nets,
+               std::vector<Finding>& errors) {
+    const Connectivity& copper = context.copper();
+    for (const PlacedNet& net : nets) {
+        if (net.pins.empty()) continue;
+        const int first = copper.islandOfNode(net.pins.front().node);
+        const bool split = std::any_of(net.pins.begin(), net.pins.end(), [&](const NetPin& pin) {
+            return copper.islandOfNode(pin.node) != first;
+        });
+        if (split) errors.push_back(locateOpen(context, net));
+    }
+}
+
+// Islands holding a pin meant to join another pin (for the dangling-lead rule with a circuit):
+// a pin the circuit leaves unconnected, or the only pin of its net, is meant to be alone.
+std::vector<char> islandsWithNetPins(const CheckContext& context,
+                                     const std::vector<PlacedNet>& nets) {
+    std::vector<char> flagged(static_cast<std::size_t>(context.copper().islandCount()), 0);
+    for (const PlacedNet& net : nets) {
+        if (net.pins.size() < 2) continue;
+        for (const NetPin& pin : net.pins) {
+            flagged[static_cast<std::size_t>(context.copper().islandOfNode(pin.node))] = 1;
+        }
+    }
+    return flagged;
+}
+
+// Islands that hold at least one pin or lug, in id order, with their holes and pins.
+std::vector<Island> pinIslands(const CheckContext& context) {
+    const Board& board = context.board();
+    const Connectivity& copper = context.copper();
+    std::vector<int> slot(static_cast<std::size_t>(copper.islandCount()), -1);
+    std::vector<Island> islands;
+    auto islandFor = [&](int node) -> Island& {
+        const int id = copper.islandOfNode(node);
+        int& at = slot[static_cast<std::size_t>(id)];
+        if (at < 0) {
+            at = static_cast<int>(islands.size());
+            islands.push_back(Island{id, {}, {}});
+        }
+        return islands[static_cast<std::size_t>(at)];
+    };
+    for (const Lead& lead : context.leads()) {
+        if (lead.kind != Lead::Kind::PartPin) continue;
+        const Part& part = board.parts[static_cast<std::size_t>(lead.item)];
+        islandFor(lead.hole).pins.push_back(
+            PinRef{part.ref, part.pins[static_cast<std::size_t>(lead.sub)].name});
+    }
+    for (std::size_t p = 0; p < board.offboard.size(); ++p) {
+        const OffboardPart& part = board.offboard[p];
+        for (std::size_t k = 0; k < part.pins.size(); ++k) {
+            islandFor(context.lugNode(static_cast<int>(p), static_cast<int>(k)))
+                .pins.push_back(PinRef{part.ref, part.pins[k]});
+        }
+    }
+    for (int hole = 0; hole < board.holeCount(); ++hole) {
+        const int at = slot[static_cast<std::size_t>(copper.islandOfNode(hole))];
+        if (at >= 0) islands[static_cast<std::size_t>(at)].holes.push_back(context.holeAt(hole));
+    }
+    for (Island& island : islands) std::sort(island.pins.begin(), island.pins.end());
+    std::sort(islands.begin(), islands.end(),
+              [](const Island& a, const Island& b) { return a.id < b.id; });
+    return islands;
+}
+
+}  // namespace
+
+CheckReport check(const Board& board, const Circuit* circuit) {
+    if (circuit == nullptr && board.circuit) circuit = &*board.circuit;
+    const CheckContext context(board);
+    CheckReport report;
+    report.hasCircuit = circuit != nullptr;
+    std::vector<char> danglingIslands;
+    if (circuit != nullptr) {
+        CircuitMatch match = matchCircuit(context, *circuit);
+        report.errors = std::move(match.errors);
+        report.warnings = std::move(match.warnings);
+        findShorts(context, match.nets, report.errors);
+        findOpens(context, match.nets, report.errors);
+        danglingIslands = islandsWithNetPins(context, match.nets);
+    }
+    findSharedHoles(context, report.errors);
+    findLeadsOnCuts(context, report.errors);
+    findDanglingLeads(context, circuit ? &danglingIslands : nullptr, report.warnings);
+    findTrim(context, report.warnings);
+    report.islands = pinIslands(context);
+    return report;
+}
+
+}  // namespace netcheck

@@ -1,0 +1,102 @@
+// Collecting the leads of a board and naming nodes for messages.
+#include "check_context.hpp"
+
+namespace netcheck {
+
+CheckContext::CheckContext(const Board& board)
+    : board_(&board),
+      copper_(board),
+      leadCount_(static_cast<std::size_t>(board.holeCount()), 0) {
+    auto add = [&](Lead::Kind kind, int item, int sub, Hole hole) {
+        if (!board.contains(hole)) return;
+        const int index = holeIndex(hole);
+        leads_.push_back(Lead{kind, item, sub, index});
+        unsigned char& count = leadCount_[static_cast<std::size_t>(index)];
+        if (count < 255) ++count;
+    };
+    for (std::size_t p = 0; p < board.parts.size(); ++p) {
+        const auto& pins = board.parts[p].pins;
+        for (std::size_t k = 0; k < pins.size(); ++k) {
+            add(Lead::Kind::PartPin, static_cast<int>(p), static_cast<int>(k), pins[k].hole);
+        }
+    }
+    for (std::size_t l = 0; l < board.links.size(); ++l) {
+        add(Lead::Kind::LinkEnd, static_cast<int>(l), 0, board.links[l].from);
+        add(Lead::Kind::LinkEnd, static_cast<int>(l), 1, board.links[l].to);
+    }
+    for (std::size_t w = 0; w < board.wires.size(); ++w) {
+        const Wire& wire = board.wires[w];
+        if (wire.from.isHole()) add(Lead::Kind::WireEnd, static_cast<int>(w), 0, *wire.from.hole);
+        if (wire.to.isHole()) add(Lead::Kind::WireEnd, static_cast<int>(w), 1, *wire.to.hole);
+    }
+    int base = board.holeCount();
+    for (const OffboardPart& part : board.offboard) {
+        lugBase_.push_back(base);
+        base += static_cast<int>(part.pins.size());
+    }
+}
+
+bool CheckContext::isFree(int hole) const {
+    return leadCount_[static_cast<std::size_t>(hole)] == 0 && !copper_.isHoleCut(holeAt(hole));
+}
+
+std::string CheckContext::nodeName(int node) const {
+    if (isHoleNode(node)) return holeName(holeAt(node));
+    for (std::size_t p = 0; p < board_->offboard.size(); ++p) {
+        const OffboardPart& part = board_->offboard[p];
+        const int lug = node - lugBase_[p];
+        if (lug >= 0 && lug < static_cast<int>(part.pins.size())) {
+            return part.ref + "." + part.pins[static_cast<std::size_t>(lug)];
+        }
+    }
+    return "?";
+}
+
+std::string CheckContext::leadName(const Lead& lead) const {
+    const auto item = static_cast<std::size_t>(lead.item);
+    switch (lead.kind) {
+        case Lead::Kind::PartPin: {
+            const Part& part = board_->parts[item];
+            return part.ref + "." + part.pins[static_cast<std::size_t>(lead.sub)].name;
+        }
+        case Lead::Kind::LinkEnd: {
+            const Link& link = board_->links[item];
+            return "link " + holeName(link.from) + "-" + holeName(link.to);
+        }
+        case Lead::Kind::WireEnd: {
+            const Wire& wire = board_->wires[item];
+            const Endpoint& other = lead.sub == 0 ? wire.to : wire.from;
+            const std::string colour = wire.color.empty() ? "" : wire.color + " ";
+            return colour + "wire to " + other.name();
+        }
+    }
+    return "?";
+}
+
+int CheckContext::endpointNode(const Endpoint& end) const {
+    if (end.isHole()) return board_->contains(*end.hole) ? holeIndex(*end.hole) : -1;
+    for (std::size_t p = 0; p < board_->offboard.size(); ++p) {
+        const OffboardPart& part = board_->offboard[p];
+        if (part.ref != end.lug.ref) continue;
+        for (std::size_t k = 0; k < part.pins.size(); ++k) {
+            if (part.pins[k] == end.lug.pin) return lugNode(static_cast<int>(p), static_cast<int>(k));
+        }
+    }
+    const Part* part = board_->findPart(end.lug.ref);
+    const Pin* pin = part ? part->findPin(end.lug.pin) : nullptr;
+    return pin && board_->contains(pin->hole) ? holeIndex(pin->hole) : -1;
+}
+
+std::vector<std::pair<int, int>> CheckContext::jumpers() const {
+    std::vector<std::pair<int, int>> edges;
+    auto add = [&](int a, int b) {
+        if (a >= 0 && b >= 0) edges.emplace_back(a, b);
+    };
+    for (const Link& link : board_->links) {
+        add(endpointNode(Endpoint::atHole(link.from)), endpointNode(Endpoint::atHole(link.to)));
+    }
+    for (const Wire& wire : board_->wires) add(endpointNode(wire.from), endpointNode(wire.to));
+    return edges;
+}
+
+}  // namespace netcheck

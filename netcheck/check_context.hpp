@@ -1,0 +1,59 @@
+// What every part of one check run shares: the board, its traced copper, where the leads are, and
+// how nodes are named (private to the checker).
+#pragma once
+
+#include <string>
+#include <utility>
+#include <vector>
+
+#include "board.hpp"
+#include "connectivity.hpp"
+
+namespace netcheck {
+
+/// Something soldered into a hole: a part pin, one end of a link, or the board end of a wire.
+struct Lead {
+    enum class Kind { PartPin, LinkEnd, WireEnd };
+    Kind kind = Kind::PartPin;
+    int item = 0;  ///< index into board.parts, board.links or board.wires
+    int sub = 0;   ///< pin index, or 0/1 for the from/to end
+    int hole = 0;  ///< hole index row * cols + col
+};
+
+/// One check run's shared facts. Node ids follow Connectivity: holes, then off-board lugs.
+class CheckContext {
+public:
+    explicit CheckContext(const Board& board);
+
+    const Board& board() const { return *board_; }
+    const Connectivity& copper() const { return copper_; }
+    /// Every lead on the board, part pins first, then link ends, then wire ends.
+    const std::vector<Lead>& leads() const { return leads_; }
+    /// Leads in a hole (saturates at 255).
+    int leadsIn(int hole) const { return leadCount_[static_cast<std::size_t>(hole)]; }
+    /// Copper present and nothing soldered in it: a place for a new link or a hole cut.
+    bool isFree(int hole) const;
+
+    int holeIndex(Hole hole) const { return hole.row * board_->cols + hole.col; }
+    Hole holeAt(int index) const { return Hole{index / board_->cols, index % board_->cols}; }
+    bool isHoleNode(int node) const { return node < board_->holeCount(); }
+    /// Node of lug `lug` of off-board part `part` (indices into board.offboard and its pins).
+    int lugNode(int part, int lug) const { return lugBase_[static_cast<std::size_t>(part)] + lug; }
+    /// "D7" for a hole node, "VR1.2" for a lug node.
+    std::string nodeName(int node) const;
+    /// "R1.2", "link A1-C1", "wire to VR1.2" (for messages about a hole's leads).
+    std::string leadName(const Lead& lead) const;
+    /// Node of a wire end; -1 when it names nothing on the board.
+    int endpointNode(const Endpoint& end) const;
+    /// Every link and wire as a pair of nodes (ends that name nothing are left out).
+    std::vector<std::pair<int, int>> jumpers() const;
+
+private:
+    const Board* board_;
+    Connectivity copper_;
+    std::vector<Lead> leads_;
+    std::vector<unsigned char> leadCount_;
+    std::vector<int> lugBase_;
+};
+
+}  // namespace netcheck

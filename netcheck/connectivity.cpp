@@ -1,0 +1,190 @@
+// Tracing the copper. Each row is scanned once into strip segments (runs of holes joined by copper);
+// only segments, off-board lugs, links and wires go through the union-find, so the work per hole
+// is a couple of array reads and writes.
+#include "connectivity.hpp"
+
+#include <algorithm>
+
+#include "union_find.hpp"
+
+namespace netcheck {
+
+namespace {
+
+constexpr unsigned char kHoleCutFlag = 1;   // the copper ring of this hole is removed
+constexpr unsigned char kNoJoinNextFlag = 2;  // no copper to the next hole along the strip
+
+// Per-hole flags from the copper pattern and the cuts.
+std::vector<unsigned char> copperFlags(const Board& board) {
+    const int cols = board.cols;
+    std::vector<unsigned char> flags(static_cast<std::size_t>(board.holeCount()), 0);
+    if (board.copper == CopperPattern::Pads) {
+        std::fill(flags.begin(), flags.end(), kNoJoinNextFlag);
+    }
+    for (int r = 0; r < board.rows; ++r) {
+        flags[static_cast<std::size_t>(r * cols + cols - 1)] |= kNoJoinNextFlag;
+    }
+    for (const Cut& cut : board.cuts) {
+        if (!board.contains(cut.hole)) continue;
+        const std::size_t i = static_cast<std::size_t>(cut.hole.row * cols + cut.hole.col);
+        if (cut.kind == Cut::Kind::Between) {
+            flags[i] |= kNoJoinNextFlag;
+            continue;
+        }
+        // A hole without copper joins neither neighbour along the strip.
+        flags[i] |= kHoleCutFlag | kNoJoinNextFlag;
+        if (cut.hole.col > 0) flags[i - 1] |= kNoJoinNextFlag;
+    }
+    return flags;
+}
+
+// Node id of each off-board lug, keyed by its pin reference (sorted).
+std::vector<std::pair<PinRef, int>> lugNodes(const Board& board) {
+    std::vector<std::pair<PinRef, int>> lugs;
+    int node = board.holeCount();
+    for (const OffboardPart& part : board.offboard) {
+        for (const std::string& pin : part.pins) lugs.push_back({PinRef{part.ref, pin}, node++});
+    }
+    std::stable_sort(lugs.begin(), lugs.end(),
+                     [](const auto& a, const auto& b) { return a.first < b.first; });
+    return lugs;
+}
+
+int findLug(const std::vector<std::pair<PinRef, int>>& lugs, const PinRef& pin) {
+    auto it = std::lower_bound(lugs.begin(), lugs.end(), pin,
+                               [](const auto& entry, const PinRef& p) { return entry.first < p; });
+    return it != lugs.end() && it->first == pin ? it->second : -1;
+}
+
+}  // namespace
+
+Connectivity::Connectivity(const Board& board)
+    : board_(&board), holeCut_(copperFlags(board)), pinNodes_(lugNodes(board)) {
+    const int holes = board.holeCount();
+    const int lugCount = static_cast<int>(pinNodes_.size());
+    islandOfNode_.resize(static_cast<std::size_t>(holes + lugCount));
+
+    // Pass 1: strip segment of every hole (stored in islandOfNode_ for now).
+    int segment = 0;
+    for (int i = 0; i < holes; ++i) {
+        islandOfNode_[static_cast<std::size_t>(i)] = segment;
+        if (holeCut_[static_cast<std::size_t>(i)] & kNoJoinNextFlag) ++segment;
+    }
+    const int segments = segment;
+    for (int l = 0; l < lugCount; ++l) islandOfNode_[static_cast<std::size_t>(holes + l)] = segment++;
+
+    // Pass 2: links and wires join segments and lugs.
+    UnionFind sets(segments + lugCount);
+    auto setOfHole = [&](Hole hole) -> int {
+        return board.contains(hole)
+                   ? islandOfNode_[static_cast<std::size_t>(hole.row * board.cols + hole.col)]
+                   : -1;
+    };
+    auto setOf = [&](const Endpoint& end) -> int {
+        if (end.isHole()) return setOfHole(*end.hole);
+        const int node = findLug(pinNodes_, end.lug);
+        if (node >= 0) return islandOfNode_[static_cast<std::size_t>(node)];
+        // A wire may also end on the lead of an on-board part: it joins that lead's hole.
+        const Part* part = board.findPart(end.lug.ref);
+        const Pin* pin = part ? part->findPin(end.lug.pin) : nullptr;
+        return pin ? setOfHole(pin->hole) : -1;
+    };
+    for (const Link& link : board.links) {
+        const int a = setOfHole(link.from);
+        const int b = setOfHole(link.to);
+        if (a >= 0 && b >= 0) sets.unite(a, b);
+    }
+    for (const Wire& wire : board.wires) {
+        const int a = setOf(wire.from);
+        const int b = setOf(wire.to);
+        if (a >= 0 && b >= 0) sets.unite(a, b);
+    }
+
+    // Pass 3: dense island ids in order of first node.
+    std::vector<int> islandOfSet(static_cast<std::size_t>(segments + lugCount), -1);
+    for (int& id : islandOfNode_) {
+        int& island = islandOfSet[static_cast<std::size_t>(sets.find(id))];
+        if (island < 0) island = islandCount_++;
+        id = island;
+    }
+}
+
+int Connectivity::islandOfHole(Hole hole) const {
+    if (!board_->contains(hole)) return -1;
+    return islandOfNode_[static_cast<std::size_t>(hole.row * board_->cols + hole.col)];
+}
+
+int Connectivity::islandOfNode(int node) const {
+    if (node < 0 || node >= nodeCount()) return -1;
+    return islandOfNode_[static_cast<std::size_t>(node)];
+}
+
+int Connectivity::islandOfPin(const PinRef& pin) const {
+    const int lug = findLug(pinNodes_, pin);
+    if (lug >= 0) return islandOfNode(lug);
+    const Part* part = board_->findPart(pin.ref);
+    const Pin* onBoard = part ? part->findPin(pin.pin) : nullptr;
+    return onBoard ? islandOfHole(onBoard->hole) : -1;
+}
+
+bool Connectivity::isHoleCut(Hole hole) const {
+    return board_->contains(hole) &&
+           (holeCut_[static_cast<std::size_t>(hole.row * board_->cols + hole.col)] & kHoleCutFlag);
+}
+
+bool Connectivity::joinsNext(Hole hole) const {
+    return board_->contains(hole) &&
+           !(holeCut_[static_cast<std::size_t>(hole.row * board_->cols + hole.col)] &
+             kNoJoinNextFlag);
+}
+
+std::vector<Island> Connectivity::islands() const {
+    std::vector<Island> result(static_cast<std::size_t>(islandCount_));
+    for (int i = 0; i < islandCount_; ++i) result[static_cast<std::size_t>(i)].id = i;
+    const int cols = board_->cols;
+    for (int i = 0; i < board_->holeCount(); ++i) {
+        result[static_cast<std::size_t>(islandOfNode_[static_cast<std::size_t>(i)])]
+            .holes.push_back(Hole{i / cols, i % cols});
+    }
+    for (const Part& part : board_->parts) {
+        for (const Pin& pin : part.pins) {
+            const int island = islandOfHole(pin.hole);
+            if (island >= 0) {
+                result[static_cast<std::size_t>(island)].pins.push_back(PinRef{part.ref, pin.name});
+            }
+        }
+    }
+    for (const auto& [lug, node] : pinNodes_) {
+        result[static_cast<std::size_t>(islandOfNode(node))].pins.push_back(lug);
+    }
+    for (Island& island : result) std::sort(island.pins.begin(), island.pins.end());
+    return result;
+}
+
+std::vector<std::vector<PinRef>> boardNets(const Board& board) {
+    const Connectivity connectivity(board);
+    std::vector<std::vector<PinRef>> byIsland(static_cast<std::size_t>(connectivity.islandCount()));
+    for (const Part& part : board.parts) {
+        for (const Pin& pin : part.pins) {
+            const int island = connectivity.islandOfHole(pin.hole);
+            if (island >= 0) byIsland[static_cast<std::size_t>(island)].push_back({part.ref, pin.name});
+        }
+    }
+    for (const OffboardPart& part : board.offboard) {
+        for (const std::string& lug : part.pins) {
+            const PinRef pin{part.ref, lug};
+            const int island = connectivity.islandOfPin(pin);
+            if (island >= 0) byIsland[static_cast<std::size_t>(island)].push_back(pin);
+        }
+    }
+    std::vector<std::vector<PinRef>> groups;
+    for (auto& pins : byIsland) {
+        if (pins.empty()) continue;
+        std::sort(pins.begin(), pins.end());
+        groups.push_back(std::move(pins));
+    }
+    std::sort(groups.begin(), groups.end());
+    return groups;
+}
+
+}  // namespace netcheck

@@ -1,0 +1,143 @@
+// Lead findings. Leads are counted per hole once (CheckContext), so these passes only look at the
+// leads themselves, never at every hole.
+#include "lead_findings.hpp"
+
+#include <algorithm>
+#include <cstdio>
+
+namespace netcheck {
+
+namespace {
+
+Finding holeFinding(std::string type, Severity severity, Hole hole, std::string message) {
+    Finding finding;
+    finding.type = std::move(type);
+    finding.severity = severity;
+    finding.hole = hole;
+    finding.holes = {hole};
+    finding.message = std::move(message);
+    return finding;
+}
+
+std::string plural(int count, const std::string& word) {
+    return std::to_string(count) + " " + word + (count == 1 ? "" : "s");
+}
+
+std::string millimetres(double value) {
+    char text[32];
+    std::snprintf(text, sizeof text, "%.1f", value);
+    return text;
+}
+
+}  // namespace
+
+void findSharedHoles(const CheckContext& context, std::vector<Finding>& errors) {
+    std::vector<const Lead*> crowded;
+    for (const Lead& lead : context.leads()) {
+        if (context.leadsIn(lead.hole) > 1) crowded.push_back(&lead);
+    }
+    std::stable_sort(crowded.begin(), crowded.end(),
+                     [](const Lead* a, const Lead* b) { return a->hole < b->hole; });
+    for (std::size_t i = 0; i < crowded.size();) {
+        std::size_t j = i;
+        std::string names;
+        for (; j < crowded.size() && crowded[j]->hole == crowded[i]->hole; ++j) {
+            names += (names.empty() ? "" : ", ") + context.leadName(*crowded[j]);
+        }
+        const Hole hole = context.holeAt(crowded[i]->hole);
+        errors.push_back(holeFinding("shared-hole", Severity::Error, hole,
+                                     holeName(hole) + " holds " +
+                                         plural(static_cast<int>(j - i), "lead") + ": " + names));
+        i = j;
+    }
+}
+
+void findLeadsOnCuts(const CheckContext& context, std::vector<Finding>& errors) {
+    std::vector<const Lead*> onCuts;
+    for (const Lead& lead : context.leads()) {
+        if (context.copper().isHoleCut(context.holeAt(lead.hole))) onCuts.push_back(&lead);
+    }
+    std::stable_sort(onCuts.begin(), onCuts.end(),
+                     [](const Lead* a, const Lead* b) { return a->hole < b->hole; });
+    for (const Lead* lead : onCuts) {
+        const Hole hole = context.holeAt(lead->hole);
+        errors.push_back(holeFinding("pin-on-cut", Severity::Error, hole,
+                                     context.leadName(*lead) + " is in " + holeName(hole) +
+                                         ", where a hole cut removed the copper"));
+    }
+}
+
+void findDanglingLeads(const CheckContext& context, const std::vector<char>* onlyIslands,
+                       std::vector<Finding>& warnings) {
+    const Board& board = context.board();
+    const Connectivity& copper = context.copper();
+    std::vector<int> pins(static_cast<std::size_t>(copper.islandCount()), 0);
+    auto islandAt = [&](int node) { return static_cast<std::size_t>(copper.islandOfNode(node)); };
+    for (const Lead& lead : context.leads()) {
+        // A link or wire end makes the island more than a lone lead.
+        pins[islandAt(lead.hole)] += lead.kind == Lead::Kind::PartPin ? 1 : 2;
+    }
+    for (std::size_t p = 0; p < board.offboard.size(); ++p) {
+        for (std::size_t k = 0; k < board.offboard[p].pins.size(); ++k) {
+            ++pins[islandAt(context.lugNode(static_cast<int>(p), static_cast<int>(k)))];
+        }
+    }
+    for (const Wire& wire : board.wires) {
+        for (const Endpoint* end : {&wire.from, &wire.to}) {
+            const int node = end->isHole() ? -1 : context.endpointNode(*end);
+            if (node >= 0) pins[islandAt(node)] += 2;
+        }
+    }
+    std::vector<const Lead*> lonely;
+    for (const Lead& lead : context.leads()) {
+        const std::size_t island = islandAt(lead.hole);
+        if (pins[island] != 1) continue;
+        if (onlyIslands != nullptr && !(*onlyIslands)[island]) continue;
+        lonely.push_back(&lead);
+    }
+    std::stable_sort(lonely.begin(), lonely.end(),
+                     [](const Lead* a, const Lead* b) { return a->hole < b->hole; });
+    for (const Lead* lead : lonely) {
+        const Hole hole = context.holeAt(lead->hole);
+        warnings.push_back(holeFinding("dangling-lead", Severity::Warning, hole,
+                                       context.leadName(*lead) + " in " + holeName(hole) +
+                                           " touches nothing else"));
+    }
+}
+
+void findTrim(const CheckContext& context, std::vector<Finding>& warnings) {
+    const Board& board = context.board();
+    if (context.leads().empty()) return;
+    int top = board.rows, bottom = -1, left = board.cols, right = -1;
+    for (const Lead& lead : context.leads()) {
+        const Hole hole = context.holeAt(lead.hole);
+        top = std::min(top, hole.row);
+        bottom = std::max(bottom, hole.row);
+        left = std::min(left, hole.col);
+        right = std::max(right, hole.col);
+    }
+    const int spare[4] = {top, board.rows - 1 - bottom, left, board.cols - 1 - right};
+    const char* const what[4] = {"row", "row", "column", "column"};
+    const char* const where[4] = {" at the top", " at the bottom", " at the left", " at the right"};
+    std::string parts;
+    for (int i = 0; i < 4; ++i) {
+        if (spare[i] == 0) continue;
+        parts += (parts.empty() ? "" : ", ") + plural(spare[i], what[i]) + where[i];
+    }
+    if (parts.empty()) return;
+    const std::size_t lastComma = parts.rfind(", ");
+    if (lastComma != std::string::npos) parts.replace(lastComma, 2, " and ");
+    const int rows = bottom - top + 1;
+    const int cols = right - left + 1;
+    Finding finding;
+    finding.type = "trim";
+    finding.severity = Severity::Warning;
+    finding.holes = {Hole{top, left}, Hole{bottom, right}};
+    finding.message = "the board could lose " + parts + ": " + std::to_string(rows) + "x" +
+                      std::to_string(cols) + " holes (" + holeName(Hole{top, left}) + " to " +
+                      holeName(Hole{bottom, right}) + "), " + millimetres(cols * board.pitchMm) +
+                      " x " + millimetres(rows * board.pitchMm) + " mm";
+    warnings.push_back(std::move(finding));
+}
+
+}  // namespace netcheck

@@ -1,0 +1,236 @@
+// Orienting parts against the copper. The score of an orientation is the number of pins of other
+// parts that the copper already joins to each of the part's pins and that belong to the same
+// intended net: the way round that agrees best with the rest of the board is the one meant.
+#include "part_orientation.hpp"
+
+#include <algorithm>
+#include <array>
+#include <cstdint>
+#include <unordered_map>
+
+#include "part_kinds.hpp"
+
+namespace netcheck {
+
+namespace {
+
+enum class Freedom { Fixed, EndForEnd, PotEnds, Polarised2, Polarised3 };
+
+Freedom freedomOf(const Board& board, const PartUse& use) {
+    if (!use.found() || !use.unknownPins.empty()) return Freedom::Fixed;
+    const std::string& kindName = use.kind(board);
+    const PartKind* kind = findPartKind(kindName);
+    if (kind == nullptr) return Freedom::Fixed;  // unknown kinds match pin names exactly
+    if (kindName == "pot" || kindName == "trimmer") {
+        const bool hasLugs = use.findPin(board, "1") >= 0 && use.findPin(board, "2") >= 0 &&
+                             use.findPin(board, "3") >= 0;
+        return hasLugs ? Freedom::PotEnds : Freedom::Fixed;
+    }
+    if (use.offboard) return Freedom::Fixed;
+    if (use.pinCount() == 2) return kind->polarised ? Freedom::Polarised2 : Freedom::EndForEnd;
+    if (kind->polarised && use.pinCount() == 3 && kind->pins.size() == 3) {
+        return Freedom::Polarised3;
+    }
+    return Freedom::Fixed;
+}
+
+// How many pins of each intended net sit in each island.
+class NetCounts {
+public:
+    NetCounts(const Connectivity& copper, const std::vector<PartUse>& uses, int netCount)
+        : copper_(copper), totals_(static_cast<std::size_t>(netCount), 0) {
+        for (const PartUse& use : uses) add(use, +1);
+    }
+
+    void add(const PartUse& use, int delta) {
+        for (int k = 0; k < use.pinCount(); ++k) {
+            const int net = use.net[static_cast<std::size_t>(k)];
+            if (net < 0) continue;
+            counts_[key(net, islandOf(use, k))] += delta;
+            totals_[static_cast<std::size_t>(net)] += delta;
+        }
+    }
+
+    int at(const PartUse& use, int pin) const {
+        const int net = use.net[static_cast<std::size_t>(pin)];
+        if (net < 0) return 0;
+        auto it = counts_.find(key(net, islandOf(use, pin)));
+        return it == counts_.end() ? 0 : it->second;
+    }
+
+    /// Agreement of the part as presently oriented (its own pins must have been removed).
+    int score(const PartUse& use) const {
+        int total = 0;
+        for (int k = 0; k < use.pinCount(); ++k) total += at(use, k);
+        return total;
+    }
+
+    int total(int net) const { return net < 0 ? 0 : totals_[static_cast<std::size_t>(net)]; }
+
+private:
+    int islandOf(const PartUse& use, int pin) const {
+        return copper_.islandOfNode(use.nodes[static_cast<std::size_t>(pin)]);
+    }
+    static std::uint64_t key(int net, int island) {
+        return (static_cast<std::uint64_t>(static_cast<std::uint32_t>(net)) << 32) |
+               static_cast<std::uint32_t>(island);
+    }
+    const Connectivity& copper_;
+    std::unordered_map<std::uint64_t, int> counts_;
+    std::vector<int> totals_;
+};
+
+// "Clearly better": the other way round explains at least two joins and more than twice as many
+// as the placement does.
+bool clearlyBetter(int other, int placed) { return other >= 2 && other > 2 * placed; }
+
+std::string partLabel(const Board& board, const PartUse& use) {
+    return std::string(use.ref) + " (" + use.kind(board) + ")";
+}
+
+std::vector<Hole> partHoles(const CheckContext& context, const PartUse& use) {
+    std::vector<Hole> holes;
+    for (int node : use.nodes) {
+        if (context.isHoleNode(node)) holes.push_back(context.holeAt(node));
+    }
+    return holes;
+}
+
+Finding partFinding(std::string type, Severity severity, const CheckContext& context,
+                    const PartUse& use, std::string message) {
+    Finding finding;
+    finding.type = std::move(type);
+    finding.severity = severity;
+    finding.ref = std::string(use.ref);
+    finding.message = std::move(message);
+    finding.holes = partHoles(context, use);
+    return finding;
+}
+
+void chooseEndForEnd(PartUse& use, NetCounts& counts) {
+    counts.add(use, -1);
+    const int placed = counts.score(use);
+    use.swapPins(0, 1);
+    if (counts.score(use) <= placed) use.swapPins(0, 1);  // a tie keeps the part as written
+    counts.add(use, +1);
+}
+
+void checkPot(const CheckContext& context, PartUse& use, NetCounts& counts,
+              const std::vector<std::string>& netNames, std::vector<Finding>& warnings) {
+    const Board& board = context.board();
+    const int one = use.findPin(board, "1");
+    const int wiper = use.findPin(board, "2");
+    const int three = use.findPin(board, "3");
+    counts.add(use, -1);
+    const int placed = counts.score(use);
+    const int wiperNet = use.net[static_cast<std::size_t>(wiper)];
+    const bool wiperRight = counts.at(use, wiper) > 0 || counts.total(wiperNet) == 0;
+    use.swapPins(one, three);
+    const int swapped = counts.score(use);
+    if (swapped > placed && wiperRight) {
+        const int net1 = use.net[static_cast<std::size_t>(one)];
+        const int net3 = use.net[static_cast<std::size_t>(three)];
+        auto netLabel = [&](int net) { return net < 0 ? std::string("nothing") : "net " + netNames[static_cast<std::size_t>(net)]; };
+        warnings.push_back(partFinding(
+            "pot-reversed", Severity::Warning, context, use,
+            partLabel(board, use) + " end lugs 1 and 3 are swapped against the circuit: " +
+                context.nodeName(use.nodes[static_cast<std::size_t>(one)]) + " is on " +
+                netLabel(net1) + ", " + context.nodeName(use.nodes[static_cast<std::size_t>(three)]) +
+                " on " + netLabel(net3) + " (the control works backwards)"));
+    } else {
+        use.swapPins(one, three);
+    }
+    counts.add(use, +1);
+}
+
+void checkPolarised2(const CheckContext& context, PartUse& use, NetCounts& counts,
+                     const std::vector<std::string>& netNames, std::vector<Finding>& errors) {
+    counts.add(use, -1);
+    const int placed = counts.score(use);
+    use.swapPins(0, 1);
+    const int swapped = counts.score(use);
+    const int netAtFirst = use.net[0];
+    use.swapPins(0, 1);
+    counts.add(use, +1);
+    if (!clearlyBetter(swapped, placed)) return;
+    const Board& board = context.board();
+    const std::string carries = netAtFirst < 0
+                                    ? "where the other lead belongs"
+                                    : "which carries net " +
+                                          netNames[static_cast<std::size_t>(netAtFirst)];
+    errors.push_back(partFinding("reversed-part", Severity::Error, context, use,
+                                 partLabel(board, use) + " looks reversed: " +
+                                     use.pinName(board, 0) + " is in " +
+                                     context.nodeName(use.nodes[0]) + ", " + carries));
+}
+
+std::string pinList(const CheckContext& context, const PartUse& use,
+                    const std::array<int, 3>& order) {
+    std::string text;
+    for (int k = 0; k < 3; ++k) {
+        if (k > 0) text += ", ";
+        text += use.pinName(context.board(), order[static_cast<std::size_t>(k)]) + " in " +
+                context.nodeName(use.nodes[static_cast<std::size_t>(k)]);
+    }
+    return text;
+}
+
+void checkPolarised3(const CheckContext& context, PartUse& use, NetCounts& counts,
+                     std::vector<Finding>& errors) {
+    counts.add(use, -1);
+    const std::vector<int> placedNets = use.net;
+    const int placed = counts.score(use);
+    std::array<int, 3> order{0, 1, 2};
+    std::array<int, 3> best = order;
+    int bestScore = placed;
+    while (std::next_permutation(order.begin(), order.end())) {
+        for (std::size_t k = 0; k < 3; ++k) use.net[k] = placedNets[static_cast<std::size_t>(order[k])];
+        const int score = counts.score(use);
+        if (score > bestScore) {
+            bestScore = score;
+            best = order;
+        }
+    }
+    use.net = placedNets;
+    counts.add(use, +1);
+    if (!clearlyBetter(bestScore, placed)) return;
+    const std::array<int, 3> asPlaced{0, 1, 2};
+    errors.push_back(partFinding("reversed-part", Severity::Error, context, use,
+                                 partLabel(context.board(), use) +
+                                     " pins look out of order: the copper fits " +
+                                     pinList(context, use, best) + " (placed: " +
+                                     pinList(context, use, asPlaced) + ")"));
+}
+
+}  // namespace
+
+void orientParts(const CheckContext& context, std::vector<PartUse>& uses,
+                 const std::vector<std::string>& netNames, std::vector<Finding>& errors,
+                 std::vector<Finding>& warnings) {
+    const Board& board = context.board();
+    std::vector<Freedom> freedom;
+    freedom.reserve(uses.size());
+    bool any = false;
+    for (const PartUse& use : uses) {
+        freedom.push_back(freedomOf(board, use));
+        any = any || freedom.back() != Freedom::Fixed;
+    }
+    if (!any) return;
+    NetCounts counts(context.copper(), uses, static_cast<int>(netNames.size()));
+    // Two rounds, so a part flipped in the first round is seen by its neighbours in the second.
+    for (int round = 0; round < 2; ++round) {
+        for (std::size_t u = 0; u < uses.size(); ++u) {
+            if (freedom[u] == Freedom::EndForEnd) chooseEndForEnd(uses[u], counts);
+        }
+    }
+    for (std::size_t u = 0; u < uses.size(); ++u) {
+        switch (freedom[u]) {
+            case Freedom::PotEnds: checkPot(context, uses[u], counts, netNames, warnings); break;
+            case Freedom::Polarised2: checkPolarised2(context, uses[u], counts, netNames, errors); break;
+            case Freedom::Polarised3: checkPolarised3(context, uses[u], counts, errors); break;
+            default: break;
+        }
+    }
+}
+
+}  // namespace netcheck

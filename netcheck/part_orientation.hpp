@@ -1,0 +1,20 @@
+// Which way round the parts sit: end-for-end parts and pots get the orientation that agrees best
+// with the copper; polarised parts whose other orientation would agree clearly better are reported
+// as reversed (private to the checker).
+#pragma once
+
+#include <string>
+#include <vector>
+
+#include "check_context.hpp"
+#include "check_report.hpp"
+#include "part_use.hpp"
+
+namespace netcheck {
+
+/// Orients `uses` in place and appends reversed-part errors and pot-reversed warnings.
+void orientParts(const CheckContext& context, std::vector<PartUse>& uses,
+                 const std::vector<std::string>& netNames, std::vector<Finding>& errors,
+                 std::vector<Finding>& warnings);
+
+}  // namespace netcheck
