@@ -1,0 +1,111 @@
+// Deck -> scopes -> expanded parts -> Circuit. Nothing reaches the result unless the whole deck
+// was read without error.
+#include "spice_import.hpp"
+
+#include <algorithm>
+#include <cctype>
+
+#include "spice_deck.hpp"
+#include "spice_elements.hpp"
+#include "spice_subckt.hpp"
+
+namespace netcheck {
+
+namespace {
+
+using spice::DeckError;
+using spice::ElementPart;
+
+std::set<std::string> modelNames(const spice::Deck& deck) {
+    std::set<std::string> names;
+    for (const spice::DeckLine& line : deck.lines) {
+        if (line.type == spice::DeckLine::Type::Command && line.fields.size() > 1 &&
+            spice::lower(line.fields[0].text) == ".model") {
+            names.insert(spice::lower(line.fields[1].text));
+        }
+    }
+    return names;
+}
+
+std::string netName(const std::string& key, const spice::NodeNames& names,
+                    const std::map<std::string, std::string>& overrides,
+                    const SpiceOptions& options) {
+    if (const auto o = overrides.find(key); o != overrides.end()) return o->second;
+    if (key == "0") return options.groundName;
+    return names.shown.at(key);
+}
+
+Circuit buildCircuit(const std::vector<ElementPart>& parts, const spice::NodeNames& names,
+                     const std::map<std::string, std::string>& overrides,
+                     const SpiceOptions& options) {
+    Circuit circuit;
+    std::map<std::string, int> refLines;
+    std::map<std::string, std::string> keyOfNet;  // net name -> node key, to catch clashes
+    for (const ElementPart& part : parts) {
+        if (!refLines.emplace(part.ref, part.line).second) {
+            throw DeckError{part.line, "part ref " + part.ref + " (from " + part.name +
+                                           ") is used twice (also line " +
+                                           std::to_string(refLines.at(part.ref)) + ")"};
+        }
+        circuit.parts[part.ref] = CircuitPart{part.kind, part.value, part.pins, {}};
+        for (std::size_t i = 0; i < part.pins.size(); ++i) {
+            const std::string net = netName(part.nodes[i], names, overrides, options);
+            if (net.empty()) continue;  // `*@net NODE` without a name: the pin is left unconnected
+            const auto [at, added] = keyOfNet.emplace(net, part.nodes[i]);
+            if (!added && at->second != part.nodes[i]) {
+                throw DeckError{part.line, "two different nodes are both named " + net +
+                                               " (check *@net lines and the ground name)"};
+            }
+            circuit.nets[net].push_back(PinRef{part.ref, part.pins[i]});
+        }
+    }
+    for (auto& [name, pins] : circuit.nets) std::sort(pins.begin(), pins.end());
+    return circuit;
+}
+
+}  // namespace
+
+ReadResult<Circuit> importSpice(std::string_view text, std::string_view fileName,
+                                const SpiceOptions& options, const ReadLimits& limits) {
+    ReadResult<Circuit> result;
+    spice::ReadContext context{std::string(fileName), &result.notes, {}};
+    try {
+        if (text.size() > limits.maxBytes) {
+            throw DeckError{0, "the deck is larger than " + std::to_string(limits.maxBytes) +
+                                   " bytes"};
+        }
+        const spice::Deck deck = spice::readDeck(text);
+        for (const auto& [line, remark] : deck.notes) context.note(line, remark);
+        context.modelNames = modelNames(deck);
+        const spice::DeckScopes scopes = spice::collectScopes(
+            deck, context, options.sources == SpiceOptions::Sources::Offboard);
+        spice::checkCalls(scopes, limits);
+        spice::NodeNames names;
+        std::map<std::string, std::string> overrides;
+        const std::vector<ElementPart> parts =
+            spice::expandTop(scopes, options.flatten, context, limits, names, overrides);
+        if (parts.empty()) throw DeckError{0, "the deck has no parts (is the first line the title?)"};
+        result.value = buildCircuit(parts, names, overrides, options);
+    } catch (const DeckError& e) {
+        result.value.reset();
+        result.error = FileError{std::string(fileName), e.line, 0, "", e.message};
+    }
+    return result;
+}
+
+bool looksLikeSpiceDeck(std::string_view text, std::string_view fileName) {
+    const std::size_t dot = fileName.rfind('.');
+    if (dot != std::string_view::npos) {
+        const std::string ext = spice::lower(fileName.substr(dot));
+        if (ext == ".json") return false;
+        for (const char* deck : {".cir", ".sp", ".spice", ".net", ".ckt"}) {
+            if (ext == deck) return true;
+        }
+    }
+    const auto first = std::find_if(text.begin(), text.end(), [](char c) {
+        return std::isspace(static_cast<unsigned char>(c)) == 0;
+    });
+    return first != text.end() && *first != '{';
+}
+
+}  // namespace netcheck
