@@ -28,7 +28,9 @@
 //   two pins without splitting any net of the island (a hole cut in a free hole near the middle of
 //   the path preferred, else a cut between two holes), or "no single cut separates them".
 // - open: one error per net whose pins lie in two or more islands; pieces sorted; links through
-//   the nearest free holes, joining pieces Prim-style.
+//   the nearest free holes, joining pieces Prim-style, found on the board with the shorts'
+//   suggested cuts applied; when removing one existing cut alone mends the net without a short
+//   (a cut made in the wrong hole), that is the fix instead.
 // - shared-hole (two or more leads in one hole: part pins, link ends and wire ends all count) and
 //   pin-on-cut (a lead in a hole-cut hole) are errors with or without a circuit.
 // - Warnings: value-differs, pot-reversed, dangling-lead (an island with exactly one pin and no
@@ -80,15 +82,25 @@ void findShorts(const CheckContext& context, const std::vector<PlacedNet>& nets,
 }
 
 void findOpens(const CheckContext& context, const std::vector<PlacedNet>& nets,
-               std::vector<Finding>& errors) {
+               const std::vector<Finding>& shorts, std::vector<Finding>& errors) {
     const Connectivity& copper = context.copper();
+    std::vector<const PlacedNet*> open;
     for (const PlacedNet& net : nets) {
         if (net.pins.empty()) continue;
         const int first = copper.islandOfNode(net.pins.front().node);
         const bool split = std::any_of(net.pins.begin(), net.pins.end(), [&](const NetPin& pin) {
             return copper.islandOfNode(pin.node) != first;
         });
-        if (split) errors.push_back(locateOpen(context, net));
+        if (split) open.push_back(&net);
+    }
+    if (open.empty()) return;
+    Board repaired = context.board();
+    for (const Finding& finding : shorts) {
+        if (finding.suggestedCut) repaired.cuts.push_back(*finding.suggestedCut);
+    }
+    const Connectivity repairedCopper(repaired);
+    for (const PlacedNet* net : open) {
+        errors.push_back(locateOpen(context, *net, RepairedBoard{&repaired, &repairedCopper, &nets}));
     }
 }
 
@@ -156,8 +168,10 @@ CheckReport check(const Board& board, const Circuit* circuit) {
         CircuitMatch match = matchCircuit(context, *circuit);
         report.errors = std::move(match.errors);
         report.warnings = std::move(match.warnings);
-        findShorts(context, match.nets, report.errors);
-        findOpens(context, match.nets, report.errors);
+        std::vector<Finding> shorts;
+        findShorts(context, match.nets, shorts);
+        report.errors.insert(report.errors.end(), shorts.begin(), shorts.end());
+        findOpens(context, match.nets, shorts, report.errors);
         danglingIslands = islandsWithNetPins(context, match.nets);
     }
     findSharedHoles(context, report.errors);

@@ -1,15 +1,21 @@
-// Open location. Pieces are the net's pins grouped by island. Links are chosen Prim-style: start
-// from the first piece and repeatedly join the nearest piece not yet joined, through the nearest
-// pair of free holes (copper present, nothing soldered in) of the two islands.
+// Open location. Pieces are the net's pins grouped by island. First, one existing cut whose removal
+// mends the net without a new short is looked for (a cut made in the wrong hole). Otherwise links
+// are chosen Prim-style: start from the first piece and repeatedly join the nearest piece not yet
+// joined, through the nearest pair of free holes (copper present, nothing soldered in) of the two
+// islands, on the board with the shorts' suggested cuts applied.
 #include "open_locator.hpp"
 
 #include <algorithm>
+#include <cstdlib>
 #include <limits>
+#include <optional>
 #include <map>
 
 namespace netcheck {
 
 namespace {
+
+constexpr std::size_t kMaxCutTrials = 16;
 
 struct Piece {
     int island = 0;
@@ -37,14 +43,70 @@ std::vector<Piece> splitIntoPieces(const CheckContext& context, const PlacedNet&
     return pieces;
 }
 
-void collectFreeHoles(const CheckContext& context, std::vector<Piece>& pieces) {
+void collectFreeHoles(const CheckContext& context, const Connectivity& copper,
+                      std::vector<Piece>& pieces) {
     std::map<int, Piece*> byIsland;
-    for (Piece& piece : pieces) byIsland[piece.island] = &piece;
+    for (Piece& piece : pieces) byIsland[copper.islandOfNode(piece.pins.front()->node)] = &piece;
     const int holes = context.board().holeCount();
     for (int hole = 0; hole < holes; ++hole) {
-        auto it = byIsland.find(context.copper().islandOfNode(hole));
-        if (it != byIsland.end() && context.isFree(hole)) it->second->freeHoles.push_back(hole);
+        auto it = byIsland.find(copper.islandOfNode(hole));
+        const bool free = context.leadsIn(hole) == 0 && !copper.isHoleCut(context.holeAt(hole));
+        if (it != byIsland.end() && free) it->second->freeHoles.push_back(hole);
     }
+}
+
+bool isWhole(const Connectivity& copper, const PlacedNet& net) {
+    return std::all_of(net.pins.begin(), net.pins.end(), [&](const NetPin& pin) {
+        return copper.islandOfNode(pin.node) == copper.islandOfNode(net.pins.front().node);
+    });
+}
+
+bool hasShort(const Connectivity& copper, const std::vector<PlacedNet>& nets) {
+    std::vector<int> firstNet(static_cast<std::size_t>(copper.islandCount()), -1);
+    for (std::size_t n = 0; n < nets.size(); ++n) {
+        for (const NetPin& pin : nets[n].pins) {
+            int& first = firstNet[static_cast<std::size_t>(copper.islandOfNode(pin.node))];
+            if (first >= 0 && first != static_cast<int>(n)) return true;
+            first = static_cast<int>(n);
+        }
+    }
+    return false;
+}
+
+// Existing cuts on the rows of the net's pins, nearest to a pin first.
+std::vector<std::size_t> cutsNearNet(const CheckContext& context, const Board& board,
+                                     const PlacedNet& net) {
+    std::vector<std::pair<int, std::size_t>> near;
+    for (std::size_t c = 0; c < board.cuts.size(); ++c) {
+        int best = std::numeric_limits<int>::max();
+        for (const NetPin& pin : net.pins) {
+            if (!context.isHoleNode(pin.node)) continue;
+            const Hole hole = context.holeAt(pin.node);
+            if (hole.row == board.cuts[c].hole.row) {
+                best = std::min(best, std::abs(hole.col - board.cuts[c].hole.col));
+            }
+        }
+        if (best != std::numeric_limits<int>::max()) near.push_back({best, c});
+    }
+    std::stable_sort(near.begin(), near.end(),
+                     [](const auto& a, const auto& b) { return a.first < b.first; });
+    std::vector<std::size_t> order;
+    for (std::size_t i = 0; i < near.size() && i < kMaxCutTrials; ++i) order.push_back(near[i].second);
+    return order;
+}
+
+// An existing cut whose removal alone mends the net and shorts nothing.
+std::optional<Cut> misplacedCut(const CheckContext& context, const PlacedNet& net,
+                                const RepairedBoard& repaired) {
+    Board trial = *repaired.board;
+    for (std::size_t c : cutsNearNet(context, trial, net)) {
+        const Cut cut = trial.cuts[c];
+        trial.cuts.erase(trial.cuts.begin() + static_cast<std::ptrdiff_t>(c));
+        const Connectivity copper(trial);
+        trial.cuts.insert(trial.cuts.begin() + static_cast<std::ptrdiff_t>(c), cut);
+        if (isWhole(copper, net) && !hasShort(copper, *repaired.nets)) return cut;
+    }
+    return std::nullopt;
 }
 
 struct Joint {
@@ -95,8 +157,8 @@ std::string piecesText(const CheckContext& context, const std::vector<Piece>& pi
         if (!text.empty()) text += " | ";
         std::string pins;
         for (const NetPin* pin : piece.pins) {
-            pins += (pins.empty() ? "" : ", ") + pin->pin.name() + " (" +
-                    context.nodeName(pin->node) + ")";
+            pins += (pins.empty() ? "" : ", ") + pin->pin.name();
+            if (context.isHoleNode(pin->node)) pins += " (" + context.nodeName(pin->node) + ")";
         }
         text += pins;
     }
@@ -105,9 +167,8 @@ std::string piecesText(const CheckContext& context, const std::vector<Piece>& pi
 
 }  // namespace
 
-Finding locateOpen(const CheckContext& context, const PlacedNet& net) {
+Finding locateOpen(const CheckContext& context, const PlacedNet& net, const RepairedBoard& repaired) {
     std::vector<Piece> pieces = splitIntoPieces(context, net);
-    collectFreeHoles(context, pieces);
     Finding finding;
     finding.type = "open";
     finding.net = net.name;
@@ -120,6 +181,11 @@ Finding locateOpen(const CheckContext& context, const PlacedNet& net) {
     }
     finding.message = net.name + " is in " + std::to_string(pieces.size()) +
                       " pieces: " + piecesText(context, pieces);
+    if (const std::optional<Cut> cut = misplacedCut(context, net, repaired)) {
+        finding.fix = "remove the cut at " + cutName(*cut);
+        return finding;
+    }
+    collectFreeHoles(context, *repaired.copper, pieces);
     finding.suggestedLinks = suggestLinks(context, pieces);
     for (const Link& link : finding.suggestedLinks) {
         finding.fix += (finding.fix.empty() ? "link " : ", link ") + holeName(link.from) + " to " +
@@ -127,7 +193,7 @@ Finding locateOpen(const CheckContext& context, const PlacedNet& net) {
     }
     if (finding.suggestedLinks.size() + 1 < pieces.size()) {
         finding.fix += std::string(finding.fix.empty() ? "" : "; ") +
-                       "wire the pieces without free holes";
+                       "no free hole to link some pieces: wire them";
     }
     return finding;
 }

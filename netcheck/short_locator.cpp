@@ -155,7 +155,9 @@ std::optional<Cut> suggestCut(const CheckContext& context, const std::vector<int
 }
 
 std::string pinText(const CheckContext& context, const PinAt& pin) {
-    return pin.pin->pin.name() + " (" + context.nodeName(pin.pin->node) + ")";
+    const std::string name = pin.pin->pin.name();
+    return context.isHoleNode(pin.pin->node) ? name + " (" + context.nodeName(pin.pin->node) + ")"
+                                             : name + " (off board)";
 }
 
 const PinAt& pinOfNet(const std::vector<PinAt>& pins, bool firstNet) {
