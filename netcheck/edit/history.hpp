@@ -1,6 +1,7 @@
 // Undo/redo stack of commands, and the "unsaved changes" state derived from it.
 #pragma once
 
+#include <cstddef>
 #include <memory>
 #include <string>
 #include <vector>
@@ -21,6 +22,8 @@ public:
     bool redo(Board& board);
     bool canUndo() const { return cursor_ > 0; }
     bool canRedo() const { return cursor_ < done_.size(); }
+    /// Number of steps undo can take back (a merged drag counts once).
+    std::size_t depth() const { return cursor_; }
     std::string undoLabel() const;
     std::string redoLabel() const;
     /// Holes touched by the command last undone or redone.
