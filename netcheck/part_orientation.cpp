@@ -107,11 +107,59 @@ Finding partFinding(std::string type, Severity severity, const CheckContext& con
     return finding;
 }
 
-void chooseEndForEnd(PartUse& use, NetCounts& counts) {
+// Pins of end-for-end parts counted under both of their nets: a neighbour that could be turned
+// round still says which nets meet in an island. Used only to break ties.
+class FlexibleCounts {
+public:
+    FlexibleCounts(const Connectivity& copper, const std::vector<PartUse>& uses,
+                   const std::vector<Freedom>& freedom)
+        : copper_(copper) {
+        for (std::size_t u = 0; u < uses.size(); ++u) {
+            if (freedom[u] != Freedom::EndForEnd) continue;
+            for (int k = 0; k < 2; ++k) {
+                for (int net : uses[u].net) {
+                    if (net >= 0) ++counts_[key(net, islandOf(uses[u], k))];
+                }
+            }
+        }
+    }
+
+    /// Agreement of `use` as oriented, without its own contribution.
+    int score(const PartUse& use) const {
+        int total = 0;
+        for (int k = 0; k < 2; ++k) {
+            const int net = use.net[static_cast<std::size_t>(k)];
+            if (net < 0) continue;
+            auto it = counts_.find(key(net, islandOf(use, k)));
+            if (it == counts_.end()) continue;
+            int own = 0;
+            for (int j = 0; j < 2; ++j) own += islandOf(use, j) == islandOf(use, k) ? 1 : 0;
+            total += it->second - own;
+        }
+        return total;
+    }
+
+private:
+    int islandOf(const PartUse& use, int pin) const {
+        return copper_.islandOfNode(use.nodes[static_cast<std::size_t>(pin)]);
+    }
+    static std::uint64_t key(int net, int island) {
+        return (static_cast<std::uint64_t>(static_cast<std::uint32_t>(net)) << 32) |
+               static_cast<std::uint32_t>(island);
+    }
+    const Connectivity& copper_;
+    std::unordered_map<std::uint64_t, int> counts_;
+};
+
+void chooseEndForEnd(PartUse& use, NetCounts& counts, const FlexibleCounts& flexible) {
     counts.add(use, -1);
     const int placed = counts.score(use);
+    const int placedFlexible = flexible.score(use);
     use.swapPins(0, 1);
-    if (counts.score(use) <= placed) use.swapPins(0, 1);  // a tie keeps the part as written
+    const int swapped = counts.score(use);
+    const bool better = swapped > placed ||
+                        (swapped == placed && flexible.score(use) > placedFlexible);
+    if (!better) use.swapPins(0, 1);  // a full tie keeps the part as written
     counts.add(use, +1);
 }
 
@@ -217,10 +265,11 @@ void orientParts(const CheckContext& context, std::vector<PartUse>& uses,
     }
     if (!any) return;
     NetCounts counts(context.copper(), uses, static_cast<int>(netNames.size()));
+    const FlexibleCounts flexible(context.copper(), uses, freedom);
     // Two rounds, so a part flipped in the first round is seen by its neighbours in the second.
     for (int round = 0; round < 2; ++round) {
         for (std::size_t u = 0; u < uses.size(); ++u) {
-            if (freedom[u] == Freedom::EndForEnd) chooseEndForEnd(uses[u], counts);
+            if (freedom[u] == Freedom::EndForEnd) chooseEndForEnd(uses[u], counts, flexible);
         }
     }
     for (std::size_t u = 0; u < uses.size(); ++u) {
