@@ -71,12 +71,12 @@ std::string temporaryName(const fs::path& target) {
 }
 
 // Creates the temporary file with the mode a new file would get (or the old file's mode).
-int createTemporary(const fs::path& target, std::string& tempPath, std::optional<mode_t> mode) {
+int createTemporary(const fs::path& target, std::string& tempPath, const struct stat* old) {
     for (int attempt = 0; attempt < 8; ++attempt) {
         tempPath = temporaryName(target);
         const int fd = ::open(tempPath.c_str(), O_WRONLY | O_CREAT | O_EXCL | O_CLOEXEC, 0666);
         if (fd >= 0) {
-            if (mode) (void)::fchmod(fd, *mode);
+            if (old != nullptr) (void)::fchmod(fd, old->st_mode & 07777);
             return fd;
         }
         if (errno != EEXIST) return -errno;
@@ -140,9 +140,7 @@ std::optional<std::string> saveFileAtomically(const std::string& path, std::stri
     if (exists && !S_ISREG(old.st_mode)) return "cannot write " + path + ": it is not a plain file";
 
     std::string tempPath;
-    const std::optional<mode_t> mode =
-        exists ? std::optional<mode_t>(old.st_mode & 07777) : std::nullopt;
-    const int fd = createTemporary(target, tempPath, mode);
+    const int fd = createTemporary(target, tempPath, exists ? &old : nullptr);
     if (fd < 0) return failure("cannot write", path, -fd);
     Descriptor file(fd);
 
