@@ -5,7 +5,9 @@
 
 #include <algorithm>
 #include <cctype>
+#include <cmath>
 #include <cstdio>
+#include <utility>
 
 #include "netcheck/part_kinds.hpp"
 #include "netcheck/value.hpp"
@@ -215,7 +217,24 @@ std::vector<std::string> pinsForKind(const std::vector<std::string>& pins, std::
 }
 
 std::string canonicalValue(double magnitude, std::string_view kind) {
-    return formatIec(magnitude, kind != "resistor" && kind != "pot");
+    const auto readsBack = [magnitude](const std::string& text) {
+        const auto q = parseQuantity(text);
+        return q && std::fabs(q->magnitude - magnitude) <= 1e-9 * std::fabs(magnitude);
+    };
+    const std::string iec = formatIec(magnitude, kind != "resistor" && kind != "pot");
+    if (readsBack(iec)) return iec;
+    // Outside the IEC code's range: board-file SI prefixes (M mega, m milli), then plain digits.
+    static constexpr std::pair<const char*, double> kPrefixes[] = {
+        {"T", 1e12}, {"G", 1e9}, {"M", 1e6}, {"k", 1e3}, {"", 1},
+        {"m", 1e-3}, {"u", 1e-6}, {"n", 1e-9}, {"p", 1e-12}};
+    for (const auto& [prefix, scale] : kPrefixes) {
+        char text[48];
+        std::snprintf(text, sizeof text, "%.12g%s", magnitude / scale, prefix);
+        if (readsBack(text)) return text;
+    }
+    char text[48];
+    std::snprintf(text, sizeof text, "%.12g", magnitude);
+    return text;
 }
 
 std::string refForName(std::string_view name) {

@@ -50,7 +50,7 @@ char letterFor(const CircuitPart& part, std::size_t pinCount) {
     if ((kind == "diode" || kind == "led" || kind == "zener") && pinCount == 2) return 'D';
     if (kind == "bjt" && (pinCount == 3 || pinCount == 4)) return 'Q';
     if (kind == "jfet" && pinCount == 3) return 'J';
-    if (kind == "mosfet" && pinCount == 3) return 'M';
+    if (kind == "mosfet" && (pinCount == 3 || pinCount == 4)) return 'M';
     return 'X';
 }
 
@@ -218,7 +218,9 @@ private:
         std::vector<std::string> nodes;
         for (const std::string& pin : declared.pins) nodes.push_back(nodeOf(ref, pin));
         if (writePot(ref, declared, declared.pins, nodes)) return;
-        const char letter = letterFor(declared, declared.pins.size());
+        char letter = letterFor(declared, declared.pins.size());
+        // The importer reads a bulk joined to the source as a three-lead MOSFET.
+        if (letter == 'M' && nodes.size() == 4 && nodes[3] == nodes[2]) letter = 'X';
         const std::string name = elementName(letter, ref);
         std::optional<double> magnitude;
         std::string readValue;
@@ -236,7 +238,7 @@ private:
             line += " " + readValue;
         } else {
             readValue = modelName(letter, part.value);
-            if (letter == 'M') line += " " + nodes[2];  // bulk tied to source: a three-lead part
+            if (letter == 'M' && nodes.size() == 3) line += " " + nodes[2];  // bulk on the source
             line += " " + readValue;
         }
         body_.push_back(line);
