@@ -27,8 +27,13 @@ std::vector<ElementPart>::iterator findPart(std::vector<ElementPart>& parts, con
     const auto found = std::find_if(parts.begin(), parts.end(), [&](const ElementPart& p) {
         return lower(p.name) == lower(name);
     });
-    if (found == parts.end()) fail(line, "no element " + name + " here");
-    return found;
+    if (found != parts.end()) return found;
+    // Or the ref the element reads as (XU1 -> U1).
+    const auto byRef = std::find_if(parts.begin(), parts.end(), [&](const ElementPart& p) {
+        return lower(p.ref) == lower(name);
+    });
+    if (byRef != parts.end()) return byRef;
+    fail(line, "no element " + name + " here");
 }
 
 /// Text after the first word of an annotation's argument text ("R1 4.7 kOhm" -> "4.7 kOhm").
