@@ -1,6 +1,8 @@
 // A tiny JSON scanner: just enough to walk a valid text to the value at a path.
 #include "json_locator.hpp"
 
+#include <set>
+
 #include <nlohmann/json.hpp>
 
 namespace netcheck {
@@ -18,6 +20,23 @@ bool isPlainKey(std::string_view key) {
 }
 
 bool isContinuationByte(char c) { return (static_cast<unsigned char>(c) & 0xC0) == 0x80; }
+
+std::string decodeKey(std::string_view raw) {
+    if (raw.find('\\') == std::string_view::npos) return std::string(raw);
+    try {
+        return nlohmann::json::parse("\"" + std::string(raw) + "\"").get<std::string>();
+    } catch (const nlohmann::json::exception&) {
+        return std::string(raw);
+    }
+}
+
+// End of the string token starting at `start` (the opening quote); returns one past the closing
+// quote.
+std::size_t stringEnd(std::string_view text, std::size_t start) {
+    std::size_t pos = start + 1;
+    while (pos < text.size() && text[pos] != '"') pos += text[pos] == '\\' ? 2 : 1;
+    return std::min(pos + 1, text.size());
+}
 
 /// Walks one JSON value at a time. The text is known to parse, so errors only stop the walk.
 class Scanner {
@@ -46,11 +65,9 @@ private:
 
     // Returns the raw text of a string token (without quotes) and moves past it.
     std::string_view skipString() {
-        const std::size_t start = ++pos_;
-        while (pos_ < text_.size() && text_[pos_] != '"') pos_ += text_[pos_] == '\\' ? 2 : 1;
-        const std::string_view raw = text_.substr(start, std::min(pos_, text_.size()) - start);
-        ++pos_;
-        return raw;
+        const std::size_t start = pos_;
+        pos_ = stringEnd(text_, start);
+        return text_.substr(start + 1, pos_ - start - 2);
     }
 
     // Skips any value; containers are skipped by counting brackets, not by recursion.
@@ -76,15 +93,6 @@ private:
             }
         }
         skipSpace();
-    }
-
-    static std::string decodeKey(std::string_view raw) {
-        if (raw.find('\\') == std::string_view::npos) return std::string(raw);
-        try {
-            return nlohmann::json::parse("\"" + std::string(raw) + "\"").get<std::string>();
-        } catch (const nlohmann::json::exception&) {
-            return std::string(raw);
-        }
     }
 
     bool enterKey(const std::string& key) {
@@ -157,6 +165,46 @@ TextPosition positionAt(std::string_view text, std::size_t offset) {
 
 std::optional<std::size_t> findValue(std::string_view text, const JsonPath& path) {
     return Scanner(text).find(path);
+}
+
+std::optional<DuplicateKey> findDuplicateKey(std::string_view text) {
+    struct Frame {
+        bool isArray = false;
+        bool expectKey = false;
+        std::size_t index = 0;
+        std::string key;
+        std::set<std::string> keys;
+    };
+    std::vector<Frame> frames;
+    for (std::size_t pos = 0; pos < text.size();) {
+        const char c = text[pos];
+        if (c == '{' || c == '[') {
+            frames.push_back(Frame{c == '[', c == '{', 0, {}, {}});
+        } else if ((c == '}' || c == ']') && !frames.empty()) {
+            frames.pop_back();
+        } else if (c == ',' && !frames.empty()) {
+            frames.back().index += 1;
+            frames.back().expectKey = !frames.back().isArray;
+        } else if (c == '"') {
+            const std::size_t end = stringEnd(text, pos);
+            if (!frames.empty() && frames.back().expectKey) {
+                Frame& object = frames.back();
+                object.expectKey = false;
+                object.key = decodeKey(text.substr(pos + 1, end - pos - 2));
+                if (!object.keys.insert(object.key).second) {
+                    DuplicateKey duplicate{{}, pos};
+                    for (const Frame& frame : frames) {
+                        duplicate.path.push_back(PathStep{frame.key, frame.index, frame.isArray});
+                    }
+                    return duplicate;
+                }
+            }
+            pos = end;
+            continue;
+        }
+        ++pos;
+    }
+    return std::nullopt;
 }
 
 std::optional<std::size_t> findTooDeep(std::string_view text, int maxDepth) {

@@ -32,6 +32,15 @@ TextPosition positionAt(std::string_view text, std::size_t offset);
 /// path is not in the text.
 std::optional<std::size_t> findValue(std::string_view text, const JsonPath& path);
 
+/// A key written twice in one object (nlohmann would silently keep only one of the values).
+struct DuplicateKey {
+    JsonPath path;  ///< the object's path plus the key
+    std::size_t offset = 0;  ///< where the second occurrence starts
+};
+
+/// The first duplicate key of a text that parses as JSON. Scans without recursion.
+std::optional<DuplicateKey> findDuplicateKey(std::string_view text);
+
 /// Byte offset of the first bracket that opens nesting level `maxDepth + 1`, if any. Scans
 /// without recursion so it is safe on any input.
 std::optional<std::size_t> findTooDeep(std::string_view text, int maxDepth);

@@ -92,6 +92,14 @@ ReadResult<Json> parseJsonText(std::string_view text, std::string_view fileName,
                                        ", not a JSON object");
             return result;
         }
+        // Checked after parsing, on text known to be valid: nlohmann keeps one of the values.
+        if (auto duplicate = findDuplicateKey(text)) {
+            result.error = errorAt(text, fileName, duplicate->offset,
+                                   "key " + inQuotes(duplicate->path.back().key) +
+                                       " appears twice in one object");
+            result.error->path = pathText(duplicate->path);
+            return result;
+        }
         result.value = std::move(document);
     } catch (const nlohmann::json::parse_error& e) {
         // e.byte counts from 1 and points at the character where reading stopped.

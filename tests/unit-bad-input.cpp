@@ -2,6 +2,8 @@
 // is wrong. The table tests/bad-input/expected.tsv is shared with the CLI tests.
 #include <doctest/doctest.h>
 
+#include <algorithm>
+#include <random>
 #include <sstream>
 
 #include "netcheck/board_file.hpp"
@@ -130,6 +132,39 @@ TEST_CASE("bad input") {
             refused("{\"title\": \"Ωµ\", \"format\": \"x\", \"version\": 1, \"board\": {}}");
         CHECK(error.path == "format");
         CHECK(error.column == 27);  // two 2-byte characters before it count as two columns
+    }
+
+    SUBCASE("damaged files are refused or read whole, never half") {
+        // Property test with fixed seeds: damage valid files byte by byte; whatever reads must
+        // write back to a file that reads to the same board.
+        const std::string_view alphabet = "{}[]\",:0123456789.|-aAZz \n\\";
+        std::mt19937 rng(20261201);
+        int refusedCount = 0;
+        for (int i = 0; i < 3000; ++i) {
+            std::string text = writeBoard(test_support::randomBoard(rng));
+            const int damage = std::uniform_int_distribution<int>(1, 4)(rng);
+            for (int d = 0; d < damage; ++d) {
+                const auto at = std::uniform_int_distribution<std::size_t>(0, text.size() - 1)(rng);
+                const char c = alphabet[std::uniform_int_distribution<std::size_t>(0, alphabet.size() - 1)(rng)];
+                switch (std::uniform_int_distribution<int>(0, 2)(rng)) {
+                    case 0: text[at] = c; break;
+                    case 1: text.erase(at, 1); break;
+                    default: text.insert(at, 1, c); break;
+                }
+            }
+            const auto result = readBoard(text, "damaged.board.json");
+            if (!result.ok()) {
+                ++refusedCount;
+                CHECK(result.error->line >= 1);
+                CHECK(result.error->line <= 1 + std::count(text.begin(), text.end(), '\n'));
+                continue;
+            }
+            const auto again = readBoard(writeBoard(*result.value), "again.board.json");
+            REQUIRE(again.ok());
+            CHECK(*again.value == *result.value);
+        }
+        MESSAGE("refused " << refusedCount << " of 3000 damaged files");
+        CHECK(refusedCount > 1000);  // the damage is real: most damaged files must be refused
     }
 
     SUBCASE("circuit files report like board files") {
