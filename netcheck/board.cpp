@@ -15,7 +15,9 @@ const Pin* Part::findPin(std::string_view name) const {
     return nullptr;
 }
 
-std::string Endpoint::name() const { return hole ? holeName(*hole) : lug.name(); }
+std::string Endpoint::name() const {
+    return hole ? holeName(*hole) : lug.name();
+}
 
 const Part* Board::findPart(std::string_view ref) const {
     for (const Part& part : parts) {

@@ -120,8 +120,8 @@ private:
 
     void expectInside(Hole hole, std::string_view name) const {
         if (!board_.contains(hole)) {
-            r_.fail("hole " + inQuotes(name) + " is outside a " + std::to_string(board_.rows) + "x" +
-                    std::to_string(board_.cols) + " board");
+            r_.fail("hole " + inQuotes(name) + " is outside a " + std::to_string(board_.rows) +
+                    "x" + std::to_string(board_.cols) + " board");
         }
     }
 
@@ -153,7 +153,8 @@ private:
         const auto a = parseHole(left);
         const auto b = parseHole(right);
         if (!a || !b) {
-            r_.fail("cut " + inQuotes(text) + " is not a hole (C5) or two holes of one strip (D7|D8)");
+            r_.fail("cut " + inQuotes(text) +
+                    " is not a hole (C5) or two holes of one strip (D7|D8)");
         }
         expectInside(*a, left);
         expectInside(*b, right);

@@ -119,6 +119,8 @@ ReadResult<Circuit> readCircuit(std::string_view text, std::string_view fileName
     return result;
 }
 
-std::string writeCircuit(const Circuit& circuit) { return dumpDocument(circuitToJson(circuit)); }
+std::string writeCircuit(const Circuit& circuit) {
+    return dumpDocument(circuitToJson(circuit));
+}
 
 }  // namespace netcheck

@@ -41,8 +41,8 @@ std::optional<BandColour> multiplierBand(int exponent) {
 
 std::string_view bandName(BandColour colour) {
     static constexpr std::array<std::string_view, 14> kNames{
-        "black", "brown", "red",  "orange", "yellow", "green",  "blue",
-        "violet", "grey", "white", "gold",  "silver", "pink", "none"};
+        "black",  "brown", "red",   "orange", "yellow", "green", "blue",
+        "violet", "grey",  "white", "gold",   "silver", "pink",  "none"};
     return kNames[static_cast<std::size_t>(colour)];
 }
 
@@ -65,7 +65,8 @@ std::optional<std::vector<BandColour>> resistorBands(double ohms, double toleran
     if (!multiplier) return std::nullopt;
     std::vector<BandColour> bands;
     for (int i = figures - 1; i >= 0; --i) {
-        bands.push_back(static_cast<BandColour>(significand / static_cast<long long>(std::pow(10, i)) % 10));
+        bands.push_back(
+            static_cast<BandColour>(significand / static_cast<long long>(std::pow(10, i)) % 10));
     }
     bands.push_back(*multiplier);
     if (*tolerance != BandColour::None) bands.push_back(*tolerance);

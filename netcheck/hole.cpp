@@ -24,7 +24,9 @@ std::string rowName(int row) {
     return name;
 }
 
-std::string holeName(Hole hole) { return rowName(hole.row) + std::to_string(hole.col + 1); }
+std::string holeName(Hole hole) {
+    return rowName(hole.row) + std::to_string(hole.col + 1);
+}
 
 std::optional<Hole> parseHole(std::string_view text) {
     std::size_t letters = 0;

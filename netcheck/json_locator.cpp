@@ -19,7 +19,9 @@ bool isPlainKey(std::string_view key) {
     return true;
 }
 
-bool isContinuationByte(char c) { return (static_cast<unsigned char>(c) & 0xC0) == 0x80; }
+bool isContinuationByte(char c) {
+    return (static_cast<unsigned char>(c) & 0xC0) == 0x80;
+}
 
 std::string decodeKey(std::string_view raw) {
     if (raw.find('\\') == std::string_view::npos) return std::string(raw);
@@ -141,8 +143,9 @@ std::string pathText(const JsonPath& path) {
             if (!text.empty()) text += ".";
             text += step.key;
         } else {
-            text += "[" + nlohmann::json(step.key).dump(-1, ' ', false,
-                                                         nlohmann::json::error_handler_t::replace) +
+            text += "[" +
+                    nlohmann::json(step.key).dump(-1, ' ', false,
+                                                  nlohmann::json::error_handler_t::replace) +
                     "]";
         }
     }
@@ -213,8 +216,11 @@ std::optional<std::size_t> findTooDeep(std::string_view text, int maxDepth) {
     for (std::size_t i = 0; i < text.size(); ++i) {
         const char c = text[i];
         if (inString) {
-            if (c == '\\') ++i;
-            else if (c == '"') inString = false;
+            if (c == '\\') {
+                ++i;
+            } else if (c == '"') {
+                inString = false;
+            }
         } else if (c == '"') {
             inString = true;
         } else if (c == '{' || c == '[') {

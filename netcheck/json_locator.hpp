@@ -34,7 +34,7 @@ std::optional<std::size_t> findValue(std::string_view text, const JsonPath& path
 
 /// A key written twice in one object (nlohmann would silently keep only one of the values).
 struct DuplicateKey {
-    JsonPath path;  ///< the object's path plus the key
+    JsonPath path;           ///< the object's path plus the key
     std::size_t offset = 0;  ///< where the second occurrence starts
 };
 

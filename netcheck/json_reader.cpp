@@ -20,9 +20,8 @@ FileError errorAt(std::string_view text, std::string_view fileName, std::size_t 
 }
 
 bool isBlank(std::string_view text) {
-    return std::all_of(text.begin(), text.end(), [](char c) {
-        return c == ' ' || c == '\t' || c == '\n' || c == '\r';
-    });
+    return std::all_of(text.begin(), text.end(),
+                       [](char c) { return c == ' ' || c == '\t' || c == '\n' || c == '\r'; });
 }
 
 // nlohmann's message reads "[json.exception.parse_error.101] parse error at line 3, column 5:
@@ -65,10 +64,10 @@ ReadResult<Json> parseJsonText(std::string_view text, std::string_view fileName,
                                const ReadLimits& limits) {
     ReadResult<Json> result;
     if (text.size() > limits.maxBytes) {
-        result.error = errorAt(text, fileName, 0,
-                               "the file is " + std::to_string(text.size()) +
-                                   " bytes, more than the limit of " +
-                                   std::to_string(limits.maxBytes));
+        result.error =
+            errorAt(text, fileName, 0,
+                    "the file is " + std::to_string(text.size()) +
+                        " bytes, more than the limit of " + std::to_string(limits.maxBytes));
         result.error->line = 0;
         result.error->column = 0;
         return result;
@@ -77,26 +76,26 @@ ReadResult<Json> parseJsonText(std::string_view text, std::string_view fileName,
         result.error = errorAt(text, fileName, 0, "the file is empty");
         return result;
     }
-    // Checked before parsing: nlohmann's parser recurses and a hostile file could exhaust the stack.
+    // Checked before parsing: nlohmann's parser recurses and a hostile file could exhaust the
+    // stack.
     if (auto deep = findTooDeep(text, limits.maxDepth)) {
-        result.error = errorAt(text, fileName, *deep,
-                               "nesting is deeper than " + std::to_string(limits.maxDepth) +
-                                   " levels");
+        result.error =
+            errorAt(text, fileName, *deep,
+                    "nesting is deeper than " + std::to_string(limits.maxDepth) + " levels");
         return result;
     }
     try {
         Json document = Json::parse(text.begin(), text.end());
         if (!document.is_object()) {
             result.error = errorAt(text, fileName, findValue(text, {}).value_or(0),
-                                   "the file holds " + typeName(document) +
-                                       ", not a JSON object");
+                                   "the file holds " + typeName(document) + ", not a JSON object");
             return result;
         }
         // Checked after parsing, on text known to be valid: nlohmann keeps one of the values.
         if (auto duplicate = findDuplicateKey(text)) {
-            result.error = errorAt(text, fileName, duplicate->offset,
-                                   "key " + inQuotes(duplicate->path.back().key) +
-                                       " appears twice in one object");
+            result.error = errorAt(
+                text, fileName, duplicate->offset,
+                "key " + inQuotes(duplicate->path.back().key) + " appears twice in one object");
             result.error->path = pathText(duplicate->path);
             return result;
         }
@@ -110,8 +109,8 @@ ReadResult<Json> parseJsonText(std::string_view text, std::string_view fileName,
 
 FileError locateError(std::string_view text, std::string_view fileName,
                       const InvalidInput& problem) {
-    FileError error = errorAt(text, fileName, findValue(text, problem.path).value_or(0),
-                              problem.message);
+    FileError error =
+        errorAt(text, fileName, findValue(text, problem.path).value_or(0), problem.message);
     error.path = pathText(problem.path);
     error.newerVersion = problem.newerVersion;
     return error;

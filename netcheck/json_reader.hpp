@@ -32,7 +32,8 @@ ReadResult<Json> parseJsonText(std::string_view text, std::string_view fileName,
                                const ReadLimits& limits);
 
 /// The located error for a problem found while reading `text`.
-FileError locateError(std::string_view text, std::string_view fileName, const InvalidInput& problem);
+FileError locateError(std::string_view text, std::string_view fileName,
+                      const InvalidInput& problem);
 
 /// Walks a parsed document. Each accessor checks the JSON type and fails with the path of the
 /// offending value.

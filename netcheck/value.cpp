@@ -24,26 +24,37 @@ struct Multiplier {
 };
 
 // Longer tokens first so that "meg" wins over "m".
+// clang-format off
 constexpr std::array kMultipliers{
-    Multiplier{"meg", 1e6},      Multiplier{"MEG", 1e6},      Multiplier{"Meg", 1e6},
-    Multiplier{"\xC2\xB5", 1e-6} /* µ MICRO SIGN */,         Multiplier{"\xCE\xBC", 1e-6} /* μ mu */,
-    Multiplier{"p", 1e-12},      Multiplier{"n", 1e-9},       Multiplier{"u", 1e-6},
-    Multiplier{"m", 1e-3},       Multiplier{"R", 1.0},        Multiplier{"r", 1.0},
-    Multiplier{"k", 1e3},        Multiplier{"K", 1e3},        Multiplier{"M", 1e6},
-    Multiplier{"G", 1e9},        Multiplier{"T", 1e12},
+    Multiplier{"meg", 1e6},  Multiplier{"MEG", 1e6},   Multiplier{"Meg", 1e6},
+    Multiplier{"\xC2\xB5", 1e-6},  // µ MICRO SIGN
+    Multiplier{"\xCE\xBC", 1e-6},  // μ GREEK SMALL LETTER MU, often typed for it
+    Multiplier{"p", 1e-12},  Multiplier{"n", 1e-9},    Multiplier{"u", 1e-6},
+    Multiplier{"m", 1e-3},   Multiplier{"R", 1.0},     Multiplier{"r", 1.0},
+    Multiplier{"k", 1e3},    Multiplier{"K", 1e3},     Multiplier{"M", 1e6},
+    Multiplier{"G", 1e9},    Multiplier{"T", 1e12},
 };
 
 // Unit words and symbols that may follow a value; they carry no information for comparison.
 constexpr std::array<std::string_view, 7> kUnits{
-    "\xCE\xA9" /* Ω GREEK CAPITAL OMEGA */, "\xE2\x84\xA6" /* Ω OHM SIGN */, "ohms", "ohm", "F", "H",
-    "f"};
+    "\xCE\xA9",      // Ω GREEK CAPITAL LETTER OMEGA
+    "\xE2\x84\xA6",  // Ω OHM SIGN
+    "ohms", "ohm", "F", "H", "f",
+};
+// clang-format on
 
-constexpr std::array<std::string_view, 8> kTaperWords{"lin",  "linear",  "log",     "logarithmic",
+constexpr std::array<std::string_view, 8> kTaperWords{"lin",   "linear",  "log",     "logarithmic",
                                                       "audio", "antilog", "reverse", "rev"};
 
-bool isSpace(char c) { return std::isspace(static_cast<unsigned char>(c)) != 0; }
-bool isDigit(char c) { return c >= '0' && c <= '9'; }
-bool isTaperLetter(char c) { return c == 'A' || c == 'B' || c == 'C'; }
+bool isSpace(char c) {
+    return std::isspace(static_cast<unsigned char>(c)) != 0;
+}
+bool isDigit(char c) {
+    return c >= '0' && c <= '9';
+}
+bool isTaperLetter(char c) {
+    return c == 'A' || c == 'B' || c == 'C';
+}
 
 std::string lower(std::string_view text) {
     std::string out(text);
@@ -59,7 +70,8 @@ std::string_view trim(std::string_view text) {
 }
 
 bool endsWithIgnoringCase(std::string_view text, std::string_view tail) {
-    return text.size() >= tail.size() && lower(text.substr(text.size() - tail.size())) == lower(tail);
+    return text.size() >= tail.size() &&
+           lower(text.substr(text.size() - tail.size())) == lower(tail);
 }
 
 // Takes a taper off the front ("B100k") or the back ("100kB", "100k lin", "100k (log)").
@@ -69,8 +81,8 @@ std::string takeTaper(std::string_view& text) {
         std::string_view word = text.substr(blank + 1);
         if (!word.empty() && word.back() == ')') word.remove_suffix(1);
         const std::string folded = lower(word);
-        const bool isWord = std::find(kTaperWords.begin(), kTaperWords.end(), folded) !=
-                            kTaperWords.end();
+        const bool isWord =
+            std::find(kTaperWords.begin(), kTaperWords.end(), folded) != kTaperWords.end();
         if (isWord || (word.size() == 1 && isTaperLetter(word[0]))) {
             text = trim(text.substr(0, blank));
             return std::string(word);

@@ -94,7 +94,8 @@ const T& pick(std::mt19937& rng, const std::vector<T>& items) {
 /// Pin names of a kind: its table names, or 1..N for numbered kinds and unknown kinds.
 inline std::vector<std::string> pinNames(std::mt19937& rng, const std::string& kind) {
     std::vector<std::string> names;
-    if (const netcheck::PartKind* known = netcheck::findPartKind(kind); known && !known->pins.empty()) {
+    if (const netcheck::PartKind* known = netcheck::findPartKind(kind);
+        known && !known->pins.empty()) {
         for (std::string_view pin : known->pins) names.emplace_back(pin);
         return names;
     }
@@ -119,8 +120,8 @@ inline void addCuts(std::mt19937& rng, netcheck::Board& board, const RandomBoard
 
 inline void addParts(std::mt19937& rng, netcheck::Board& board, const RandomBoardOptions& options) {
     static const std::vector<std::string> kKinds{
-        "resistor", "capacitor", "electrolytic", "diode", "led",        "bjt",
-        "jfet",     "mosfet",    "regulator",    "trimmer", "ic",       "mystery-box"};
+        "resistor", "capacitor", "electrolytic", "diode",   "led", "bjt",
+        "jfet",     "mosfet",    "regulator",    "trimmer", "ic",  "mystery-box"};
     static const std::vector<std::string> kValues{"4k7", "100n", "10u", "1N4148", "", "B100k"};
     const int count = std::max(1, countFor(rng, options.partsPerHole, board.holeCount()));
     for (int i = 0; i < count; ++i) {
@@ -156,8 +157,8 @@ inline netcheck::Endpoint randomEndpoint(std::mt19937& rng, const netcheck::Boar
 
 inline void addOffboard(std::mt19937& rng, netcheck::Board& board,
                         const RandomBoardOptions& options) {
-    static const std::vector<std::string> kKinds{"pot", "jack", "stereo-jack", "dc-jack",
-                                                 "battery", "switch"};
+    static const std::vector<std::string> kKinds{"pot",     "jack",    "stereo-jack",
+                                                 "dc-jack", "battery", "switch"};
     static const std::vector<std::string> kColours{"", "red", "black", "yellow"};
     const int count = uniform(rng, 0, options.maxOffboard);
     for (int i = 0; i < count; ++i) {

@@ -22,7 +22,8 @@ struct BadInput {
 // Rows of "file<TAB>line<TAB>message fragment"; '#' lines are comments.
 std::vector<BadInput> readTable() {
     std::vector<BadInput> rows;
-    std::istringstream table(test_support::readTextFile(test_support::sourcePath("tests/bad-input/expected.tsv")));
+    std::istringstream table(
+        test_support::readTextFile(test_support::sourcePath("tests/bad-input/expected.tsv")));
     std::string row;
     while (std::getline(table, row)) {
         if (row.empty() || row.front() == '#') continue;
@@ -48,7 +49,8 @@ std::string boardWithParts(int count) {
                  R"(", "kind": "resistor", "pins": {"1": "A1", "2": "A5"}})";
     }
     return R"({"format": "stripsmith-board", "version": 1, "board": {"rows": 2, "cols": 8},
-               "parts": [)" + parts + "]}";
+               "parts": [)" +
+           parts + "]}";
 }
 
 }  // namespace
@@ -120,7 +122,8 @@ TEST_CASE("bad input") {
     }
 
     SUBCASE("syntax errors give line and column") {
-        const FileError error = refused("{\n  \"format\": \"stripsmith-board\",\n  \"version\": 1,,\n}");
+        const FileError error =
+            refused("{\n  \"format\": \"stripsmith-board\",\n  \"version\": 1,,\n}");
         CHECK(error.line == 3);
         CHECK(error.column == 16);  // the second comma
         CHECK(error.path.empty());
@@ -145,11 +148,18 @@ TEST_CASE("bad input") {
             const int damage = std::uniform_int_distribution<int>(1, 4)(rng);
             for (int d = 0; d < damage; ++d) {
                 const auto at = std::uniform_int_distribution<std::size_t>(0, text.size() - 1)(rng);
-                const char c = alphabet[std::uniform_int_distribution<std::size_t>(0, alphabet.size() - 1)(rng)];
+                const char c = alphabet[std::uniform_int_distribution<std::size_t>(
+                    0, alphabet.size() - 1)(rng)];
                 switch (std::uniform_int_distribution<int>(0, 2)(rng)) {
-                    case 0: text[at] = c; break;
-                    case 1: text.erase(at, 1); break;
-                    default: text.insert(at, 1, c); break;
+                    case 0:
+                        text[at] = c;
+                        break;
+                    case 1:
+                        text.erase(at, 1);
+                        break;
+                    default:
+                        text.insert(at, 1, c);
+                        break;
                 }
             }
             const auto result = readBoard(text, "damaged.board.json");
@@ -168,9 +178,11 @@ TEST_CASE("bad input") {
     }
 
     SUBCASE("circuit files report like board files") {
-        const auto result = readCircuit("{\n  \"nets\": {\n    \"A\": [\"R1.1\"],\n    \"B\": [\"R1.1\"]\n  }\n}",
-                                        "amp.circuit.json");
+        const auto result =
+            readCircuit("{\n  \"nets\": {\n    \"A\": [\"R1.1\"],\n    \"B\": [\"R1.1\"]\n  }\n}",
+                        "amp.circuit.json");
         REQUIRE_FALSE(result.ok());
-        CHECK(result.error->describe() == "amp.circuit.json:4:11: nets.B[0]: R1.1 is in nets A and B");
+        CHECK(result.error->describe() ==
+              "amp.circuit.json:4:11: nets.B[0]: R1.1 is in nets A and B");
     }
 }

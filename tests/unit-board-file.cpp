@@ -39,7 +39,8 @@ Board readOk(std::string_view text) {
 }
 
 // A minimal valid file with `body` spliced in after the board object.
-std::string minimal(const std::string& body, const std::string& board = R"({"rows": 4, "cols": 6})") {
+std::string minimal(const std::string& body,
+                    const std::string& board = R"({"rows": 4, "cols": 6})") {
     return R"({"format": "stripsmith-board", "version": 1, "board": )" + board + body + "}";
 }
 
@@ -171,7 +172,8 @@ TEST_CASE("board file") {
 
     SUBCASE("a file written by a newer version is refused, and says so") {
         const auto result = readBoard(R"({"format": "stripsmith-board", "version": 2,
-            "board": {"rows": 1, "cols": 1}})", "new.board.json");
+            "board": {"rows": 1, "cols": 1}})",
+                                      "new.board.json");
         REQUIRE_FALSE(result.ok());
         CHECK(result.error->newerVersion);
         CHECK(result.error->describe() ==
@@ -180,7 +182,8 @@ TEST_CASE("board file") {
 }
 
 TEST_CASE("circuit file") {
-    const std::string text = R"({"parts": {"Q1": {"kind": "bjt", "value": "BC547", "pins": ["C", "B", "E"]},
+    const std::string text =
+        R"({"parts": {"Q1": {"kind": "bjt", "value": "BC547", "pins": ["C", "B", "E"]},
         "R1": {"kind": "resistor", "value": "10k"}},
         "nets": {"OUT": ["Q1.C", "R1.2"], "VCC": ["R1.1"]}, "note": "kept"})";
     const auto result = readCircuit(text, "amp.circuit.json");

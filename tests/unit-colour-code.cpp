@@ -69,9 +69,11 @@ TEST_CASE("colour code") {
                                                   "green", "blue",  "violet", "grey",   "white"};
         for (int digit = 0; digit <= 9; ++digit) {
             CAPTURE(digit);
-            CHECK(bandName(static_cast<BandColour>(digit)) == names[static_cast<std::size_t>(digit)]);
+            CHECK(bandName(static_cast<BandColour>(digit)) ==
+                  names[static_cast<std::size_t>(digit)]);
             // A resistance of digit*10 + 1 ohms at 5 % begins with that digit's colour.
-            if (digit > 0) CHECK(bands(digit * 10 + 1, 5).front() == static_cast<BandColour>(digit));
+            if (digit > 0)
+                CHECK(bands(digit * 10 + 1, 5).front() == static_cast<BandColour>(digit));
         }
     }
 }

@@ -71,7 +71,7 @@ TEST_CASE("value parsing") {
         CHECK(near(magnitude("1meg"), 1e6));
         CHECK(near(magnitude(".5u"), 0.5e-6));
         CHECK(near(magnitude("4,7k"), 4.7e3));  // decimal comma
-        CHECK(magnitude("0R") == 0);                          // zero-ohm link
+        CHECK(magnitude("0R") == 0);            // zero-ohm link
     }
 
     SUBCASE("in board files M is mega and m is milli") {
@@ -124,9 +124,9 @@ TEST_CASE("value comparison") {
         CHECK_FALSE(sameValue("4k7", "47k"));
         CHECK_FALSE(sameValue("4k7", "4k75"));
         CHECK_FALSE(sameValue("100n", "10n"));
-        CHECK_FALSE(sameValue("1M", "1m"));                  // mega is not milli
-        CHECK_FALSE(sameValue("B100k", "A100k"));            // taper differs
-        CHECK_FALSE(sameValue("B100k", "100k"));             // taper missing
+        CHECK_FALSE(sameValue("1M", "1m"));        // mega is not milli
+        CHECK_FALSE(sameValue("B100k", "A100k"));  // taper differs
+        CHECK_FALSE(sameValue("B100k", "100k"));   // taper missing
         CHECK_FALSE(sameValue("100k lin", "100k log"));
     }
 
@@ -139,16 +139,16 @@ TEST_CASE("value comparison") {
 
 TEST_CASE("value formatting") {
     SUBCASE("IEC 60062 codes") {
-        CHECK(formatIec(0.47, false) == "R47");   // IEC 60062: R47 = 0.47 Ω
-        CHECK(formatIec(4.7, false) == "4R7");    // IEC 60062: 4R7 = 4.7 Ω
-        CHECK(formatIec(470, false) == "470R");   // IEC 60062: 470R = 470 Ω
-        CHECK(formatIec(4700, false) == "4k7");   // IEC 60062: 4K7 = 4.7 kΩ (k written lower case)
-        CHECK(formatIec(47300, false) == "47k3"); // IEC 60062: 47K3 = 47.3 kΩ
-        CHECK(formatIec(4.7e6, false) == "4M7");  // IEC 60062: 4M7 = 4.7 MΩ
-        CHECK(formatIec(2.2e6, false) == "2M2");  // IEC 60062: 2M2 = 2.2 MΩ
-        CHECK(formatIec(1.5e-12, true) == "1p5"); // IEC 60062: 1p5 = 1.5 pF
-        CHECK(formatIec(4.7e-9, true) == "4n7");  // IEC 60062: 4n7 = 4.7 nF
-        CHECK(formatIec(4.7e-6, true) == "4u7");  // IEC 60062: 4µ7 = 4.7 µF (ASCII u)
+        CHECK(formatIec(0.47, false) == "R47");  // IEC 60062: R47 = 0.47 Ω
+        CHECK(formatIec(4.7, false) == "4R7");   // IEC 60062: 4R7 = 4.7 Ω
+        CHECK(formatIec(470, false) == "470R");  // IEC 60062: 470R = 470 Ω
+        CHECK(formatIec(4700, false) == "4k7");  // IEC 60062: 4K7 = 4.7 kΩ (k written lower case)
+        CHECK(formatIec(47300, false) == "47k3");  // IEC 60062: 47K3 = 47.3 kΩ
+        CHECK(formatIec(4.7e6, false) == "4M7");   // IEC 60062: 4M7 = 4.7 MΩ
+        CHECK(formatIec(2.2e6, false) == "2M2");   // IEC 60062: 2M2 = 2.2 MΩ
+        CHECK(formatIec(1.5e-12, true) == "1p5");  // IEC 60062: 1p5 = 1.5 pF
+        CHECK(formatIec(4.7e-9, true) == "4n7");   // IEC 60062: 4n7 = 4.7 nF
+        CHECK(formatIec(4.7e-6, true) == "4u7");   // IEC 60062: 4µ7 = 4.7 µF (ASCII u)
         CHECK(formatIec(1e-7, true) == "100n");
         CHECK(formatIec(1000, false) == "1k");
         CHECK(formatIec(0, false) == "0R");
