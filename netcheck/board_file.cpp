@@ -293,11 +293,17 @@ Json gridToJson(const Board& board) {
     return grid;
 }
 
-Json partToJson(const Part& part) {
+// The members every part starts with, on the board or off it.
+Json partHead(const std::string& ref, const std::string& kind, const std::string& value) {
     Json out = Json::object();
-    out["ref"] = part.ref;
-    out["kind"] = part.kind;
-    out["value"] = part.value;
+    out["ref"] = ref;
+    out["kind"] = kind;
+    out["value"] = value;
+    return out;
+}
+
+Json partToJson(const Part& part) {
+    Json out = partHead(part.ref, part.kind, part.value);
     Json pins = Json::object();
     for (const Pin& pin : part.pins) pins[pin.name] = holeName(pin.hole);
     out["pins"] = std::move(pins);
@@ -315,10 +321,7 @@ Json linkToJson(const Link& link) {
 }
 
 Json offboardToJson(const OffboardPart& part) {
-    Json out = Json::object();
-    out["ref"] = part.ref;
-    out["kind"] = part.kind;
-    out["value"] = part.value;
+    Json out = partHead(part.ref, part.kind, part.value);
     out["pins"] = part.pins;
     appendExtras(out, part.extra);
     return out;
@@ -344,19 +347,9 @@ Json arrayOf(const std::vector<Item>& items, ToJson toJson) {
 
 ReadResult<Board> readBoard(std::string_view text, std::string_view fileName,
                             const ReadLimits& limits) {
-    ReadResult<Board> result;
-    ReadResult<Json> parsed = parseJsonText(text, fileName, limits);
-    if (!parsed.ok()) {
-        result.error = std::move(parsed.error);
-        return result;
-    }
-    try {
-        JsonReader reader;
-        result.value = BoardReader(reader, limits).read(*parsed.value);
-    } catch (const InvalidInput& problem) {
-        result.error = locateError(text, fileName, problem);
-    }
-    return result;
+    return readDocument<Board>(text, fileName, limits, [&](JsonReader& reader, const Json& root) {
+        return BoardReader(reader, limits).read(root);
+    });
 }
 
 std::string writeBoard(const Board& board) {

@@ -104,19 +104,9 @@ Json circuitToJson(const Circuit& circuit) {
 
 ReadResult<Circuit> readCircuit(std::string_view text, std::string_view fileName,
                                 const ReadLimits& limits) {
-    ReadResult<Circuit> result;
-    ReadResult<Json> parsed = parseJsonText(text, fileName, limits);
-    if (!parsed.ok()) {
-        result.error = std::move(parsed.error);
-        return result;
-    }
-    try {
-        JsonReader reader;
-        result.value = readCircuitObject(reader, *parsed.value, limits);
-    } catch (const InvalidInput& problem) {
-        result.error = locateError(text, fileName, problem);
-    }
-    return result;
+    return readDocument<Circuit>(text, fileName, limits, [&](JsonReader& reader, const Json& root) {
+        return readCircuitObject(reader, root, limits);
+    });
 }
 
 std::string writeCircuit(const Circuit& circuit) {

@@ -83,6 +83,26 @@ private:
     JsonPath path_;
 };
 
+/// Parses `text` and reads the document with `read(JsonReader&, const Json&)`, turning the first
+/// problem into a located error.
+template <class T, class ReadDocument>
+ReadResult<T> readDocument(std::string_view text, std::string_view fileName,
+                           const ReadLimits& limits, ReadDocument read) {
+    ReadResult<T> result;
+    ReadResult<Json> parsed = parseJsonText(text, fileName, limits);
+    if (!parsed.ok()) {
+        result.error = std::move(parsed.error);
+        return result;
+    }
+    try {
+        JsonReader reader;
+        result.value = read(reader, *parsed.value);
+    } catch (const InvalidInput& problem) {
+        result.error = locateError(text, fileName, problem);
+    }
+    return result;
+}
+
 /// Quotes a string the JSON way for messages: "Z99".
 std::string inQuotes(std::string_view text);
 
