@@ -1,0 +1,167 @@
+#include "editor/app/edit_actions.hpp"
+
+#include <algorithm>
+#include <climits>
+
+#include "editor/tools/hit_test.hpp"
+#include "editor/tools/part_factory.hpp"
+#include "editor/tools/ref_names.hpp"
+#include "netcheck/edit/edit.hpp"
+
+namespace stripsmith {
+
+using netcheck::Hole;
+using netcheck::edit::ElementRef;
+
+void undo(EditorApp& app) {
+    const std::string label = app.doc.history().undoLabel();
+    if (app.doc.undo()) {
+        app.selection.clear();
+        app.say("Undid: " + label);
+    }
+}
+
+void redo(EditorApp& app) {
+    const std::string label = app.doc.history().redoLabel();
+    if (app.doc.redo()) {
+        app.selection.clear();
+        app.say("Redid: " + label);
+    }
+}
+
+void deleteSelection(EditorApp& app) {
+    if (app.selection.empty()) return;
+    std::vector<ElementRef> refs(app.selection.begin(), app.selection.end());
+    if (app.perform(netcheck::edit::deleteElements(app.doc.board(), refs))) app.selection.clear();
+}
+
+void rotateSelection(EditorApp& app) {
+    const auto& board = app.doc.board();
+    std::vector<std::unique_ptr<netcheck::edit::Command>> members;
+    for (const ElementRef& ref : app.selection) {
+        if (ref.kind != ElementRef::Kind::Part) continue;
+        const netcheck::Part turned = rotatePart(board.parts[ref.index]);
+        if (!fitsOnBoard(turned, board)) continue;
+        members.push_back(std::make_unique<netcheck::edit::ReplacePart>(board, ref.index, turned, "Rotate " + turned.ref));
+    }
+    if (members.empty()) return;
+    if (members.size() == 1) app.perform(std::move(members.front()));
+    else app.perform(std::make_unique<netcheck::edit::CompoundCommand>("Rotate parts", std::move(members)));
+}
+
+void nudgeSelection(EditorApp& app, int rows, int cols) {
+    const auto& board = app.doc.board();
+    for (const ElementRef& ref : app.selection)
+        for (const Hole& h : holesOf(board, ref))
+            if (!board.contains({h.row + rows, h.col + cols})) return;
+    std::vector<ElementRef> refs(app.selection.begin(), app.selection.end());
+    app.perform(netcheck::edit::moveElements(board, refs, rows, cols), kMergeArrowMove);
+}
+
+ClipboardContent copyOf(const netcheck::Board& board, const Selected& selection) {
+    ClipboardContent clip;
+    Hole corner{INT_MAX, INT_MAX};
+    for (const ElementRef& ref : selection)
+        for (const Hole& h : holesOf(board, ref)) corner = {std::min(corner.row, h.row), std::min(corner.col, h.col)};
+    if (corner.row == INT_MAX) return clip;
+    auto rel = [&](Hole h) { return Hole{h.row - corner.row, h.col - corner.col}; };
+    for (const ElementRef& ref : selection) {
+        switch (ref.kind) {
+        case ElementRef::Kind::Part: clip.parts.push_back(movePart(board.parts[ref.index], -corner.row, -corner.col)); break;
+        case ElementRef::Kind::Link: {
+            netcheck::Link link = board.links[ref.index];
+            link.from = rel(link.from);
+            link.to = rel(link.to);
+            clip.links.push_back(link);
+            break;
+        }
+        case ElementRef::Kind::Cut: {
+            netcheck::Cut cut = board.cuts[ref.index];
+            cut.hole = rel(cut.hole);
+            clip.cuts.push_back(cut);
+            break;
+        }
+        default: break;  // wires and off-board parts are not copied: they belong to one build
+        }
+    }
+    return clip;
+}
+
+std::unique_ptr<netcheck::edit::Command> pasteCommand(const netcheck::Board& board, const ClipboardContent& clip,
+                                                      Hole at, std::string* reason) {
+    std::vector<std::unique_ptr<netcheck::edit::Command>> members;
+    netcheck::Board scratch = board;  // to number refs as they are taken
+    auto fits = [&](Hole h) { return board.contains({h.row + at.row, h.col + at.col}); };
+    for (const netcheck::Part& p : clip.parts) {
+        netcheck::Part part = movePart(p, at.row, at.col);
+        if (!fitsOnBoard(part, board)) {
+            if (reason) *reason = "The pasted parts would not fit on the board there.";
+            return nullptr;
+        }
+        if (refTaken(scratch, part.ref)) part.ref = nextFreeRef(scratch, prefixOf(part.ref));
+        scratch.parts.push_back(part);
+        members.push_back(std::make_unique<netcheck::edit::AddPart>(part));
+    }
+    for (netcheck::Link link : clip.links) {
+        if (!fits(link.from) || !fits(link.to)) {
+            if (reason) *reason = "The pasted links would not fit on the board there.";
+            return nullptr;
+        }
+        link.from = {link.from.row + at.row, link.from.col + at.col};
+        link.to = {link.to.row + at.row, link.to.col + at.col};
+        members.push_back(std::make_unique<netcheck::edit::AddLink>(link));
+    }
+    for (netcheck::Cut cut : clip.cuts) {
+        cut.hole = {cut.hole.row + at.row, cut.hole.col + at.col};
+        if (!board.contains(cut.hole) || std::find(board.cuts.begin(), board.cuts.end(), cut) != board.cuts.end()) continue;
+        members.push_back(std::make_unique<netcheck::edit::AddCut>(cut));
+    }
+    if (members.empty()) return nullptr;
+    return std::make_unique<netcheck::edit::CompoundCommand>("Paste", std::move(members));
+}
+
+void copySelection(EditorApp& app) {
+    app.clipboard = copyOf(app.doc.board(), app.selection);
+    if (!app.clipboard.empty()) app.say("Copied");
+}
+
+void paste(EditorApp& app, std::optional<Hole> at) {
+    if (app.clipboard.empty()) return;
+    const Hole where = at.value_or(Hole{1, 1});
+    std::string reason;
+    auto command = pasteCommand(app.doc.board(), app.clipboard, where, &reason);
+    if (!command) {
+        if (!reason.empty()) app.say(reason);
+        return;
+    }
+    const auto& board = app.doc.board();
+    const std::size_t parts = board.parts.size(), links = board.links.size(), cuts = board.cuts.size();
+    if (!app.perform(std::move(command))) return;
+    app.selection.clear();
+    const auto& after = app.doc.board();
+    for (std::size_t i = parts; i < after.parts.size(); ++i) app.selection.insert({ElementRef::Kind::Part, i});
+    for (std::size_t i = links; i < after.links.size(); ++i) app.selection.insert({ElementRef::Kind::Link, i});
+    for (std::size_t i = cuts; i < after.cuts.size(); ++i) app.selection.insert({ElementRef::Kind::Cut, i});
+}
+
+void duplicateSelection(EditorApp& app) {
+    const auto& board = app.doc.board();
+    Hole corner{INT_MAX, INT_MAX};
+    for (const ElementRef& ref : app.selection)
+        for (const Hole& h : holesOf(board, ref)) corner = {std::min(corner.row, h.row), std::min(corner.col, h.col)};
+    if (corner.row == INT_MAX) return;
+    app.clipboard = copyOf(board, app.selection);
+    paste(app, Hole{corner.row + 1, corner.col + 1});
+}
+
+void selectAll(EditorApp& app) {
+    const auto& b = app.doc.board();
+    app.selection.clear();
+    for (std::size_t i = 0; i < b.parts.size(); ++i) app.selection.insert({ElementRef::Kind::Part, i});
+    for (std::size_t i = 0; i < b.links.size(); ++i) app.selection.insert({ElementRef::Kind::Link, i});
+    for (std::size_t i = 0; i < b.cuts.size(); ++i) app.selection.insert({ElementRef::Kind::Cut, i});
+    for (std::size_t i = 0; i < b.wires.size(); ++i) app.selection.insert({ElementRef::Kind::Wire, i});
+    for (std::size_t i = 0; i < b.offboard.size(); ++i) app.selection.insert({ElementRef::Kind::Offboard, i});
+}
+
+}  // namespace stripsmith

@@ -1,0 +1,66 @@
+#include "editor/app/look.hpp"
+
+#include <cstdlib>
+#include <filesystem>
+
+#include <imgui.h>
+
+namespace stripsmith {
+
+std::string assetsFolder() {
+    if (const char* dir = std::getenv("STRIPSMITH_ASSETS"); dir && *dir) return dir;
+    return STRIPSMITH_ASSETS_DIR;
+}
+
+bool loadFonts() {
+    ImGuiIO& io = ImGui::GetIO();
+    const std::string path = assetsFolder() + "/fonts/DejaVuSans.ttf";
+    if (!std::filesystem::exists(path)) {
+        io.Fonts->AddFontDefault();
+        return false;
+    }
+    ImFontConfig config;
+    config.OversampleH = 2;
+    io.Fonts->AddFontFromFileTTF(path.c_str(), 15.0f, &config, io.Fonts->GetGlyphRangesDefault());
+    io.Fonts->AddFontFromFileTTF(path.c_str(), 30.0f, &config, io.Fonts->GetGlyphRangesDefault());
+    return true;
+}
+
+void applyLook(int uiScale) {
+    ImGuiStyle style;
+    ImGui::StyleColorsDark(&style);
+    style.WindowRounding = 0.0f;
+    style.FrameRounding = 4.0f;
+    style.GrabRounding = 4.0f;
+    style.WindowBorderSize = 1.0f;
+    style.FramePadding = {7, 4};
+    style.ItemSpacing = {8, 6};
+    ImVec4* c = style.Colors;
+    const ImVec4 ink{0.11f, 0.125f, 0.15f, 1.0f};
+    c[ImGuiCol_WindowBg] = ink;
+    c[ImGuiCol_ChildBg] = {0.09f, 0.10f, 0.12f, 1.0f};
+    c[ImGuiCol_PopupBg] = {0.13f, 0.145f, 0.17f, 0.98f};
+    c[ImGuiCol_MenuBarBg] = {0.15f, 0.165f, 0.19f, 1.0f};
+    c[ImGuiCol_TitleBg] = c[ImGuiCol_TitleBgActive] = {0.16f, 0.18f, 0.21f, 1.0f};
+    c[ImGuiCol_Text] = {0.93f, 0.94f, 0.95f, 1.0f};
+    c[ImGuiCol_TextDisabled] = {0.60f, 0.63f, 0.67f, 1.0f};
+    // Copper accents for active things.
+    const ImVec4 copper{0.87f, 0.56f, 0.29f, 1.0f};
+    c[ImGuiCol_Button] = {0.22f, 0.25f, 0.29f, 1.0f};
+    c[ImGuiCol_ButtonHovered] = {0.32f, 0.36f, 0.41f, 1.0f};
+    c[ImGuiCol_ButtonActive] = {0.68f, 0.42f, 0.20f, 1.0f};
+    c[ImGuiCol_Header] = {0.25f, 0.28f, 0.33f, 1.0f};
+    c[ImGuiCol_HeaderHovered] = {0.34f, 0.37f, 0.43f, 1.0f};
+    c[ImGuiCol_HeaderActive] = {0.68f, 0.42f, 0.20f, 1.0f};
+    c[ImGuiCol_FrameBg] = {0.17f, 0.19f, 0.22f, 1.0f};
+    c[ImGuiCol_FrameBgHovered] = {0.23f, 0.26f, 0.30f, 1.0f};
+    c[ImGuiCol_CheckMark] = copper;
+    c[ImGuiCol_SliderGrab] = copper;
+    c[ImGuiCol_Separator] = {0.28f, 0.30f, 0.34f, 1.0f};
+    style.ScaleAllSizes(static_cast<float>(uiScale));
+    ImGui::GetStyle() = style;
+    ImGuiIO& io = ImGui::GetIO();
+    if (io.Fonts->Fonts.Size >= 2) io.FontDefault = io.Fonts->Fonts[uiScale >= 2 ? 1 : 0];
+}
+
+}  // namespace stripsmith

@@ -1,0 +1,60 @@
+// Off-board parts beside the board, and the flying leads to them.
+#include <cmath>
+#include <string>
+
+#include "editor/canvas/layers.hpp"
+#include "editor/canvas/palette.hpp"
+
+namespace stripsmith {
+
+using netcheck::edit::ElementRef;
+
+void drawOffboardParts(const CanvasFrame& f, const netcheck::Board& board, const Selected& selected) {
+    const float size = std::max(11.0f, canvasTextSize(f, 0.5f));
+    ImFont* font = ImGui::GetFont();
+    for (const OffboardSpot& spot : f.spots) {
+        const auto& part = board.offboard[spot.index];
+        const ImVec2 a = f.at(spot.min), b = f.at(spot.max);
+        const ImVec2 lo{std::min(a.x, b.x), a.y}, hi{std::max(a.x, b.x), b.y};
+        const bool sel = selected.count(ElementRef{ElementRef::Kind::Offboard, spot.index}) > 0;
+        f.draw->AddRectFilled(lo, hi, palette::kOffboardBody, 6.0f);
+        f.draw->AddRect(lo, hi, sel ? palette::kSelection : palette::kOffboardEdge, 6.0f, 0, sel ? 3.0f : 1.5f);
+        const std::string title = part.ref + "  " + part.value;
+        f.draw->PushClipRect(lo, hi, true);
+        f.draw->AddText(font, size, {lo.x + 6, lo.y + 4}, palette::kTextLight, title.c_str());
+        if (hi.y - lo.y > size * 2.2f)
+            f.draw->AddText(font, size * 0.85f, {lo.x + 6, lo.y + 4 + size * 1.1f}, palette::kLabelDim, part.kind.c_str());
+        f.draw->PopClipRect();
+        for (std::size_t j = 0; j < spot.lugs.size(); ++j) {
+            const ImVec2 p = f.at(spot.lugs[j]);
+            f.draw->AddLine({p.x, lo.y + (hi.y - lo.y)}, p, palette::kLug, 3.0f);
+            f.draw->AddCircleFilled(p, f.t.len(0.28f), palette::kLug, 14);
+            f.draw->AddCircleFilled(p, f.t.len(0.12f), palette::kSurround, 10);
+            const std::string& name = part.pins[j];
+            const ImVec2 ts = font->CalcTextSizeA(size, FLT_MAX, 0, name.c_str());
+            f.draw->AddText(font, size, {p.x - ts.x * 0.5f, p.y + f.t.len(0.35f)}, palette::kLabel, name.c_str());
+        }
+    }
+}
+
+void drawWires(const CanvasFrame& f, const netcheck::Board& board, const Selected& selected) {
+    for (std::size_t i = 0; i < board.wires.size(); ++i) {
+        const netcheck::Wire& wire = board.wires[i];
+        const auto a = endpointPosition(board, f.spots, wire.from);
+        const auto b = endpointPosition(board, f.spots, wire.to);
+        if (!a || !b) continue;
+        const ImVec2 pa = f.at(*a), pb = f.at(*b);
+        // A gentle sag, as a real lead hangs.
+        const float sag = std::min(f.t.len(2.0f), std::fabs(pb.x - pa.x) * 0.25f + f.t.len(0.5f));
+        const ImVec2 c1{pa.x + (pb.x - pa.x) * 0.3f, pa.y + sag};
+        const ImVec2 c2{pa.x + (pb.x - pa.x) * 0.7f, pb.y + sag};
+        const float w = std::max(2.5f, f.t.len(0.18f));
+        const bool sel = selected.count(ElementRef{ElementRef::Kind::Wire, i}) > 0;
+        if (sel) f.draw->AddBezierCubic(pa, c1, c2, pb, palette::kSelection, w + 6.0f);
+        f.draw->AddBezierCubic(pa, c1, c2, pb, palette::rgba(0, 0, 0, 160), w + 2.0f);
+        f.draw->AddBezierCubic(pa, c1, c2, pb, palette::wireColour(wire.color.c_str()), w);
+        for (const ImVec2& p : {pa, pb}) f.draw->AddCircleFilled(p, f.t.len(0.2f), palette::rgba(205, 210, 215), 10);
+    }
+}
+
+}  // namespace stripsmith

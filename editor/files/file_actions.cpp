@@ -1,0 +1,284 @@
+// Sections: loading and saving | actions | dialogs | autosave.
+#include "editor/files/file_actions.hpp"
+
+#include <filesystem>
+
+#include <imgui.h>
+#include <nlohmann/json.hpp>
+
+#include "netcheck/board_file.hpp"
+#include "netcheck/file_io.hpp"
+
+namespace stripsmith {
+
+namespace fs = std::filesystem;
+
+namespace {
+
+void showError(EditorApp& app, std::string title, std::string text) {
+    app.dialogs.errorTitle = std::move(title);
+    app.dialogs.errorText = std::move(text);
+}
+
+std::string folderOf(const std::string& path) {
+    if (path.empty()) return {};
+    return fs::path(path).parent_path().string();
+}
+
+// Reads a file from a newer format version as if it were this version, to show it read-only.
+std::optional<netcheck::Board> readNewerVersion(const std::string& text, const std::string& path) {
+    auto json = nlohmann::json::parse(text, nullptr, false);
+    if (!json.is_object()) return std::nullopt;
+    json["version"] = netcheck::kBoardVersion;
+    auto result = netcheck::readBoard(json.dump(), path);
+    return result.value;
+}
+
+void startOver(EditorApp& app) {
+    app.selection.clear();
+    app.tool.cancel();
+    app.view.fitPending = true;
+    app.view.focusedFinding.reset();
+}
+
+}  // namespace
+
+// ---- loading and saving ----------------------------------------------------------------------
+
+bool loadBoardFile(EditorApp& app, const std::string& path) {
+    const netcheck::ReadLimits limits;
+    auto text = netcheck::readFileLimited(path, limits.maxBytes);
+    if (!text.ok()) {
+        showError(app, "Cannot open the board", text.error ? text.error->describe() : "cannot read " + path);
+        return false;
+    }
+    auto result = netcheck::readBoard(*text.value, path, limits);
+    if (!result.ok()) {
+        const std::string message = result.error ? result.error->describe() : "unreadable board file";
+        if (message.find("is newer than this program reads") != std::string::npos) {
+            if (auto board = readNewerVersion(*text.value, path)) {
+                app.doc.reset(std::move(*board), path, true);
+                app.dialogs.notice = message + "\n\nThe board is open read-only so that nothing it holds is lost. "
+                                               "Use File > Save As to keep a copy in this version's format.";
+                startOver(app);
+                app.recent.add(path);
+                return true;
+            }
+        }
+        showError(app, "Cannot open the board", message + "\n\nThe board you had open is unchanged.");
+        return false;
+    }
+    app.doc.reset(std::move(*result.value), path);
+    startOver(app);
+    app.recent.add(path);
+    app.say("Opened " + path);
+    return true;
+}
+
+bool saveBoardFile(EditorApp& app, const std::string& path) {
+    if (auto error = netcheck::saveFileAtomically(path, netcheck::writeBoard(app.doc.board()))) {
+        showError(app, "Could not save", *error + "\n\nThe file on disk is unchanged.");
+        return false;
+    }
+    app.doc.markSaved(path);
+    app.recent.add(path);
+    if (!app.recoveryDir.empty()) clearRecovery(app.recoveryDir);
+    app.say("Saved " + path);
+    return true;
+}
+
+// ---- actions -----------------------------------------------------------------------------------
+
+namespace {
+
+void doPending(EditorApp& app, PendingAction action, const std::string& path) {
+    switch (action) {
+    case PendingAction::New:
+        app.doc.reset(netcheck::Board{}, {});
+        startOver(app);
+        app.say("New board");
+        break;
+    case PendingAction::Open:
+        app.chooser.open(FileChooser::Purpose::OpenBoard, folderOf(app.doc.path()));
+        break;
+    case PendingAction::OpenPath:
+        loadBoardFile(app, path);
+        break;
+    case PendingAction::Quit:
+        app.quitNow = true;
+        break;
+    case PendingAction::None:
+        break;
+    }
+}
+
+void askThen(EditorApp& app, PendingAction action, const std::string& path = {}) {
+    if (!app.doc.modified()) {
+        doPending(app, action, path);
+        return;
+    }
+    app.dialogs.pending = action;
+    app.dialogs.pendingPath = path;
+    app.dialogs.askUnsaved = true;
+}
+
+}  // namespace
+
+void actionNew(EditorApp& app) { askThen(app, PendingAction::New); }
+void actionOpen(EditorApp& app) { askThen(app, PendingAction::Open); }
+void actionOpenPath(EditorApp& app, const std::string& path) { askThen(app, PendingAction::OpenPath, path); }
+void actionQuit(EditorApp& app) { askThen(app, PendingAction::Quit); }
+
+void actionSave(EditorApp& app) {
+    if (app.doc.path().empty() || app.doc.readOnly()) actionSaveAs(app);
+    else saveBoardFile(app, app.doc.path());
+}
+
+void actionSaveAs(EditorApp& app) {
+    const std::string name = app.doc.path().empty() ? "untitled.board.json" : fs::path(app.doc.path()).filename().string();
+    app.chooser.open(FileChooser::Purpose::SaveBoard, folderOf(app.doc.path()), name);
+}
+
+// ---- dialogs -----------------------------------------------------------------------------------
+
+namespace {
+
+void centreNext() {
+    const ImVec2 d = ImGui::GetIO().DisplaySize;
+    ImGui::SetNextWindowPos({d.x * 0.5f, d.y * 0.5f}, ImGuiCond_Always, {0.5f, 0.5f});
+}
+
+void drawUnsavedPrompt(EditorApp& app) {
+    const char* title = "Unsaved changes";
+    if (app.dialogs.askUnsaved && !ImGui::IsPopupOpen(title)) ImGui::OpenPopup(title);
+    centreNext();
+    if (!ImGui::BeginPopupModal(title, nullptr, ImGuiWindowFlags_AlwaysAutoResize)) return;
+    ImGui::Text("The board has changes that are not saved.");
+    ImGui::Text("Save them first?");
+    ImGui::Spacing();
+    const PendingAction action = app.dialogs.pending;
+    const std::string path = app.dialogs.pendingPath;
+    auto close = [&] {
+        app.dialogs.askUnsaved = false;
+        app.dialogs.pending = PendingAction::None;
+        ImGui::CloseCurrentPopup();
+    };
+    if (ImGui::Button("Save", {110, 0})) {
+        if (!app.doc.path().empty() && !app.doc.readOnly()) {
+            close();
+            if (saveBoardFile(app, app.doc.path())) doPending(app, action, path);
+        } else {
+            // The pending action waits for the Save As chooser.
+            app.dialogs.askUnsaved = false;
+            ImGui::CloseCurrentPopup();
+            actionSaveAs(app);
+        }
+    }
+    ImGui::SameLine();
+    if (ImGui::Button("Don't save", {110, 0})) {
+        close();
+        doPending(app, action, path);
+    }
+    ImGui::SameLine();
+    if (ImGui::Button("Cancel", {110, 0})) close();
+    ImGui::EndPopup();
+}
+
+void drawMessage(const char* title, std::string& text, bool& clear) {
+    if (!text.empty() && !ImGui::IsPopupOpen(title)) ImGui::OpenPopup(title);
+    centreNext();
+    ImGui::SetNextWindowSizeConstraints({360, 0}, {760, 600});
+    if (!ImGui::BeginPopupModal(title, nullptr, ImGuiWindowFlags_AlwaysAutoResize)) return;
+    ImGui::PushTextWrapPos(ImGui::GetFontSize() * 40.0f);
+    ImGui::TextUnformatted(text.c_str());
+    ImGui::PopTextWrapPos();
+    ImGui::Spacing();
+    if (ImGui::Button("OK", {110, 0}) || ImGui::IsKeyPressed(ImGui::GetKeyIndex(ImGuiKey_Enter))) {
+        clear = true;
+        ImGui::CloseCurrentPopup();
+    }
+    ImGui::EndPopup();
+}
+
+void drawRecoveryOffer(EditorApp& app) {
+    const char* title = "Restore unsaved work?";
+    if (app.dialogs.recovery && !ImGui::IsPopupOpen(title)) ImGui::OpenPopup(title);
+    centreNext();
+    if (!ImGui::BeginPopupModal(title, nullptr, ImGuiWindowFlags_AlwaysAutoResize)) return;
+    const RecoveryFile& rec = *app.dialogs.recovery;
+    ImGui::Text("Stripsmith did not close properly last time.");
+    ImGui::Text("An automatic copy of the board you were working on was kept%s%s.",
+                rec.originalPath.empty() ? "" : " (", rec.originalPath.empty() ? "" : (rec.originalPath + ")").c_str());
+    ImGui::Spacing();
+    if (ImGui::Button("Restore", {110, 0})) {
+        auto result = netcheck::readBoard(rec.boardText, "recovered board");
+        if (result.ok()) {
+            app.doc.reset(std::move(*result.value), rec.originalPath, false, true);
+            startOver(app);
+            app.say("Restored the automatic copy; save it to keep it.");
+        } else {
+            showError(app, "Cannot restore", result.error ? result.error->describe() : "unreadable copy");
+        }
+        app.dialogs.recovery.reset();
+        ImGui::CloseCurrentPopup();
+    }
+    ImGui::SameLine();
+    if (ImGui::Button("Discard", {110, 0})) {
+        clearRecovery(app.recoveryDir);
+        app.dialogs.recovery.reset();
+        ImGui::CloseCurrentPopup();
+    }
+    ImGui::EndPopup();
+}
+
+}  // namespace
+
+void drawFileDialogs(EditorApp& app) {
+    const bool wasOpen = app.chooser.isOpen();
+    if (app.chooser.draw()) {
+        const std::string& path = app.chooser.chosen();
+        switch (app.chooser.purpose()) {
+        case FileChooser::Purpose::OpenBoard: loadBoardFile(app, path); break;
+        case FileChooser::Purpose::SaveBoard:
+            if (saveBoardFile(app, path) && app.dialogs.pending != PendingAction::None)
+                doPending(app, app.dialogs.pending, app.dialogs.pendingPath);
+            app.dialogs.pending = PendingAction::None;
+            break;
+        case FileChooser::Purpose::OpenCircuit:
+        case FileChooser::Purpose::ExportSheet: app.chosenForPanel = path; break;
+        }
+    } else if (wasOpen && !app.chooser.isOpen() && !app.dialogs.askUnsaved) {
+        app.dialogs.pending = PendingAction::None;  // Save As cancelled: so is what waited for it
+    }
+    drawUnsavedPrompt(app);
+    drawRecoveryOffer(app);
+    bool clearError = false, clearNotice = false;
+    std::string errorTitle = app.dialogs.errorTitle.empty() ? "Problem" : app.dialogs.errorTitle;
+    drawMessage(errorTitle.c_str(), app.dialogs.errorText, clearError);
+    drawMessage("Note", app.dialogs.notice, clearNotice);
+    if (clearError) app.dialogs.errorText.clear();
+    if (clearNotice) app.dialogs.notice.clear();
+}
+
+// ---- autosave -----------------------------------------------------------------------------------
+
+void tickAutosave(EditorApp& app, double seconds) {
+    if (app.recoveryDir.empty()) return;
+    app.sinceAutosave += seconds;
+    if (app.sinceAutosave < app.autosaveSeconds) return;
+    app.sinceAutosave = 0;
+    if (!app.doc.modified() || app.doc.revision() == app.autosavedRevision) return;
+    RecoveryFile rec{netcheck::writeBoard(app.doc.board()), app.doc.path()};
+    if (auto error = writeRecovery(app.recoveryDir, rec)) {
+        app.say("Autosave failed: " + *error);
+        return;
+    }
+    app.autosavedRevision = app.doc.revision();
+    app.say("Autosaved a recovery copy");
+}
+
+void endSession(EditorApp& app) {
+    if (!app.recoveryDir.empty()) clearRecovery(app.recoveryDir);
+}
+
+}  // namespace stripsmith

@@ -1,0 +1,67 @@
+// "Check": the live check's errors and warnings in the trade's words. Click one to see it on the
+// board; apply its suggested cut or link with one click (undoable).
+#include <string>
+
+#include <imgui.h>
+
+#include "editor/app/finding_fix.hpp"
+#include "editor/canvas/canvas.hpp"
+#include "editor/panels/panels.hpp"
+
+namespace stripsmith {
+namespace {
+
+void findingRow(EditorApp& app, const netcheck::Finding& finding, int index) {
+    ImGui::PushID(index);
+    const bool error = finding.severity == netcheck::Severity::Error;
+    const bool focused = app.view.focusedFinding && *app.view.focusedFinding == index;
+    ImGui::PushStyleColor(ImGuiCol_Text, error ? ImVec4(1.0f, 0.5f, 0.45f, 1.0f) : ImVec4(1.0f, 0.78f, 0.35f, 1.0f));
+    const std::string head = std::string(error ? "Error: " : "Warning: ") + finding.type;
+    if (ImGui::Selectable(head.c_str(), focused)) {
+        app.view.focusedFinding = focused ? std::nullopt : std::optional<int>(index);
+        if (!focused)
+            if (auto where = findingLocation(app.doc.board(), finding)) centreOn(app, *where);
+    }
+    ImGui::PopStyleColor();
+    ImGui::Indent();
+    ImGui::PushTextWrapPos(0.0f);
+    ImGui::TextUnformatted(finding.message.c_str());
+    if (!finding.fix.empty()) ImGui::TextDisabled("%s", finding.fix.c_str());
+    ImGui::PopTextWrapPos();
+    if (auto command = fixCommand(app.doc.board(), finding)) {
+        const std::string label = finding.suggestedCut ? "Apply cut " + netcheck::cutName(*finding.suggestedCut)
+                                                       : std::string(finding.suggestedLinks.size() > 1 ? "Add the links" : "Add the link");
+        if (ImGui::Button(label.c_str())) {
+            app.perform(std::move(command));
+            app.view.focusedFinding.reset();
+        }
+    }
+    ImGui::Unindent();
+    ImGui::Spacing();
+    ImGui::PopID();
+}
+
+}  // namespace
+
+void drawCheckPanel(EditorApp& app, ImVec2 pos, ImVec2 size) {
+    if (beginPanel("Check", pos, size)) {
+        const auto& report = app.doc.report();
+        if (!report.hasCircuit) ImGui::TextDisabled("No intended circuit: checking the board's own faults only.");
+        if (report.ok() && report.warnings.empty()) {
+            ImGui::TextColored({0.45f, 0.9f, 0.55f, 1.0f}, "All clear: no errors, no warnings.");
+        } else {
+            ImGui::Text("%zu error%s, %zu warning%s", report.errors.size(), report.errors.size() == 1 ? "" : "s",
+                        report.warnings.size(), report.warnings.size() == 1 ? "" : "s");
+        }
+        ImGui::Separator();
+        const int errors = static_cast<int>(report.errors.size());
+        // Copies: applying a fix re-runs the check and replaces the report mid-loop.
+        const auto findings = report.errors;
+        const auto warnings = report.warnings;
+        for (int i = 0; i < errors; ++i) findingRow(app, findings[static_cast<std::size_t>(i)], i);
+        for (std::size_t i = 0; i < warnings.size(); ++i) findingRow(app, warnings[i], errors + static_cast<int>(i));
+    }
+    ImGui::End();
+}
+
+}  // namespace stripsmith

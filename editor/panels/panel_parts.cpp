@@ -1,0 +1,105 @@
+// "Parts": tools, the part palette, off-board parts and options for the next placement.
+#include <algorithm>
+#include <array>
+#include <string>
+
+#include <imgui.h>
+#include <imgui_stdlib.h>
+
+#include "editor/panels/panels.hpp"
+#include "editor/tools/part_factory.hpp"
+#include "editor/tools/tools.hpp"
+#include "netcheck/part_kinds.hpp"
+
+namespace stripsmith {
+namespace {
+
+void toolButton(EditorApp& app, const char* label, Tool tool, const char* tip) {
+    const bool on = app.tool.tool == tool;
+    if (on) ImGui::PushStyleColor(ImGuiCol_Button, ImGui::GetStyleColorVec4(ImGuiCol_ButtonActive));
+    if (ImGui::Button(label, {ImGui::GetContentRegionAvail().x * 0.5f - 4, 0})) selectTool(app, tool);
+    if (on) ImGui::PopStyleColor();
+    if (ImGui::IsItemHovered()) ImGui::SetTooltip("%s", tip);
+}
+
+void placingOptions(EditorApp& app) {
+    auto& t = app.tool;
+    ImGui::Separator();
+    const netcheck::PartKind* kind = netcheck::findPartKind(t.placeKind);
+    ImGui::Text("Placing: %s", kind ? std::string(kind->label).c_str() : t.placeKind.c_str());
+    ImGui::SetNextItemWidth(-1);
+    ImGui::InputTextWithHint("##value", "value", &t.placeValue);
+    if (isTwoLead(t.placeKind)) {
+        ImGui::Checkbox("Stand on end", &t.standing);
+        ImGui::TextWrapped("Click both ends, or drag from one to the other. Click one hole twice for the usual span.");
+    } else {
+        if (t.placeKind == "ic" || t.placeKind == "header" || t.placeKind == "wire-terminal") {
+            ImGui::SetNextItemWidth(100);
+            ImGui::InputInt("pins", &t.pinCount, t.placeKind == "ic" ? 2 : 1);
+            t.pinCount = std::clamp(t.pinCount, t.placeKind == "ic" ? 4 : 1, 64);
+            if (t.placeKind == "ic" && t.pinCount % 2) ++t.pinCount;
+        }
+        ImGui::Text("Turned %d°", t.quarterTurns * 90);
+        ImGui::SameLine();
+        if (ImGui::SmallButton("Turn (R)")) t.quarterTurns = (t.quarterTurns + 1) % 4;
+        ImGui::TextWrapped("Click to place; pin 1 is ringed.");
+    }
+}
+
+void wireOptions(EditorApp& app) {
+    static constexpr std::array<const char*, 10> kColours{"red", "black", "yellow", "green", "blue",
+                                                         "white", "orange", "brown", "grey", "violet"};
+    ImGui::Separator();
+    ImGui::TextUnformatted("Wire colour");
+    ImGui::SetNextItemWidth(-1);
+    if (ImGui::BeginCombo("##wirecolour", app.tool.wireColour.c_str())) {
+        for (const char* c : kColours)
+            if (ImGui::Selectable(c, app.tool.wireColour == c)) app.tool.wireColour = c;
+        ImGui::EndCombo();
+    }
+    ImGui::TextWrapped("Click a lug or a hole, then the other end.");
+}
+
+}  // namespace
+
+void drawPartsPanel(EditorApp& app, ImVec2 pos, ImVec2 size) {
+    if (beginPanel("Parts", pos, size)) {
+        ImGui::TextUnformatted("Tools");
+        toolButton(app, "Select (V)", Tool::Select, "Click, shift-click or drag a box; drag to move");
+        ImGui::SameLine();
+        toolButton(app, "Link (L)", Tool::Link, "A wire link between two holes");
+        toolButton(app, "Cut (X)", Tool::Cut, "Click a hole for a hole cut, between two holes for a track cut");
+        ImGui::SameLine();
+        toolButton(app, "Wire (W)", Tool::Wire, "A flying lead from a lug to a hole or lug");
+        ImGui::Separator();
+        ImGui::TextUnformatted("On the board");
+        int column = 0;
+        for (const netcheck::PartKind& kind : netcheck::partKinds()) {
+            if (kind.offboard) continue;
+            const std::string name(kind.name);
+            const bool on = app.tool.tool == Tool::Place && app.tool.placeKind == name;
+            if (column++ % 2) ImGui::SameLine();
+            if (on) ImGui::PushStyleColor(ImGuiCol_Button, ImGui::GetStyleColorVec4(ImGuiCol_ButtonActive));
+            if (ImGui::Button(name.c_str(), {ImGui::GetContentRegionAvail().x * (column % 2 ? 0.5f : 1.0f) - 4, 0}))
+                startPlacing(app, name);
+            if (on) ImGui::PopStyleColor();
+            if (ImGui::IsItemHovered()) ImGui::SetTooltip("%s", std::string(kind.label).c_str());
+        }
+        if (app.tool.tool == Tool::Place) placingOptions(app);
+        if (app.tool.tool == Tool::Wire) wireOptions(app);
+        ImGui::Separator();
+        ImGui::TextUnformatted("Off the board (wired)");
+        column = 0;
+        for (const netcheck::PartKind& kind : netcheck::partKinds()) {
+            if (!kind.offboard) continue;
+            const std::string name(kind.name);
+            if (column++ % 2) ImGui::SameLine();
+            if (ImGui::Button(("+ " + name).c_str(), {ImGui::GetContentRegionAvail().x * (column % 2 ? 0.5f : 1.0f) - 4, 0}))
+                addOffboardPart(app, name);
+            if (ImGui::IsItemHovered()) ImGui::SetTooltip("Add a %s beside the board", std::string(kind.label).c_str());
+        }
+    }
+    ImGui::End();
+}
+
+}  // namespace stripsmith

@@ -1,0 +1,82 @@
+// The status line: hovered hole and the net it carries, board size, zoom, last action.
+#include <string>
+
+#include <imgui.h>
+
+#include "editor/panels/panels.hpp"
+
+namespace stripsmith {
+
+namespace {
+
+std::string hoverText(const EditorApp& app) {
+    std::string text;
+    if (app.hoverHole) text = netcheck::holeName(*app.hoverHole);
+    else if (app.hoverLug) text = app.hoverLug->name();
+    else return {};
+    if (app.hoverHole && app.doc.connectivity().isHoleCut(*app.hoverHole)) return text + "  (hole cut: no copper)";
+    if (app.hoverIsland < 0) return text;
+    if (auto net = app.doc.netOfIsland(app.hoverIsland)) return text + "  net " + *net;
+    const auto& islands = app.doc.islands();
+    const auto& island = islands[static_cast<std::size_t>(app.hoverIsland)];
+    if (island.pins.empty()) return text + "  (no pins joined)";
+    std::string pins;
+    for (std::size_t i = 0; i < island.pins.size() && i < 4; ++i) pins += (i ? ", " : "") + island.pins[i].name();
+    if (island.pins.size() > 4) pins += ", ...";
+    return text + "  joins " + pins;
+}
+
+const char* toolHint(const EditorApp& app) {
+    switch (app.tool.tool) {
+    case Tool::Select: return "Select: click, shift-click, drag a box; drag to move; arrows nudge";
+    case Tool::Place: return "Place: click the ends (or drag); R turns; Esc stops";
+    case Tool::Link: return "Link: click two holes";
+    case Tool::Cut: return "Cut: click a hole or the gap between two holes; again to remove";
+    case Tool::Wire: return "Wire: click a lug or hole, then the other end";
+    }
+    return "";
+}
+
+}  // namespace
+
+void drawStatusBar(EditorApp& app, ImVec2 pos, ImVec2 size) {
+    if (beginPanel("##status", pos, size)) {
+        const auto& board = app.doc.board();
+        const std::string hover = hoverText(app);
+        ImGui::Text("%s", hover.empty() ? toolHint(app) : hover.c_str());
+        ImGui::SameLine(size.x * 0.45f);
+        ImGui::Text("%d x %d holes (%.1f x %.1f mm)", board.cols, board.rows, board.widthMm(), board.heightMm());
+        ImGui::SameLine(size.x * 0.68f);
+        ImGui::TextDisabled("%s", app.status.c_str());
+    }
+    ImGui::End();
+}
+
+void drawHelpWindow(EditorApp& app) {
+    if (!app.view.showHelp) return;
+    ImGui::SetNextWindowSize({520, 0}, ImGuiCond_FirstUseEver);
+    if (ImGui::Begin("Keys", &app.view.showHelp)) {
+        static constexpr const char* kKeys[][2] = {
+            {"V / L / X / W", "select / link / cut / wire tool"},
+            {"R", "turn the part being placed or the selected parts"},
+            {"Arrows", "nudge the selection one hole"},
+            {"Del, Backspace", "delete the selection"},
+            {"Ctrl+C / Ctrl+V / Ctrl+D", "copy / paste at the mouse / duplicate"},
+            {"Ctrl+Z / Ctrl+Y", "undo / redo (Ctrl+Shift+Z redoes too)"},
+            {"Ctrl+N / Ctrl+O / Ctrl+S", "new / open / save (Ctrl+Shift+S: save as)"},
+            {"Tab", "component side -> copper side -> see-through"},
+            {"F", "fit the board in view"},
+            {"Wheel", "zoom around the mouse"},
+            {"Middle or right drag, Space+drag", "pan"},
+            {"Esc", "stop the current tool"},
+        };
+        for (const auto& row : kKeys) {
+            ImGui::TextUnformatted(row[0]);
+            ImGui::SameLine(230);
+            ImGui::TextDisabled("%s", row[1]);
+        }
+    }
+    ImGui::End();
+}
+
+}  // namespace stripsmith

@@ -1,0 +1,213 @@
+// Place tool (two-lead parts by their ends, multi-pin parts as a unit), link, cut and wire tools.
+//
+// Sections: helpers | place | link | cut | wire | switching tools.
+#include <algorithm>
+
+#include "editor/canvas/palette.hpp"
+#include "editor/tools/part_factory.hpp"
+#include "editor/tools/ref_names.hpp"
+#include "editor/tools/tools.hpp"
+#include "netcheck/edit/edit.hpp"
+#include "netcheck/part_kinds.hpp"
+
+namespace stripsmith {
+
+using netcheck::Hole;
+using netcheck::edit::ElementRef;
+
+namespace {
+
+// ---- helpers ---------------------------------------------------------------------------------
+
+void ghostLine(const CanvasFrame& f, ImVec2 a, ImVec2 b) {
+    f.draw->AddLine(a, b, palette::kGhost, std::max(3.0f, f.t.len(0.25f)));
+    f.draw->AddCircleFilled(a, f.t.len(0.25f), palette::kGhost, 12);
+    f.draw->AddCircleFilled(b, f.t.len(0.25f), palette::kGhost, 12);
+}
+
+void ghostPart(const CanvasFrame& f, const netcheck::Part& part, bool fits) {
+    const ImU32 colour = fits ? palette::kGhost : palette::rgba(240, 60, 60, 150);
+    for (std::size_t i = 0; i < part.pins.size(); ++i) {
+        const ImVec2 p = f.hole(part.pins[i].hole);
+        f.draw->AddCircleFilled(p, f.t.len(0.3f), colour, 12);
+        if (i > 0 && part.pins.size() == 2) f.draw->AddLine(f.hole(part.pins[0].hole), p, colour, f.t.len(0.3f));
+    }
+    if (part.pins.size() > 2) {
+        // Pin 1 ringed so the orientation is clear before the click.
+        f.draw->AddCircle(f.hole(part.pins[0].hole), f.t.len(0.45f), colour, 16, 2.0f);
+    }
+}
+
+void selectOnly(EditorApp& app, ElementRef::Kind kind, std::size_t index) { app.selection = {ElementRef{kind, index}}; }
+
+void addPart(EditorApp& app, netcheck::Part part) {
+    const auto& board = app.doc.board();
+    if (!fitsOnBoard(part, board)) {
+        app.say("That part would not fit on the board there.");
+        return;
+    }
+    if (app.tool.standing && part.pins.size() == 2) part.extra["body"] = "standing";
+    if (app.perform(std::make_unique<netcheck::edit::AddPart>(part)))
+        selectOnly(app, ElementRef::Kind::Part, app.doc.board().parts.size() - 1);
+}
+
+netcheck::Part twoLead(EditorApp& app, Hole a, Hole b) {
+    const auto& board = app.doc.board();
+    return makeTwoLeadPart(app.tool.placeKind, nextFreeRef(board, refPrefix(app.tool.placeKind)),
+                           app.tool.placeValue, a, b);
+}
+
+netcheck::Part multiPin(EditorApp& app, Hole anchor) {
+    const auto& board = app.doc.board();
+    const bool counted = app.tool.placeKind == "ic" || app.tool.placeKind == "header" ||
+                         app.tool.placeKind == "wire-terminal";
+    const int pins = counted ? app.tool.pinCount : defaultPinCount(app.tool.placeKind);
+    return makeMultiPinPart(app.tool.placeKind, nextFreeRef(board, refPrefix(app.tool.placeKind)),
+                            app.tool.placeValue, anchor, app.tool.quarterTurns, pins);
+}
+
+}  // namespace
+
+// ---- place -------------------------------------------------------------------------------------
+
+void runPlaceTool(EditorApp& app, const CanvasInput& in, const CanvasFrame& f) {
+    auto& t = app.tool;
+    if (!isTwoLead(t.placeKind)) {
+        if (!in.hole) return;
+        const netcheck::Part part = multiPin(app, *in.hole);
+        ghostPart(f, part, fitsOnBoard(part, app.doc.board()));
+        if (in.pressed && in.hovered) addPart(app, part);
+        return;
+    }
+    // Two-lead: click one end then the other, or drag from one end to the other. A click-click on
+    // the same hole places the default span.
+    if (in.pressed && in.hovered && in.hole) {
+        if (!t.firstEnd) {
+            t.firstEnd = *in.hole;
+            t.pressHole = *in.hole;
+        } else {
+            const Hole second = *in.hole == *t.firstEnd ? defaultSecondHole(t.placeKind, *t.firstEnd, t.standing) : *in.hole;
+            addPart(app, twoLead(app, *t.firstEnd, second));
+            t.firstEnd.reset();
+        }
+    } else if (in.released && t.firstEnd && t.pressHole && in.hole && *in.hole != *t.pressHole) {
+        addPart(app, twoLead(app, *t.firstEnd, *in.hole));
+        t.firstEnd.reset();
+    }
+    if (in.released) t.pressHole.reset();
+    if (t.firstEnd && in.hole) {
+        const Hole second = *in.hole == *t.firstEnd ? defaultSecondHole(t.placeKind, *t.firstEnd, t.standing) : *in.hole;
+        ghostPart(f, twoLead(app, *t.firstEnd, second), app.doc.board().contains(second));
+    } else if (in.hole) {
+        const Hole second = defaultSecondHole(t.placeKind, *in.hole, t.standing);
+        ghostPart(f, twoLead(app, *in.hole, second), app.doc.board().contains(second));
+    }
+}
+
+// ---- link --------------------------------------------------------------------------------------
+
+void runLinkTool(EditorApp& app, const CanvasInput& in, const CanvasFrame& f) {
+    auto& t = app.tool;
+    auto place = [&](Hole a, Hole b) {
+        if (a == b) return;
+        netcheck::Link link;
+        link.from = a;
+        link.to = b;
+        if (app.perform(std::make_unique<netcheck::edit::AddLink>(link)))
+            selectOnly(app, ElementRef::Kind::Link, app.doc.board().links.size() - 1);
+        t.firstEnd.reset();
+    };
+    if (in.pressed && in.hovered && in.hole) {
+        if (!t.firstEnd) {
+            t.firstEnd = *in.hole;
+            t.pressHole = *in.hole;
+        } else {
+            place(*t.firstEnd, *in.hole);
+        }
+    } else if (in.released && t.firstEnd && t.pressHole && in.hole && *in.hole != *t.pressHole) {
+        place(*t.firstEnd, *in.hole);
+    }
+    if (in.released) t.pressHole.reset();
+    if (t.firstEnd && in.hole) ghostLine(f, f.hole(*t.firstEnd), f.hole(*in.hole));
+    else if (in.hole) f.draw->AddCircle(f.hole(*in.hole), f.t.len(0.35f), palette::kGhost, 14, 2.0f);
+}
+
+// ---- cut ---------------------------------------------------------------------------------------
+
+void runCutTool(EditorApp& app, const CanvasInput& in, const CanvasFrame& f) {
+    const auto& board = app.doc.board();
+    const auto cut = cutAt(in.board, board.rows, board.cols);
+    if (!cut) return;
+    if (cut->kind == netcheck::Cut::Kind::Hole) {
+        f.draw->AddCircle(f.hole(cut->hole), f.t.len(0.44f), palette::kGhost, 18, 3.0f);
+    } else {
+        const float x = static_cast<float>(cut->hole.col) + 1.0f, y = static_cast<float>(cut->hole.row) + 0.5f;
+        f.draw->AddLine(f.at({x, y - 0.5f}), f.at({x, y + 0.5f}), palette::kGhost, 4.0f);
+    }
+    if (in.pressed && in.hovered) app.perform(netcheck::edit::toggleCut(board, *cut));
+}
+
+// ---- wire --------------------------------------------------------------------------------------
+
+void runWireTool(EditorApp& app, const CanvasInput& in, const CanvasFrame& f) {
+    auto& t = app.tool;
+    const auto& board = app.doc.board();
+    std::optional<netcheck::Endpoint> here;
+    if (in.lug) here = netcheck::Endpoint::atLug(*in.lug);
+    else if (in.hole && board.contains(*in.hole)) here = netcheck::Endpoint::atHole(*in.hole);
+    if (here) {
+        if (auto p = endpointPosition(board, f.spots, *here))
+            f.draw->AddCircle(f.at(*p), f.t.len(0.4f), palette::kGhost, 16, 2.5f);
+    }
+    if (t.wireStart) {
+        const auto a = endpointPosition(board, f.spots, *t.wireStart);
+        if (a) f.draw->AddLine(f.at(*a), f.at(here ? *endpointPosition(board, f.spots, *here) : in.board),
+                               palette::wireColour(t.wireColour.c_str()), std::max(3.0f, f.t.len(0.18f)));
+    }
+    if (!(in.pressed && in.hovered && here)) return;
+    if (!t.wireStart) {
+        t.wireStart = here;
+        return;
+    }
+    if (*t.wireStart == *here) return;
+    netcheck::Wire wire;
+    wire.from = *t.wireStart;
+    wire.to = *here;
+    wire.color = t.wireColour;
+    if (app.perform(std::make_unique<netcheck::edit::AddWire>(wire)))
+        selectOnly(app, ElementRef::Kind::Wire, app.doc.board().wires.size() - 1);
+    t.wireStart.reset();
+}
+
+// ---- switching tools ----------------------------------------------------------------------------
+
+void selectTool(EditorApp& app, Tool tool) {
+    app.tool.cancel();
+    app.tool.tool = tool;
+}
+
+void startPlacing(EditorApp& app, const std::string& kind) {
+    selectTool(app, Tool::Place);
+    app.tool.placeKind = kind;
+    app.tool.placeValue = defaultValue(kind);
+    app.tool.quarterTurns = 0;
+    app.tool.pinCount = defaultPinCount(kind);
+}
+
+void addOffboardPart(EditorApp& app, const std::string& kind) {
+    const netcheck::PartKind* k = netcheck::findPartKind(kind);
+    netcheck::OffboardPart part;
+    part.kind = kind;
+    part.ref = nextFreeRef(app.doc.board(), refPrefix(kind));
+    part.value = defaultValue(kind);
+    if (k && !k->pins.empty()) {
+        for (std::string_view n : k->pins) part.pins.emplace_back(n);
+    } else {
+        // Switches: a common on-on toggle has three lugs.
+        part.pins = {"1", "2", "3"};
+    }
+    if (app.perform(std::make_unique<netcheck::edit::AddOffboard>(part)))
+        selectOnly(app, ElementRef::Kind::Offboard, app.doc.board().offboard.size() - 1);
+}
+
+}  // namespace stripsmith
