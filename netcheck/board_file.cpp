@@ -168,7 +168,7 @@ private:
         const std::string ref = r_.stringMember(object, "ref", true);
         const std::string where = r_.pathText();
         const auto step = r_.enter("ref");
-        r_.expectName(ref, "ref");
+        r_.expectRef(ref);
         const auto [it, fresh] = refWhere_.emplace(ref, where);
         if (!fresh) r_.fail("duplicate ref " + inQuotes(ref) + " (also at " + it->second + ")");
         if (refWhere_.size() > limits_.maxParts) {
@@ -188,7 +188,7 @@ private:
         r_.expectObject(pins);
         for (const auto& [name, hole] : pins.items()) {
             const auto at = r_.enter(name);
-            r_.expectName(name, "pin name");
+            r_.expectPinName(name, "pin name");
             part.pins.push_back(Pin{name, holeAt(hole)});
         }
         part.extra = JsonReader::extras(object, {"ref", "kind", "value", "pins"});
@@ -223,7 +223,7 @@ private:
         std::set<std::string_view> seen;
         for (std::size_t i = 0; i < part.pins.size(); ++i) {
             const auto at = r_.enter(i);
-            r_.expectName(part.pins[i], "lug name");
+            r_.expectPinName(part.pins[i], "lug name");
             if (!seen.insert(part.pins[i]).second) {
                 r_.fail("lug " + inQuotes(part.pins[i]) + " is listed twice");
             }

@@ -18,7 +18,7 @@ CircuitPart readCircuitPart(JsonReader& reader, const Json& object) {
         part.pins = reader.asStringArray(*pins);
         for (std::size_t i = 0; i < part.pins.size(); ++i) {
             const auto at = reader.enter(i);
-            reader.expectName(part.pins[i], "pin name");
+            reader.expectPinName(part.pins[i], "pin name");
         }
     }
     part.extra = JsonReader::extras(object, {"kind", "value", "pins"});
@@ -32,7 +32,7 @@ void readParts(JsonReader& reader, const Json& parts, const ReadLimits& limits, 
     }
     for (const auto& [ref, object] : parts.items()) {
         const auto step = reader.enter(ref);
-        reader.expectName(ref, "ref");
+        reader.expectRef(ref);
         circuit.parts[ref] = readCircuitPart(reader, object);
     }
 }
@@ -50,7 +50,7 @@ void readNets(JsonReader& reader, const Json& nets, Circuit& circuit) {
             const std::string text = reader.asString(list[i]);
             const auto pin = PinRef::parse(text);
             if (!pin) reader.fail("pin " + inQuotes(text) + " is not written REF.PIN (like R1.2)");
-            reader.expectName(pin->ref, "ref");
+            reader.expectRef(pin->ref);
             const auto [it, fresh] = netOfPin.emplace(*pin, name);
             if (!fresh) {
                 reader.fail(it->second == name

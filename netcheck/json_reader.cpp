@@ -182,7 +182,18 @@ std::vector<std::string> JsonReader::asStringArray(const Json& value) {
     return strings;
 }
 
-void JsonReader::expectName(std::string_view name, std::string_view what) const {
+void JsonReader::expectRef(std::string_view ref) const {
+    if (ref.empty()) fail("ref is empty");
+    // A '.' is allowed: "X1.R1.2" still splits at the last '.' (flattened subcircuit parts).
+    for (char c : ref) {
+        if (std::isspace(static_cast<unsigned char>(c)) ||
+            std::iscntrl(static_cast<unsigned char>(c))) {
+            fail("ref " + inQuotes(ref) + " may not contain blanks");
+        }
+    }
+}
+
+void JsonReader::expectPinName(std::string_view name, std::string_view what) const {
     if (name.empty()) fail(std::string(what) + " is empty");
     for (char c : name) {
         if (c == '.' || std::isspace(static_cast<unsigned char>(c)) ||

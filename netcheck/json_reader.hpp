@@ -73,8 +73,11 @@ public:
     long long asInteger(const Json& value) const;
     /// Array of strings at the current path.
     std::vector<std::string> asStringArray(const Json& value);
-    /// Fails unless `name` is a usable ref or pin name (non-empty, no blanks, no '.').
-    void expectName(std::string_view name, std::string_view what) const;
+    /// Fails unless `ref` is a usable reference designator (non-empty, no blanks).
+    void expectRef(std::string_view ref) const;
+    /// Fails unless `name` is a usable pin or lug name (non-empty, no blanks, no '.', since
+    /// "REF.PIN" splits at the last '.').
+    void expectPinName(std::string_view name, std::string_view what) const;
 
     /// Unknown members of an object, kept for writing back.
     static nlohmann::json extras(const Json& object, std::initializer_list<std::string_view> known);

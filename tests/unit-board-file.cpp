@@ -196,6 +196,15 @@ TEST_CASE("circuit file") {
     const auto again = readCircuit(writeCircuit(circuit), "again");
     REQUIRE(again.ok());
     CHECK(*again.value == circuit);
+
+    SUBCASE("refs of flattened subcircuits may hold a '.'") {
+        const auto flat = readCircuit(R"({"parts": {"X1.R1": {"kind": "resistor", "value": "1k"}},
+            "nets": {"IN": ["X1.R1.1"]}})",
+                                      "flat.circuit.json");
+        REQUIRE(flat.ok());
+        CHECK(flat.value->nets.at("IN") == std::vector<PinRef>{{"X1.R1", "1"}});
+        CHECK(readCircuit(writeCircuit(*flat.value), "again").value == flat.value);
+    }
 }
 
 TEST_CASE("board file samples") {
