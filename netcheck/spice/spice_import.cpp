@@ -47,7 +47,8 @@ Circuit buildCircuit(const std::vector<ElementPart>& parts, const spice::NodeNam
                                            ") is used twice (also line " +
                                            std::to_string(refLines.at(part.ref)) + ")"};
         }
-        circuit.parts[part.ref] = CircuitPart{part.kind, part.value, part.pins, {}};
+        circuit.parts[part.ref] =
+            CircuitPart{part.kind, part.value, part.pins, nlohmann::json::object()};
         for (std::size_t i = 0; i < part.pins.size(); ++i) {
             const std::string net = netName(part.nodes[i], names, overrides, options);
             if (net.empty()) continue;  // `*@net NODE` without a name: the pin is left unconnected
