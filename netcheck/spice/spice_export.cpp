@@ -183,7 +183,9 @@ private:
             }
         }
         if (readPins != part.pins) body_.push_back("*@pins " + name + join(part.pins));
-        if (readValue != part.value) body_.push_back("*@value " + name + " " + part.value);
+        if (readValue != part.value) {
+            body_.push_back("*@value " + name + (part.value.empty() ? "" : " " + part.value));
+        }
         if (spice::refForName(name) != ref) body_.push_back("*@ref " + name + " " + ref);
     }
 

@@ -109,31 +109,18 @@ std::optional<SpiceNumber> parseSpiceNumber(std::string_view field) {
 
 std::string formatSpiceNumber(double value, int digits) {
     if (value == 0) return "0";
-    // Suffixes from large to small; milli is written "m" because SPICE reads it as milli.
-    static constexpr std::array<Suffix, 10> kWrite{{{"t", 1e12},
-                                                   {"g", 1e9},
-                                                   {"meg", 1e6},
-                                                   {"k", 1e3},
-                                                   {"", 1},
-                                                   {"m", 1e-3},
-                                                   {"u", 1e-6},
-                                                   {"n", 1e-9},
-                                                   {"p", 1e-12},
-                                                   {"f", 1e-15}}};
     const double size = std::fabs(value);
-    const Suffix* pick = &kWrite.back();
-    for (const Suffix& s : kWrite) {
-        if (size >= s.scale * (1 - 1e-12)) {
-            pick = &s;
-            break;
-        }
-    }
+    char buf[40];
     if (size >= 1e15 || size < 1e-15) {
-        char buf[40];
         std::snprintf(buf, sizeof buf, "%.*g", digits, value);
         return buf;
     }
-    char buf[40];
+    // The largest scale not above the value; MIL is a length unit, not a scale to write with.
+    const Suffix* pick = nullptr;
+    for (const Suffix& s : kSuffixes) {
+        if (s.text == "mil" || size < s.scale * (1 - 1e-12)) continue;
+        if (pick == nullptr || s.scale > pick->scale) pick = &s;
+    }
     std::snprintf(buf, sizeof buf, "%.*g", digits, value / pick->scale);
     return std::string(buf) + std::string(pick->text);
 }
