@@ -8,7 +8,9 @@ namespace netcheck {
 ReadResult<Circuit> loadCircuitText(std::string_view text, std::string_view fileName,
                                     const ReadLimits& limits) {
     // SPICE decks (.cir, .sp, .spice, .net, .ckt, or text that is not JSON) with default options.
-    if (looksLikeSpiceDeck(text, fileName)) return importSpice(text, fileName, SpiceOptions{}, limits);
+    if (looksLikeSpiceDeck(text, fileName)) {
+        return importSpice(text, fileName, SpiceOptions{}, limits);
+    }
     return readCircuit(text, fileName, limits);
 }
 

@@ -60,7 +60,8 @@ void checkSameParts(const Circuit& expected, const Circuit& got) {
 }
 
 CircuitPart part(std::string kind, std::string value, std::vector<std::string> pins) {
-    return CircuitPart{std::move(kind), std::move(value), std::move(pins), nlohmann::json::object()};
+    return CircuitPart{std::move(kind), std::move(value), std::move(pins),
+                       nlohmann::json::object()};
 }
 
 }  // namespace
@@ -89,7 +90,8 @@ TEST_CASE("spice export round trip") {
                 CAPTURE(flatten);
                 netcheck::SpiceOptions options;
                 options.flatten = flatten;
-                const auto first = netcheck::importSpice(test_support::readTextFile(file), file, options);
+                const auto first =
+                    netcheck::importSpice(test_support::readTextFile(file), file, options);
                 REQUIRE(first.ok());
                 checkSameParts(*first.value, roundTrip(*first.value));
             }
@@ -100,7 +102,8 @@ TEST_CASE("spice export round trip") {
         c.parts["r1"] = part("resistor", "4.7 kOhm", {"1", "2"});
         c.parts["XTAL1"] = part("crystal", "16 MHz", {"1", "2"});
         c.parts["VR1"] = part("pot", "B100k", {"1", "2", "3"});
-        c.parts["VR2"] = part("pot", "10k", {"1", "2", "3"});  // lugs 1 and 3 joined: not two resistors
+        c.parts["VR2"] =
+            part("pot", "10k", {"1", "2", "3"});  // lugs 1 and 3 joined: not two resistors
         c.parts["C1"] = part("electrolytic", "100uF 25V", {"+", "-"});
         c.parts["LED1"] = part("led", "", {"A", "K"});
         c.parts["Q1"] = part("bjt", "BC547 B", {"C", "B", "E"});
@@ -144,13 +147,13 @@ TEST_CASE("spice export round trip") {
     SUBCASE("random circuits (fixed seed)") {
         std::mt19937 random(20261201);
         const auto kinds = netcheck::partKinds();
-        const std::vector<std::string> netNames = {"VCC", "GND", "gnd", "0", "OUT", "out", "V+",
-                                                   "N$3", "X1.n", "in put", "n1", "N1", "-"};
-        const std::vector<std::string> values = {"", "4k7", "100n", "2M2", "1u", "BC547", "TL072",
-                                                 "470R", "10k log", "A100k", "red 5 mm", "1m",
-                                                 "22pF", "NE555", "1.5"};
-        const std::vector<std::string> refStarts = {"R", "C", "L", "D", "Q", "J", "M", "X", "U",
-                                                    "VR", "SW", "x", "r", "LED", "BT", "X1.R"};
+        const std::vector<std::string> netNames = {
+            "VCC", "GND", "gnd", "0", "OUT", "out", "V+", "N$3", "X1.n", "in put", "n1", "N1", "-"};
+        const std::vector<std::string> values = {"",         "4k7",   "100n", "2M2",     "1u",
+                                                 "BC547",    "TL072", "470R", "10k log", "A100k",
+                                                 "red 5 mm", "1m",    "22pF", "NE555",   "1.5"};
+        const std::vector<std::string> refStarts = {"R", "C",  "L",  "D", "Q", "J",   "M",  "X",
+                                                    "U", "VR", "SW", "x", "r", "LED", "BT", "X1.R"};
         for (int round = 0; round < 300; ++round) {
             CAPTURE(round);
             Circuit c;
@@ -159,9 +162,11 @@ TEST_CASE("spice export round trip") {
                 const netcheck::PartKind& kind = kinds[random() % kinds.size()];
                 std::vector<std::string> pins(kind.pins.begin(), kind.pins.end());
                 if (pins.empty()) {
-                    for (unsigned i = 1; i <= 1 + random() % 6; ++i) pins.push_back(std::to_string(i));
+                    for (unsigned i = 1; i <= 1 + random() % 6; ++i)
+                        pins.push_back(std::to_string(i));
                 }
-                const std::string ref = refStarts[random() % refStarts.size()] + std::to_string(p + 1);
+                const std::string ref =
+                    refStarts[random() % refStarts.size()] + std::to_string(p + 1);
                 c.parts[ref] = part(std::string(kind.name), values[random() % values.size()],
                                     random() % 5 == 0 ? std::vector<std::string>{} : pins);
                 for (const std::string& pin : pins) {

@@ -57,8 +57,8 @@ std::string runNgspice(const std::string& deckText, const std::string& commands)
     writeFile(folder / "deck.cir", deckText);
     writeFile(folder / "wrapper.cir",
               "* wrapper\n.control\nsource deck.cir\n" + commands + "quit\n.endc\n.end\n");
-    const std::string command = "cd '" + folder.string() +
-                                "' && ngspice -n -b wrapper.cir > output.txt 2>&1";
+    const std::string command =
+        "cd '" + folder.string() + "' && ngspice -n -b wrapper.cir > output.txt 2>&1";
     CHECK(std::system(command.c_str()) == 0);
     return test_support::readTextFile((folder / "output.txt").string());
 }
@@ -137,8 +137,9 @@ TEST_CASE("spice numbers as ngspice reads them") {
     // Each token is a resistance; ngspice prints what it read. REFERENCE-FACTS: ngspice 39 reads
     // 4K7 as 4000 and 2M2 as 0.002 (SPICE rules, not IEC 60062).
     const std::vector<std::string> tokens = {
-        "4K7", "2M2", "2k5", "4R7", "10Kohm", "1MEG", "2.2Meg", "2.2u", "1mil", "5T", "3G", "7F",
-        "1.5e3k", ".5", "1e-2meg", "100n", "47p", "10Volts", "1m", "1M", "330", "1E3"};
+        "4K7",  "2M2",     "2k5", "4R7", "10Kohm", "1MEG", "2.2Meg",  "2.2u",
+        "1mil", "5T",      "3G",  "7F",  "1.5e3k", ".5",   "1e-2meg", "100n",
+        "47p",  "10Volts", "1m",  "1M",  "330",    "1E3"};
     std::string deck = "numbers\n";
     for (std::size_t i = 0; i < tokens.size(); ++i) {
         deck += "r" + std::to_string(i) + " 1 0 " + tokens[i] + "\n";
@@ -199,7 +200,8 @@ TEST_CASE("spice flattened import against ngspice's listing") {
                 CAPTURE(part.pins[i]);
                 CHECK(fields[i + 1] == ngspiceNode(circuit, ref, part.pins[i]));
             }
-            if (letter == 'm' && part.pins.size() == 3) CHECK(fields[4] == fields[3]);  // bulk = source
+            if (letter == 'm' && part.pins.size() == 3)
+                CHECK(fields[4] == fields[3]);  // bulk = source
             if (letter == 'r' || letter == 'c' || letter == 'l') {
                 // The value ngspice was given, read the SPICE way, equals ours read the board way.
                 std::optional<netcheck::spice::SpiceNumber> number;
@@ -241,7 +243,8 @@ TEST_CASE("spice decks and exports parse in ngspice without error") {
         if (board.ok() && board.value->circuit) circuits.emplace_back(file, *board.value->circuit);
     }
     for (const auto& [name, circuit] : circuits) {
-        decks.emplace_back("export of " + name, netcheck::exportSpice(circuit, "export of " + name));
+        decks.emplace_back("export of " + name,
+                           netcheck::exportSpice(circuit, "export of " + name));
     }
     for (const auto& [name, text] : decks) {
         CAPTURE(name);
@@ -255,7 +258,8 @@ TEST_CASE("spice decks and exports parse in ngspice without error") {
         std::string line;
         std::getline(lines, line);  // title
         while (std::getline(lines, line)) {
-            if (!line.empty() && std::string("RCLDQJMrcldqjm").find(line[0]) != std::string::npos) ++written;
+            if (!line.empty() && std::string("RCLDQJMrcldqjm").find(line[0]) != std::string::npos)
+                ++written;
         }
         CHECK(listedElements(output).size() == written);
     }

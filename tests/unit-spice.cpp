@@ -17,7 +17,8 @@ using netcheck::SpiceOptions;
 
 namespace {
 
-netcheck::ReadResult<Circuit> importText(const std::string& text, const SpiceOptions& options = {}) {
+netcheck::ReadResult<Circuit> importText(const std::string& text,
+                                         const SpiceOptions& options = {}) {
     return netcheck::importSpice(text, "deck.cir", options);
 }
 
@@ -49,7 +50,9 @@ bool hasNote(const netcheck::ReadResult<Circuit>& result, const std::string& par
 }
 
 // Relative 1e-9, as sameValue compares values.
-bool near(double a, double b) { return std::abs(a - b) <= 1e-9 * std::max(std::abs(a), std::abs(b)); }
+bool near(double a, double b) {
+    return std::abs(a - b) <= 1e-9 * std::max(std::abs(a), std::abs(b));
+}
 
 double spiceValue(const std::string& field) {
     const auto n = netcheck::spice::parseSpiceNumber(field);
@@ -79,7 +82,8 @@ TEST_CASE("spice numbers") {
         CHECK(near(spiceValue("4.7k"), 4700));
         CHECK(near(spiceValue("1m"), spiceValue("1M")));
     }
-    SUBCASE("letters after a number or suffix are ignored (ngspice manual, ch. 2: 10, 10V, 10Volts)") {
+    SUBCASE(
+        "letters after a number or suffix are ignored (ngspice manual, ch. 2: 10, 10V, 10Volts)") {
         CHECK(near(spiceValue("10"), 10));
         CHECK(near(spiceValue("10V"), 10));
         CHECK(near(spiceValue("10Volts"), 10));
@@ -137,7 +141,8 @@ TEST_CASE("spice numbers") {
 }
 
 TEST_CASE("spice deck lines") {
-    SUBCASE("the first line is the title even when it looks like an element (ngspice manual, ch. 2)") {
+    SUBCASE(
+        "the first line is the title even when it looks like an element (ngspice manual, ch. 2)") {
         const Circuit c = imported("R9 a b 1k\nR1 a b 1k\n.end\n");
         CHECK(c.parts.size() == 1);
         CHECK(c.parts.count("R1") == 1);
@@ -178,14 +183,16 @@ TEST_CASE("spice deck lines") {
               "deck.cir:3: duplicate element name R1 (first on line 2)");
     }
     SUBCASE(".end ends the deck; other dot-commands are noted") {
-        const auto result = importText("t\nR1 a b 1k\n.tran 1u 1m\n.option TEMP=27\n.end\nR2 a b 1k\n");
+        const auto result =
+            importText("t\nR1 a b 1k\n.tran 1u 1m\n.option TEMP=27\n.end\nR2 a b 1k\n");
         REQUIRE(result.ok());
         CHECK(result.value->parts.size() == 1);
         CHECK(hasNote(result, "deck.cir:3: .tran ignored"));
         CHECK(hasNote(result, "deck.cir:4: .option ignored"));
     }
     SUBCASE(".control blocks are left out") {
-        const auto result = importText("t\nR1 a b 1k\n.control\nR5 a b 1k\nrun\n.endc\nR2 a b 1k\n");
+        const auto result =
+            importText("t\nR1 a b 1k\n.control\nR5 a b 1k\nrun\n.endc\nR2 a b 1k\n");
         REQUIRE(result.ok());
         CHECK(result.value->parts.size() == 2);
         CHECK(hasNote(result, "deck.cir:3: .control block ignored"));
@@ -209,7 +216,8 @@ TEST_CASE("spice elements") {
         CHECK(netOf(c, "L1", "2") == "d");
     }
     SUBCASE("values compare numerically with board values (board rules: IEC 60062, M mega)") {
-        const Circuit c = imported("t\nR1 a b 4.7K\nC1 b c 100n\nL1 c d 10mH\nR2 a b 1M\nR3 a b 2.2MEG\n");
+        const Circuit c =
+            imported("t\nR1 a b 4.7K\nC1 b c 100n\nL1 c d 10mH\nR2 a b 1M\nR3 a b 2.2MEG\n");
         CHECK(netcheck::sameValue(c.parts.at("R1").value, "4k7"));
         CHECK(netcheck::sameValue(c.parts.at("C1").value, "100nF"));
         CHECK(netcheck::sameValue(c.parts.at("L1").value, "10mH"));
@@ -223,10 +231,12 @@ TEST_CASE("spice elements") {
         REQUIRE(result.ok());
         CHECK(netcheck::sameValue(result.value->parts.at("R1").value, "4k"));
         CHECK(netcheck::sameValue(result.value->parts.at("R2").value, "2m"));
-        CHECK(hasNote(result, "deck.cir:2: value \"4K7\" reads as 4000 under SPICE rules (4.7k if "
-                              "meant as IEC 60062 code 4K7)"));
-        CHECK(hasNote(result, "deck.cir:3: value \"2M2\" reads as 0.002 under SPICE rules (2.2meg "
-                              "if meant as IEC 60062 code 2M2)"));
+        CHECK(hasNote(result,
+                      "deck.cir:2: value \"4K7\" reads as 4000 under SPICE rules (4.7k if "
+                      "meant as IEC 60062 code 4K7)"));
+        CHECK(hasNote(result,
+                      "deck.cir:3: value \"2M2\" reads as 0.002 under SPICE rules (2.2meg "
+                      "if meant as IEC 60062 code 2M2)"));
         CHECK(result.notes.size() == 2);
     }
     SUBCASE("D: anode cathode model -> pins A, K, value = model (ngspice manual, diodes)") {
@@ -238,7 +248,8 @@ TEST_CASE("spice elements") {
     }
     SUBCASE("Q: collector base emitter [substrate] model (ngspice manual, BJTs)") {
         const Circuit c = imported(
-            "t\nQ1 c b e BC547\nQ2 c b e s qmod\nQ3 c b e qmod 2.0\n.model qmod npn\n.model BC547 npn\n");
+            "t\nQ1 c b e BC547\nQ2 c b e s qmod\nQ3 c b e qmod 2.0\n.model qmod npn\n.model BC547 "
+            "npn\n");
         CHECK(c.parts.at("Q1").kind == "bjt");
         CHECK(pinsOf(c, "Q1") == std::vector<std::string>{"C", "B", "E"});
         CHECK(c.parts.at("Q1").value == "BC547");
@@ -262,7 +273,8 @@ TEST_CASE("spice elements") {
     }
     SUBCASE("X: nodes then subcircuit name; pins named by the .subckt ports") {
         const Circuit c = imported(
-            "t\nX1 in out 0 amp\nXU2 a b c amp gain=2\n.subckt amp inp OUTP gnd\nR1 inp OUTP 1k\n.ends\n");
+            "t\nX1 in out 0 amp\nXU2 a b c amp gain=2\n.subckt amp inp OUTP gnd\nR1 inp OUTP "
+            "1k\n.ends\n");
         CHECK(c.parts.at("X1").kind == "ic");
         CHECK(c.parts.at("X1").value == "amp");
         CHECK(pinsOf(c, "X1") == std::vector<std::string>{"inp", "OUTP", "gnd"});
@@ -319,8 +331,9 @@ TEST_CASE("spice errors") {
         CHECK(errorOf("t\nQ1 c b qmod\n") ==
               "deck.cir:2: element Q1 has too few fields (Qname collector base emitter [substrate] "
               "model)");
-        CHECK(errorOf("t\nD1 a b\n") == "deck.cir:2: element D1 has too few fields (Dname anode "
-                                        "cathode model)");
+        CHECK(errorOf("t\nD1 a b\n") ==
+              "deck.cir:2: element D1 has too few fields (Dname anode "
+              "cathode model)");
         CHECK(errorOf("t\nM1 d g s nmos\n") ==
               "deck.cir:2: element M1 has too few fields (Mname drain gate source bulk model)");
     }
@@ -329,14 +342,18 @@ TEST_CASE("spice errors") {
         CHECK(errorOf("t\nC1 a b 10%\n") == "deck.cir:2: bad number \"10%\"");
     }
     SUBCASE("subcircuits: unknown, wrong node count, recursive, unterminated, stray .ends") {
-        CHECK(errorOf("t\nX1 a b nothere\n") == "deck.cir:2: unknown subcircuit nothere called by X1");
+        CHECK(errorOf("t\nX1 a b nothere\n") ==
+              "deck.cir:2: unknown subcircuit nothere called by X1");
         CHECK(errorOf("t\nX1 a b c s\n.subckt s p q\nR1 p q 1k\n.ends\n") ==
               "deck.cir:2: X1 gives 3 nodes but .subckt s (line 3) has 2 ports");
         CHECK(errorOf("t\nX1 a b s\n.subckt s p q\nX2 p q s\n.ends\n") ==
               "deck.cir:4: recursive subcircuit: s -> s");
-        CHECK(errorOf("t\nX1 a b s\n.subckt s p q\nX2 p q u\n.ends\n.subckt u p q\nX3 p q s\n.ends\n") ==
-              "deck.cir:7: recursive subcircuit: s -> u -> s");
-        CHECK(errorOf("t\nX1 a b s\n.subckt s p q\nR1 p q 1k\n") == "deck.cir:3: .subckt s has no .ends");
+        CHECK(
+            errorOf(
+                "t\nX1 a b s\n.subckt s p q\nX2 p q u\n.ends\n.subckt u p q\nX3 p q s\n.ends\n") ==
+            "deck.cir:7: recursive subcircuit: s -> u -> s");
+        CHECK(errorOf("t\nX1 a b s\n.subckt s p q\nR1 p q 1k\n") ==
+              "deck.cir:3: .subckt s has no .ends");
         CHECK(errorOf("t\nR1 a b 1k\n.ends\n") == "deck.cir:3: .ends without a .subckt");
         CHECK(errorOf("t\n.subckt s p\nR1 p 0 1\n.ends\n.subckt S q\nR1 q 0 1\n.ends\nX1 a s\n") ==
               "deck.cir:5: subcircuit S defined twice (first on line 2)");
@@ -348,7 +365,8 @@ TEST_CASE("spice errors") {
     SUBCASE("size limit") {
         netcheck::ReadLimits limits;
         limits.maxBytes = 10;
-        const auto result = netcheck::importSpice("t\nR1 a b 1k\nR2 a b 1k\n", "deck.cir", {}, limits);
+        const auto result =
+            netcheck::importSpice("t\nR1 a b 1k\nR2 a b 1k\n", "deck.cir", {}, limits);
         CHECK_FALSE(result.ok());
         limits = {};
         limits.maxParts = 3;
@@ -391,18 +409,20 @@ TEST_CASE("spice flattening") {
         CHECK(netOf(c, "X1.C1", "2") == "GND");
     }
     SUBCASE("two instances keep their local nodes apart") {
-        const Circuit two = imported(
-            "t\nX1 a b s\nX2 b c s\n.subckt s p q\nR1 p m 1k\nR2 m q 1k\n.ends\n", flat);
+        const Circuit two =
+            imported("t\nX1 a b s\nX2 b c s\n.subckt s p q\nR1 p m 1k\nR2 m q 1k\n.ends\n", flat);
         CHECK(netOf(two, "X1.R1", "2") == "X1.m");
         CHECK(netOf(two, "X2.R1", "2") == "X2.m");
         CHECK(netOf(two, "X1.R2", "2") == netOf(two, "X2.R1", "1"));
     }
     SUBCASE(".global nodes are shared by every instance") {
-        const Circuit g = imported("t\n.global vcc\nX1 a s\n.subckt s p\nR1 p vcc 1k\n.ends\nR2 vcc 0 1\n", flat);
+        const Circuit g =
+            imported("t\n.global vcc\nX1 a s\n.subckt s p\nR1 p vcc 1k\n.ends\nR2 vcc 0 1\n", flat);
         CHECK(netOf(g, "X1.R1", "2") == netOf(g, "R2", "1"));
     }
     SUBCASE("calls of empty subcircuits stay parts") {
-        const Circuit s = imported("t\nXJ1 tip 0 jack\nR1 tip 0 1k\n.subckt jack T S\n.ends\n", flat);
+        const Circuit s =
+            imported("t\nXJ1 tip 0 jack\nR1 tip 0 1k\n.subckt jack T S\n.ends\n", flat);
         CHECK(s.parts.at("J1").kind == "ic");
         CHECK(netOf(s, "J1", "T") == "tip");
     }
@@ -428,12 +448,15 @@ TEST_CASE("spice annotations") {
     SUBCASE("*@pot errors") {
         CHECK(errorOf("t\nRa a b 1k\nRb c d 1k\n*@pot VR1 = Ra Rb\n") ==
               "deck.cir:4: *@pot: Ra and Rb must share exactly one node (the wiper)");
-        CHECK(errorOf("t\nRa a b 1k\n*@pot VR1 = Ra Rz\n") == "deck.cir:3: *@pot: no element Rz here");
+        CHECK(errorOf("t\nRa a b 1k\n*@pot VR1 = Ra Rz\n") ==
+              "deck.cir:3: *@pot: no element Rz here");
         CHECK(errorOf("t\nRa a b 1k\nC1 b c 1n\n*@pot VR1 = Ra C1\n") ==
               "deck.cir:4: *@pot: C1 is not a resistor");
     }
     SUBCASE("*@kind: electrolytic takes pins +, - in SPICE order; LEDs keep A, K") {
-        const auto result = importText("t\nC3 out 0 100u\n*@kind C3 electrolytic\nD1 a k LED\n*@kind d1 led\n*@kind R1 gizmo\nR1 a b 1\n");
+        const auto result = importText(
+            "t\nC3 out 0 100u\n*@kind C3 electrolytic\nD1 a k LED\n*@kind d1 led\n*@kind R1 "
+            "gizmo\nR1 a b 1\n");
         REQUIRE(result.ok());
         const Circuit& c = *result.value;
         CHECK(c.parts.at("C3").kind == "electrolytic");
@@ -447,7 +470,8 @@ TEST_CASE("spice annotations") {
     }
     SUBCASE("*@pins, *@value, *@ref, *@net") {
         const Circuit c = imported(
-            "t\nXU1 a b 0 reg\n.subckt reg p1 p2 p3\n.ends\n*@pins XU1 IN OUT GND\n*@kind XU1 regulator\n"
+            "t\nXU1 a b 0 reg\n.subckt reg p1 p2 p3\n.ends\n*@pins XU1 IN OUT GND\n*@kind XU1 "
+            "regulator\n"
             "D1 a b x\n*@value D1\nR1 a b 4.7k\n*@value R1 4.7 kOhm\n*@ref R1 Rload\n"
             "*@net a V+\n*@net b\n");
         CHECK(pinsOf(c, "U1") == std::vector<std::string>{"IN", "OUT", "GND"});
@@ -468,16 +492,19 @@ TEST_CASE("spice annotations") {
         SpiceOptions flat;
         flat.flatten = true;
         const Circuit c = imported(
-            "t\nX1 a 0 s\nX2 b 0 s\n.subckt s p q\nC1 p q 10u\n*@kind C1 electrolytic\n.ends\n", flat);
+            "t\nX1 a 0 s\nX2 b 0 s\n.subckt s p q\nC1 p q 10u\n*@kind C1 electrolytic\n.ends\n",
+            flat);
         CHECK(c.parts.at("X1.C1").kind == "electrolytic");
         CHECK(netOf(c, "X2.C1", "+") == "b");
     }
     SUBCASE("malformed annotations are errors; unknown words are notes") {
-        CHECK(errorOf("t\nR1 a b 1k\n*@kind R1\n") == "deck.cir:3: *@kind: expected *@kind NAME kind");
+        CHECK(errorOf("t\nR1 a b 1k\n*@kind R1\n") ==
+              "deck.cir:3: *@kind: expected *@kind NAME kind");
         CHECK(errorOf("t\nR1 a b 1k\n*@kind R2 led\n") == "deck.cir:3: *@kind: no element R2 here");
         CHECK(errorOf("t\nX1 a s\n.subckt s p\nR1 p 0 1\n*@kind R9 led\n.ends\n") ==
               "deck.cir:5: *@kind: no element R9 here");
-        CHECK(errorOf("t\nR1 a b 1k\n*@pins R1 x\n") == "deck.cir:3: *@pins: R1 has 2 pins, 1 names given");
+        CHECK(errorOf("t\nR1 a b 1k\n*@pins R1 x\n") ==
+              "deck.cir:3: *@pins: R1 has 2 pins, 1 names given");
         const auto result = importText("t\nR1 a b 1k\n*@author me\n");
         REQUIRE(result.ok());
         CHECK(hasNote(result, "deck.cir:3: *@author is not an annotation we know"));

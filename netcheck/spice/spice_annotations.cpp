@@ -12,7 +12,9 @@ namespace netcheck::spice {
 
 namespace {
 
-std::string word(const DeckLine& line) { return line.fields.front().text; }
+std::string word(const DeckLine& line) {
+    return line.fields.front().text;
+}
 
 [[noreturn]] void fail(const DeckLine& line, const std::string& message) {
     throw DeckError{line.line, "*@" + word(line) + ": " + message};
@@ -50,7 +52,8 @@ void makePot(std::vector<ElementPart>& parts, const DeckLine& line) {
     const std::string name = line.fields[1].text;
     std::string taper;
     for (std::size_t i = 4; i < line.fields.size(); ++i) {
-        if (line.fields[i].key && lower(line.fields[i].text) == "taper" && i + 1 < line.fields.size()) {
+        if (line.fields[i].key && lower(line.fields[i].text) == "taper" &&
+            i + 1 < line.fields.size()) {
             taper = line.fields[++i].text;
         } else {
             fail(line, "unexpected \"" + line.fields[i].text + "\" (only taper=... may follow)");
@@ -69,9 +72,9 @@ void makePot(std::vector<ElementPart>& parts, const DeckLine& line) {
             shared.push_back(node);
         }
     }
-    if (shared.size() != 1 || first.nodes[0] == first.nodes[1] || second.nodes[0] == second.nodes[1]) {
-        fail(line, first.name + " and " + second.name +
-                       " must share exactly one node (the wiper)");
+    if (shared.size() != 1 || first.nodes[0] == first.nodes[1] ||
+        second.nodes[0] == second.nodes[1]) {
+        fail(line, first.name + " and " + second.name + " must share exactly one node (the wiper)");
     }
     const std::string& wiper = shared.front();
     ElementPart pot;
@@ -137,7 +140,8 @@ void applyOne(std::vector<ElementPart>& parts, const DeckLine& line, const ReadC
                            std::to_string(line.fields.size() - 2) + " names given");
         }
         part.pins.clear();
-        for (std::size_t i = 2; i < line.fields.size(); ++i) part.pins.push_back(line.fields[i].text);
+        for (std::size_t i = 2; i < line.fields.size(); ++i)
+            part.pins.push_back(line.fields[i].text);
     } else if (what == "value") {
         requireArgs(line, 1, "*@value NAME text");
         setValue(*findPart(parts, line, line.fields[1].text), line, context);
@@ -149,8 +153,8 @@ void applyOne(std::vector<ElementPart>& parts, const DeckLine& line, const ReadC
         if (netOverrides == nullptr) fail(line, "only allowed outside .subckt definitions");
         (*netOverrides)[resolve(line.fields[1].text)] = afterFirstWord(line.rest);
     } else if (what != "pot") {
-        context.note(line.line, "*@" + what + " is not an annotation we know (" +
-                                    kAnnotationWords + "); ignored");
+        context.note(line.line, "*@" + what + " is not an annotation we know (" + kAnnotationWords +
+                                    "); ignored");
     }
 }
 

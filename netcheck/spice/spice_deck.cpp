@@ -11,7 +11,9 @@ namespace {
 
 constexpr std::size_t kNone = static_cast<std::size_t>(-1);
 
-bool isBlank(char c) { return c == ' ' || c == '\t' || c == '\f' || c == '\v'; }
+bool isBlank(char c) {
+    return c == ' ' || c == '\t' || c == '\f' || c == '\v';
+}
 
 std::string_view trimLeft(std::string_view s) {
     while (!s.empty() && isBlank(s.front())) s.remove_prefix(1);
@@ -124,7 +126,8 @@ Deck readDeck(std::string_view text) {
         if (body.empty()) continue;
         if (body.front() == '*') {
             // Annotations are comments to ngspice: `+` after one continues the line before it.
-            if (body.starts_with("*@")) deck.lines.push_back(annotationLine(body.substr(2), number));
+            if (body.starts_with("*@"))
+                deck.lines.push_back(annotationLine(body.substr(2), number));
             continue;
         }
         std::vector<Field> fields = splitFields(stripInlineComment(body));

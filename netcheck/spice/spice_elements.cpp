@@ -17,7 +17,9 @@ namespace netcheck::spice {
 
 namespace {
 
-std::string quoted(std::string_view text) { return "\"" + std::string(text) + "\""; }
+std::string quoted(std::string_view text) {
+    return "\"" + std::string(text) + "\"";
+}
 
 void requireFields(const DeckLine& line, std::size_t count, std::string_view usage) {
     if (line.fields.size() >= count) return;
@@ -43,10 +45,9 @@ std::vector<std::string> nodesOf(const DeckLine& line, std::size_t count, std::s
 std::optional<std::string> valueField(const DeckLine& line, char letter) {
     const auto& f = line.fields;
     if (f.size() > 3 && !f[3].key) return f[3].text;
-    const std::string names[] = {std::string(1, letter),
-                                 letter == 'r'   ? "resistance"
-                                 : letter == 'c' ? "capacitance"
-                                                 : "inductance"};
+    const std::string names[] = {std::string(1, letter), letter == 'r'   ? "resistance"
+                                                         : letter == 'c' ? "capacitance"
+                                                                         : "inductance"};
     for (std::size_t i = 3; i + 1 < f.size(); ++i) {
         if (!f[i].key) continue;
         const std::string key = lower(f[i].text);
@@ -71,8 +72,8 @@ std::optional<double> readNumber(const std::string& field, int line, const ReadC
 }
 
 ElementPart twoTerminal(const DeckLine& line, char letter, const ReadContext& context) {
-    requireFields(line, 4, std::string(1, static_cast<char>(std::toupper(letter))) +
-                               "name n+ n- value");
+    requireFields(line, 4,
+                  std::string(1, static_cast<char>(std::toupper(letter))) + "name n+ n- value");
     ElementPart part;
     part.kind = defaultKind(letter);
     part.nodes = nodesOf(line, 2, "n+ n- value");
@@ -168,15 +169,24 @@ void ReadContext::note(int line, const std::string& text) const {
 
 std::string defaultKind(char letter) {
     switch (std::tolower(static_cast<unsigned char>(letter))) {
-        case 'r': return "resistor";
-        case 'c': return "capacitor";
-        case 'l': return "inductor";
-        case 'd': return "diode";
-        case 'q': return "bjt";
-        case 'j': return "jfet";
-        case 'm': return "mosfet";
-        case 'v': return "battery";
-        default: return "ic";
+        case 'r':
+            return "resistor";
+        case 'c':
+            return "capacitor";
+        case 'l':
+            return "inductor";
+        case 'd':
+            return "diode";
+        case 'q':
+            return "bjt";
+        case 'j':
+            return "jfet";
+        case 'm':
+            return "mosfet";
+        case 'v':
+            return "battery";
+        default:
+            return "ic";
     }
 }
 
@@ -191,16 +201,23 @@ std::vector<std::string> defaultPins(char letter, std::size_t nodeCount) {
     switch (std::tolower(static_cast<unsigned char>(letter))) {
         case 'r':
         case 'c':
-        case 'l': return {"1", "2"};
-        case 'd': return {"A", "K"};
-        case 'q': return nodeCount == 4 ? std::vector<std::string>{"C", "B", "E", "S"}
-                                        : std::vector<std::string>{"C", "B", "E"};
-        case 'j': return {"D", "G", "S"};
-        case 'm': return nodeCount == 4 ? std::vector<std::string>{"D", "G", "S", "B"}
-                                        : std::vector<std::string>{"D", "G", "S"};
+        case 'l':
+            return {"1", "2"};
+        case 'd':
+            return {"A", "K"};
+        case 'q':
+            return nodeCount == 4 ? std::vector<std::string>{"C", "B", "E", "S"}
+                                  : std::vector<std::string>{"C", "B", "E"};
+        case 'j':
+            return {"D", "G", "S"};
+        case 'm':
+            return nodeCount == 4 ? std::vector<std::string>{"D", "G", "S", "B"}
+                                  : std::vector<std::string>{"D", "G", "S"};
         case 'v':
-        case 'i': return {"+", "-"};
-        default: return {};
+        case 'i':
+            return {"+", "-"};
+        default:
+            return {};
     }
 }
 
@@ -225,7 +242,7 @@ std::string canonicalValue(double magnitude, std::string_view kind) {
     if (readsBack(iec)) return iec;
     // Outside the IEC code's range: board-file SI prefixes (M mega, m milli), then plain digits.
     static constexpr std::pair<const char*, double> kPrefixes[] = {
-        {"T", 1e12}, {"G", 1e9}, {"M", 1e6}, {"k", 1e3}, {"", 1},
+        {"T", 1e12}, {"G", 1e9},  {"M", 1e6},  {"k", 1e3},  {"", 1},
         {"m", 1e-3}, {"u", 1e-6}, {"n", 1e-9}, {"p", 1e-12}};
     for (const auto& [prefix, scale] : kPrefixes) {
         char text[48];
@@ -253,12 +270,16 @@ std::optional<ElementPart> readElement(const DeckLine& line, const ReadContext& 
     switch (letter) {
         case 'r':
         case 'c':
-        case 'l': part = twoTerminal(line, letter, context); break;
+        case 'l':
+            part = twoTerminal(line, letter, context);
+            break;
         case 'd':
             part = withModel(line, 2, "Dname anode cathode model");
             part->kind = "diode";
             break;
-        case 'q': part = bipolar(line, context); break;
+        case 'q':
+            part = bipolar(line, context);
+            break;
         case 'j':
             part = withModel(line, 3, "Jname drain gate source model");
             part->kind = "jfet";
@@ -271,7 +292,9 @@ std::optional<ElementPart> readElement(const DeckLine& line, const ReadContext& 
                 part->nodes.pop_back();
             }
             break;
-        case 'x': part = subcircuitCall(line); break;
+        case 'x':
+            part = subcircuitCall(line);
+            break;
         case 'v':
         case 'i': {
             ElementPart supply = source(line, context);

@@ -23,14 +23,14 @@ struct ReadContext {
 
 /// A deck element as a part. In a flattened subcircuit `name` is the path ("X1.R3").
 struct ElementPart {
-    std::string name;                ///< element name as written, or the path of names
-    std::string ref;                 ///< reference designator for the circuit
-    std::string kind;                ///< part kind (part_kinds.hpp)
-    std::string value;               ///< canonical value text
-    std::optional<double> magnitude; ///< numeric value (R, C, L, sources)
-    std::vector<std::string> pins;   ///< pin names, one per node
-    std::vector<std::string> nodes;  ///< node names as written (node keys after expansion)
-    std::string subckt;              ///< X: the subcircuit name as written
+    std::string name;                 ///< element name as written, or the path of names
+    std::string ref;                  ///< reference designator for the circuit
+    std::string kind;                 ///< part kind (part_kinds.hpp)
+    std::string value;                ///< canonical value text
+    std::optional<double> magnitude;  ///< numeric value (R, C, L, sources)
+    std::vector<std::string> pins;    ///< pin names, one per node
+    std::vector<std::string> nodes;   ///< node names as written (node keys after expansion)
+    std::string subckt;               ///< X: the subcircuit name as written
     int line = 0;
 };
 

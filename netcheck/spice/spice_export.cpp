@@ -21,7 +21,9 @@ namespace {
 
 using spice::lower;
 
-bool safeChar(char c) { return std::isalnum(static_cast<unsigned char>(c)) != 0 || c == '_'; }
+bool safeChar(char c) {
+    return std::isalnum(static_cast<unsigned char>(c)) != 0 || c == '_';
+}
 
 std::string sanitize(std::string_view text) {
     std::string out;
@@ -66,10 +68,12 @@ public:
         std::replace(heading.begin(), heading.end(), '\n', ' ');
         std::replace(heading.begin(), heading.end(), '\r', ' ');
         deck += heading + "\n";
-        deck += "* Written by Stripsmith. Lines starting *@ are Stripsmith annotations (pots, part\n";
+        deck +=
+            "* Written by Stripsmith. Lines starting *@ are Stripsmith annotations (pots, part\n";
         deck += "* kinds, board refs); SPICE programs read them as comments.\n";
         for (const std::string& line : netLines_) deck += line + "\n";
-        for (const auto& [key, model] : models_) deck += ".model " + model.first + " " + model.second + "\n";
+        for (const auto& [key, model] : models_)
+            deck += ".model " + model.first + " " + model.second + "\n";
         for (const std::string& line : stubLines_) deck += line + "\n";
         for (const std::string& line : body_) deck += line + "\n";
         deck += ".end\n";
@@ -130,14 +134,16 @@ private:
     }
 
     std::string modelName(char letter, const std::string& value) {
-        static const std::map<char, std::string> kTypes{{'D', "D"}, {'Q', "NPN"}, {'J', "NJF"}, {'M', "NMOS"}};
+        static const std::map<char, std::string> kTypes{
+            {'D', "D"}, {'Q', "NPN"}, {'J', "NJF"}, {'M', "NMOS"}};
         std::string base = isSafe(value) ? value : sanitize(value.empty() ? "model" : value);
         // A model name must not be a node name (Q's fourth field is read as one or the other).
         for (int n = 2;; ++n) {
             const std::string key = lower(base);
             const auto found = models_.find(key);
-            const bool clash = usedNodes_.contains(key) ||
-                               (found != models_.end() && found->second.second != kTypes.at(letter));
+            const bool clash =
+                usedNodes_.contains(key) ||
+                (found != models_.end() && found->second.second != kTypes.at(letter));
             if (!clash) break;
             base = sanitize(value.empty() ? "model" : value) + "_" + std::to_string(n);
         }
@@ -163,7 +169,8 @@ private:
     static std::vector<std::string> portsFor(const std::vector<std::string>& pins) {
         std::set<std::string> seen{"0", "gnd"};
         bool usable = true;
-        for (const std::string& pin : pins) usable = usable && isSafe(pin) && seen.insert(lower(pin)).second;
+        for (const std::string& pin : pins)
+            usable = usable && isSafe(pin) && seen.insert(lower(pin)).second;
         if (usable) return pins;
         std::vector<std::string> ports;
         for (std::size_t i = 1; i <= pins.size(); ++i) ports.push_back("p" + std::to_string(i));
@@ -189,8 +196,8 @@ private:
         if (spice::refForName(name) != ref) body_.push_back("*@ref " + name + " " + ref);
     }
 
-    bool writePot(const std::string& ref, const CircuitPart& part, const std::vector<std::string>& pins,
-                  const std::vector<std::string>& nodes) {
+    bool writePot(const std::string& ref, const CircuitPart& part,
+                  const std::vector<std::string>& pins, const std::vector<std::string>& nodes) {
         const auto quantity = parseQuantity(part.value);
         if (part.kind != "pot" || pins != std::vector<std::string>{"1", "2", "3"} || !quantity ||
             quantity->magnitude <= 0 || nodes[0] == nodes[1] || nodes[1] == nodes[2] ||
@@ -208,7 +215,7 @@ private:
                         (quantity->taper.empty() ? "" : " taper=" + quantity->taper));
         const double sum = spice::parseSpiceNumber(half)->value * 2;
         const std::string readValue = spice::canonicalValue(sum, "pot") +
-                                (quantity->taper.empty() ? "" : " " + quantity->taper);
+                                      (quantity->taper.empty() ? "" : " " + quantity->taper);
         if (readValue != part.value) body_.push_back("*@value " + ref + " " + part.value);
         if (spice::upper(ref) != ref) body_.push_back("*@ref " + ref + " " + ref);
         return true;
@@ -229,7 +236,8 @@ private:
         std::string line = name + join(nodes);
         std::vector<std::string> readPins = spice::defaultPins(letter, nodes.size());
         if (letter == 'R' || letter == 'C' || letter == 'L') {
-            const std::string number = spice::formatSpiceNumber(parseQuantity(part.value)->magnitude, 12);
+            const std::string number =
+                spice::formatSpiceNumber(parseQuantity(part.value)->magnitude, 12);
             magnitude = spice::parseSpiceNumber(number)->value;
             readValue = spice::canonicalValue(*magnitude, spice::defaultKind(letter));
             line += " " + number;
@@ -252,7 +260,7 @@ private:
     std::set<std::string> usedNodes_;
     std::set<std::string> usedNames_;
     std::map<std::string, std::pair<std::string, std::string>> models_;  // key -> (name, type)
-    std::map<std::string, std::vector<std::string>> stubs_;             // key -> ports
+    std::map<std::string, std::vector<std::string>> stubs_;              // key -> ports
     std::vector<std::string> netLines_;
     std::vector<std::string> stubLines_;
     std::vector<std::string> body_;

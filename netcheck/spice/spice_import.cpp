@@ -72,20 +72,21 @@ ReadResult<Circuit> importSpice(std::string_view text, std::string_view fileName
     spice::ReadContext context{std::string(fileName), &result.notes, {}};
     try {
         if (text.size() > limits.maxBytes) {
-            throw DeckError{0, "the deck is larger than " + std::to_string(limits.maxBytes) +
-                                   " bytes"};
+            throw DeckError{
+                0, "the deck is larger than " + std::to_string(limits.maxBytes) + " bytes"};
         }
         const spice::Deck deck = spice::readDeck(text);
         for (const auto& [line, remark] : deck.notes) context.note(line, remark);
         context.modelNames = modelNames(deck);
-        const spice::DeckScopes scopes = spice::collectScopes(
-            deck, context, options.sources == SpiceOptions::Sources::Offboard);
+        const spice::DeckScopes scopes =
+            spice::collectScopes(deck, context, options.sources == SpiceOptions::Sources::Offboard);
         spice::checkCalls(scopes, limits);
         spice::NodeNames names;
         std::map<std::string, std::string> overrides;
         const std::vector<ElementPart> parts =
             spice::expandTop(scopes, options.flatten, context, limits, names, overrides);
-        if (parts.empty()) throw DeckError{0, "the deck has no parts (is the first line the title?)"};
+        if (parts.empty())
+            throw DeckError{0, "the deck has no parts (is the first line the title?)"};
         result.value = buildCircuit(parts, names, overrides, options);
     } catch (const DeckError& e) {
         result.value.reset();

@@ -15,8 +15,12 @@ namespace netcheck::spice {
 
 namespace {
 
-bool isDigit(char c) { return c >= '0' && c <= '9'; }
-bool isLetter(char c) { return std::isalpha(static_cast<unsigned char>(c)) != 0; }
+bool isDigit(char c) {
+    return c >= '0' && c <= '9';
+}
+bool isLetter(char c) {
+    return std::isalpha(static_cast<unsigned char>(c)) != 0;
+}
 
 struct Suffix {
     std::string_view text;
@@ -66,7 +70,8 @@ std::size_t numberLength(std::string_view s, bool& plainInteger) {
 std::optional<double> iecReading(std::string_view field, std::size_t numberEnd, bool plainInteger) {
     if (!plainInteger || field.front() == '+' || field.front() == '-') return std::nullopt;
     if (numberEnd + 1 >= field.size()) return std::nullopt;
-    const char letter = static_cast<char>(std::tolower(static_cast<unsigned char>(field[numberEnd])));
+    const char letter =
+        static_cast<char>(std::tolower(static_cast<unsigned char>(field[numberEnd])));
     if (std::string_view("rkmgtunpf").find(letter) == std::string_view::npos) return std::nullopt;
     if (!isDigit(field[numberEnd + 1])) return std::nullopt;
     std::size_t end = numberEnd + 1;

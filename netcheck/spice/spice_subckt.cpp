@@ -11,7 +11,9 @@ namespace netcheck::spice {
 
 namespace {
 
-std::string lineText(int line) { return std::to_string(line); }
+std::string lineText(int line) {
+    return std::to_string(line);
+}
 
 bool isCommand(const DeckLine& line, std::string_view word) {
     return line.type == DeckLine::Type::Command && lower(line.fields.front().text) == word;
@@ -27,7 +29,8 @@ Scope openSubckt(const DeckLine& line) {
         const Field& f = line.fields[i];
         if (f.key || lower(f.text) == "params:") break;
         if (!seen.insert(lower(f.text)).second) {
-            throw DeckError{line.line, ".subckt " + scope.name + " lists port " + f.text + " twice"};
+            throw DeckError{line.line,
+                            ".subckt " + scope.name + " lists port " + f.text + " twice"};
         }
         scope.ports.push_back(f.text);
     }
@@ -66,14 +69,16 @@ void checkScope(const DeckScopes& scopes, const Scope& scope, std::vector<CallSt
         const std::string key = lower(part.subckt);
         const auto found = scopes.subckts.find(key);
         if (found == scopes.subckts.end()) {
-            throw DeckError{part.line, "unknown subcircuit " + part.subckt + " called by " + part.name};
+            throw DeckError{part.line,
+                            "unknown subcircuit " + part.subckt + " called by " + part.name};
         }
         const Scope& callee = found->second;
         if (callee.ports.size() != part.nodes.size()) {
-            throw DeckError{part.line, part.name + " gives " + lineText(static_cast<int>(part.nodes.size())) +
-                                           " nodes but .subckt " + callee.name + " (line " +
-                                           lineText(callee.line) + ") has " +
-                                           lineText(static_cast<int>(callee.ports.size())) + " ports"};
+            throw DeckError{part.line,
+                            part.name + " gives " + lineText(static_cast<int>(part.nodes.size())) +
+                                " nodes but .subckt " + callee.name + " (line " +
+                                lineText(callee.line) + ") has " +
+                                lineText(static_cast<int>(callee.ports.size())) + " ports"};
         }
         const bool onStack = std::any_of(stack.begin(), stack.end(),
                                          [&](const CallStep& s) { return s.subckt == key; });
@@ -83,8 +88,8 @@ void checkScope(const DeckScopes& scopes, const Scope& scope, std::vector<CallSt
             throw DeckError{part.line, "recursive subcircuit: " + path + callee.name};
         }
         if (static_cast<int>(stack.size()) >= limits.maxDepth) {
-            throw DeckError{part.line, "subcircuits nested more than " +
-                                           lineText(limits.maxDepth) + " deep"};
+            throw DeckError{part.line,
+                            "subcircuits nested more than " + lineText(limits.maxDepth) + " deep"};
         }
         if (done.contains(key)) continue;
         stack.push_back({key, part.line});
@@ -100,7 +105,11 @@ class Expander {
 public:
     Expander(const DeckScopes& scopes, bool flatten, const ReadContext& context,
              const ReadLimits& limits, NodeNames& names, std::map<std::string, std::string>& nets)
-        : scopes_(scopes), flatten_(flatten), context_(context), limits_(limits), names_(names),
+        : scopes_(scopes),
+          flatten_(flatten),
+          context_(context),
+          limits_(limits),
+          names_(names),
           nets_(nets) {}
 
     std::vector<ElementPart> expand(const Scope& scope, const std::string& keyPrefix,
@@ -111,8 +120,8 @@ public:
         };
         std::vector<ElementPart> parts;
         for (const ElementPart& element : scope.elements) {
-            const Scope* callee = element.subckt.empty() ? nullptr
-                                                         : &scopes_.subckts.at(lower(element.subckt));
+            const Scope* callee =
+                element.subckt.empty() ? nullptr : &scopes_.subckts.at(lower(element.subckt));
             std::vector<std::string> keys;
             for (const std::string& node : element.nodes) {
                 keys.push_back(resolveNode(node, keyPrefix, shownPrefix, portKeys, element.line));
@@ -137,11 +146,12 @@ public:
     }
 
 private:
-    void appendInstance(std::vector<ElementPart>& parts, const ElementPart& call, const Scope& callee,
-                        const std::vector<std::string>& keys, const std::string& keyPrefix,
-                        const std::string& shownPrefix) {
+    void appendInstance(std::vector<ElementPart>& parts, const ElementPart& call,
+                        const Scope& callee, const std::vector<std::string>& keys,
+                        const std::string& keyPrefix, const std::string& shownPrefix) {
         std::map<std::string, std::string> ports;
-        for (std::size_t i = 0; i < callee.ports.size(); ++i) ports[lower(callee.ports[i])] = keys[i];
+        for (std::size_t i = 0; i < callee.ports.size(); ++i)
+            ports[lower(callee.ports[i])] = keys[i];
         const std::string instance = upper(call.name);
         for (ElementPart child : expand(callee, keyPrefix + lower(call.name) + ".",
                                         shownPrefix + instance + ".", ports)) {
@@ -202,7 +212,8 @@ DeckScopes collectScopes(const Deck& deck, const ReadContext& context, bool sour
             open.pop_back();
             const std::string key = lower(done.name);
             if (scopes.subckts.contains(key)) {
-                throw DeckError{done.line, "subcircuit " + done.name + " defined twice (first on line " +
+                throw DeckError{done.line, "subcircuit " + done.name +
+                                               " defined twice (first on line " +
                                                lineText(scopes.subckts.at(key).line) + ")"};
             }
             scopes.subckts.emplace(key, std::move(done));
@@ -234,8 +245,9 @@ void checkCalls(const DeckScopes& scopes, const ReadLimits& limits) {
     }
 }
 
-std::vector<ElementPart> expandTop(const DeckScopes& scopes, bool flatten, const ReadContext& context,
-                                   const ReadLimits& limits, NodeNames& names,
+std::vector<ElementPart> expandTop(const DeckScopes& scopes, bool flatten,
+                                   const ReadContext& context, const ReadLimits& limits,
+                                   NodeNames& names,
                                    std::map<std::string, std::string>& netOverrides) {
     Expander expander(scopes, flatten, context, limits, names, netOverrides);
     std::vector<ElementPart> parts = expander.expand(scopes.top, "", "", {});

@@ -15,11 +15,11 @@ namespace netcheck::spice {
 
 /// The top level of a deck or one subcircuit definition, with its elements already read.
 struct Scope {
-    std::string name;                  ///< as written; empty for the top level
-    std::vector<std::string> ports;    ///< as written
-    int line = 0;                      ///< the .subckt line
-    std::vector<ElementPart> elements; ///< in deck order
-    std::vector<DeckLine> annotations; ///< `*@` lines inside this scope
+    std::string name;                   ///< as written; empty for the top level
+    std::vector<std::string> ports;     ///< as written
+    int line = 0;                       ///< the .subckt line
+    std::vector<ElementPart> elements;  ///< in deck order
+    std::vector<DeckLine> annotations;  ///< `*@` lines inside this scope
 };
 
 /// Every scope of a deck. Nested definitions are hoisted: subcircuit names are global.
@@ -46,8 +46,9 @@ struct NodeNames {
 /// The top scope's parts with nodes replaced by node keys. With `flatten`, calls of subcircuits
 /// that have elements are replaced by those elements (refs "X1.R3", local nodes "X1.n"); calls of
 /// empty subcircuits stay parts. Each scope's annotations are applied to its own parts.
-std::vector<ElementPart> expandTop(const DeckScopes& scopes, bool flatten, const ReadContext& context,
-                                   const ReadLimits& limits, NodeNames& names,
+std::vector<ElementPart> expandTop(const DeckScopes& scopes, bool flatten,
+                                   const ReadContext& context, const ReadLimits& limits,
+                                   NodeNames& names,
                                    std::map<std::string, std::string>& netOverrides);
 
 }  // namespace netcheck::spice
