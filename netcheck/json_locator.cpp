@@ -155,7 +155,10 @@ std::string pathText(const JsonPath& path) {
 TextPosition positionAt(std::string_view text, std::size_t offset) {
     TextPosition at;
     offset = std::min(offset, text.size());
-    for (std::size_t i = 0; i < offset; ++i) {
+    // A byte order mark is not a character a maker can see in an editor.
+    const std::size_t first =
+        text.substr(0, 3) == "\xEF\xBB\xBF" ? std::min<std::size_t>(3, offset) : 0;
+    for (std::size_t i = first; i < offset; ++i) {
         if (text[i] == '\n') {
             ++at.line;
             at.column = 1;

@@ -177,6 +177,14 @@ TEST_CASE("bad input") {
         CHECK(refusedCount > 1000);  // the damage is real: most damaged files must be refused
     }
 
+    SUBCASE("a byte order mark is read past and not counted as a column") {
+        const std::string text = "\xEF\xBB\xBF{\"format\": 1}";
+        const FileError error = refused(text);
+        CHECK(error.path == "format");
+        CHECK(error.line == 1);
+        CHECK(error.column == 12);
+    }
+
     SUBCASE("circuit files report like board files") {
         const auto result =
             readCircuit("{\n  \"nets\": {\n    \"A\": [\"R1.1\"],\n    \"B\": [\"R1.1\"]\n  }\n}",
