@@ -32,6 +32,8 @@ std::optional<Hole> parseHole(std::string_view text) {
     std::size_t letters = 0;
     int row = 0;
     while (letters < text.size() && std::isalpha(static_cast<unsigned char>(text[letters]))) {
+        // Stop before a long run of letters overflows `row` (found by fuzzing).
+        if (letters == kMaxRowLetters) return std::nullopt;
         row = row * 26 + (std::toupper(static_cast<unsigned char>(text[letters])) - 'A' + 1);
         ++letters;
     }

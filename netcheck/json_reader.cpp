@@ -3,10 +3,30 @@
 
 #include <algorithm>
 #include <cctype>
+#include <cmath>
+#include <cstdlib>
+#include <string>
 
 namespace netcheck {
 
 namespace {
+
+// Offset of the first number outside strings that a double cannot hold.
+std::optional<std::size_t> findHugeNumber(std::string_view text) {
+    for (std::size_t i = 0; i < text.size(); ++i) {
+        if (text[i] == '"') {
+            for (++i; i < text.size() && text[i] != '"'; ++i) {
+                if (text[i] == '\\') ++i;
+            }
+        } else if (text[i] == '-' || std::isdigit(static_cast<unsigned char>(text[i]))) {
+            const std::size_t end = text.find_first_not_of("0123456789+-.eE", i);
+            const std::string number(text.substr(i, end == std::string_view::npos ? end : end - i));
+            if (!std::isfinite(std::strtod(number.c_str(), nullptr))) return i;
+            i += number.size() - 1;
+        }
+    }
+    return std::nullopt;
+}
 
 FileError errorAt(std::string_view text, std::string_view fileName, std::size_t offset,
                   std::string message) {
@@ -103,6 +123,10 @@ ReadResult<Json> parseJsonText(std::string_view text, std::string_view fileName,
     } catch (const nlohmann::json::parse_error& e) {
         // e.byte counts from 1 and points at the character where reading stopped.
         result.error = errorAt(text, fileName, e.byte > 0 ? e.byte - 1 : 0, syntaxMessage(e));
+    } catch (const nlohmann::json::out_of_range&) {
+        // A number beyond the range of a double, such as 1e400 (found by fuzzing).
+        result.error = errorAt(text, fileName, findHugeNumber(text).value_or(0),
+                               "a number is too large (beyond 1.8e308)");
     }
     return result;
 }

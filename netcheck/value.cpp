@@ -13,6 +13,7 @@
 #include <charconv>
 #include <cmath>
 #include <cstdio>
+#include <cstdlib>
 
 namespace netcheck {
 
@@ -210,7 +211,8 @@ std::string formatIec(double magnitude, bool capacitance) {
         Multiplier{"p", 1e-12}, {"n", 1e-9}, {"u", 1e-6}, {"m", 1e-3}, {"R", 1.0}};
     const auto& scale = capacitance ? kCapacitance : kResistance;
     // Round first so that 99.9999999n becomes 100n rather than 99n9999999.
-    const double rounded = std::stod(formatG(magnitude));
+    // strtod, not stod: stod throws for subnormal magnitudes such as 1e-310 (found by fuzzing).
+    const double rounded = std::strtod(formatG(magnitude).c_str(), nullptr);
     const Multiplier* unit = &scale.front();
     for (const Multiplier& m : scale) {
         if (rounded >= m.factor * (1 - 1e-12)) unit = &m;
