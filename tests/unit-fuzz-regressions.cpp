@@ -59,6 +59,18 @@ TEST_CASE("fuzz regressions") {
         CHECK(saved.error->message == "a number is too large (beyond 1.8e308)");
     }
 
+    SUBCASE("a deck with control characters is refused, naming the line") {
+        const auto result = importSpice("title\nR1 a b 1k\nR\x01 a 0 2k\n", "junk.cir", {});
+        REQUIRE(result.error.has_value());
+        CHECK(result.error->describe() ==
+              "junk.cir:3: control character (byte 1) in the deck; a deck is plain text");
+        const auto saved =
+            importSpice(regression("spice_import/control-character-in-ref.cir"), "f.cir", {});
+        CHECK(saved.error.has_value());
+        // Tabs and form feeds are separators, not junk.
+        CHECK(importSpice("title\nR1\ta\tb\t1k\f\n", "tabs.cir", {}).ok());
+    }
+
     SUBCASE("subnormal magnitudes format without throwing") {
         // 1e-310 is below the smallest normal double (2.2e-308, IEEE 754 binary64).
         CHECK_NOTHROW((void)formatIec(1e-310, true));

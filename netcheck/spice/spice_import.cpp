@@ -64,6 +64,23 @@ Circuit buildCircuit(const std::vector<ElementPart>& parts, const spice::NodeNam
     return circuit;
 }
 
+// A deck is text: a control character would end up in a name no circuit file can hold (found by
+// fuzzing). Tabs, form feeds and line ends are the deck's own separators.
+void requirePlainText(std::string_view text) {
+    int line = 1;
+    for (const char c : text) {
+        if (c == '\n') {
+            ++line;
+            continue;
+        }
+        const auto byte = static_cast<unsigned char>(c);
+        if ((byte < 0x20 && c != '\t' && c != '\r' && c != '\f' && c != '\v') || byte == 0x7f) {
+            throw DeckError{line, "control character (byte " + std::to_string(byte) +
+                                      ") in the deck; a deck is plain text"};
+        }
+    }
+}
+
 }  // namespace
 
 ReadResult<Circuit> importSpice(std::string_view text, std::string_view fileName,
@@ -75,6 +92,7 @@ ReadResult<Circuit> importSpice(std::string_view text, std::string_view fileName
             throw DeckError{
                 0, "the deck is larger than " + std::to_string(limits.maxBytes) + " bytes"};
         }
+        requirePlainText(text);
         const spice::Deck deck = spice::readDeck(text);
         for (const auto& [line, remark] : deck.notes) context.note(line, remark);
         context.modelNames = modelNames(deck);
