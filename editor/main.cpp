@@ -27,6 +27,7 @@
 #include "editor/app/look.hpp"
 #include "editor/files/file_actions.hpp"
 #include "editor/platform/imgui_impl_sfml.hpp"
+#include "editor/platform/x11_errors.hpp"
 #include "editor/sheet/sheet_cli.hpp"
 
 namespace {
@@ -155,6 +156,7 @@ int run(const Options& options) {
     ImGui::GetIO().IniFilename = nullptr;  // the layout is fixed; nothing to remember
     loadFonts();
     platform::init();
+    platform::tolerateCursorErrors();
 
     sf::ContextSettings gl;
     gl.depthBits = 0;

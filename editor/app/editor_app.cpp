@@ -1,6 +1,9 @@
 #include "editor/app/editor_app.hpp"
 
+#include <cstdio>
 #include <exception>
+
+#include <imgui.h>
 
 namespace stripsmith {
 
@@ -20,6 +23,18 @@ bool EditorApp::perform(std::unique_ptr<netcheck::edit::Command> command, int me
     }
     say(label);
     return true;
+}
+
+void EditorApp::logItem(const std::string& name) {
+    if (!logHoles) return;
+    const ImVec2 a = ImGui::GetItemRectMin(), b = ImGui::GetItemRectMax();
+    char where[64];
+    std::snprintf(where, sizeof where, "%.0f %.0f", static_cast<double>((a.x + b.x) * 0.5f),
+                  static_cast<double>((a.y + b.y) * 0.5f));
+    std::string& last = loggedItems[name];
+    if (last == where) return;
+    last = where;
+    std::fprintf(stderr, "STRIPSMITH_E2E item %s %s\n", name.c_str(), where);
 }
 
 }  // namespace stripsmith

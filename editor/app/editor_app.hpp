@@ -2,6 +2,7 @@
 // active tool, open dialogs. One instance, owned by main (or a test or benchmark).
 #pragma once
 
+#include <map>
 #include <optional>
 #include <string>
 #include <vector>
@@ -64,10 +65,14 @@ struct EditorApp {
     bool quitNow = false;                 ///< main loop should end
     bool logHoles = false;                ///< STRIPSMITH_E2E_LOG: print hole screen positions
     std::string lastLoggedView;
+    std::map<std::string, std::string> loggedItems;
     std::string chosenForPanel;           ///< a circuit or sheet path picked in the chooser
 
     /// Performs a command, clears the selection if asked, and reports errors in the status line.
     bool perform(std::unique_ptr<netcheck::edit::Command> command, int mergeKey = 0);
+    /// With STRIPSMITH_E2E_LOG set: prints the last ImGui item's centre as "STRIPSMITH_E2E item
+    /// NAME X Y" when it moves, so scripted tests know where to click (they still click).
+    void logItem(const std::string& name);
     /// Message for the status bar.
     void say(std::string message) { status = std::move(message); }
 };

@@ -158,12 +158,13 @@ void drawCanvas(EditorApp& app, ImVec2 pos, ImVec2 size) {
 
     drawSubstrate(f, board);
     drawCopper(f, board);
-    drawCuts(f, board, app.selection);
     drawEdgeLabels(f, board);
     if (app.hoverIsland >= 0 && app.hoverIsland < static_cast<int>(app.doc.islands().size()))
         drawIslandHighlight(f, board, app.doc.islands()[static_cast<std::size_t>(app.hoverIsland)]);
     drawLinks(f, board, app.selection);
     drawParts(f, board, app.selection, app.hoverPart);
+    // Cuts above the parts: a cut hidden under an IC is still a cut to make.
+    drawCuts(f, board, app.selection);
     drawOffboardParts(f, board, app.selection);
     drawWires(f, board, app.selection);
     drawFindingMarks(f, app.doc.report());

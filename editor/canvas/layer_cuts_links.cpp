@@ -17,8 +17,9 @@ bool isSelected(const Selected& selected, ElementRef::Kind kind, std::size_t ind
 void drawHoleCut(const CanvasFrame& f, netcheck::Hole h, ImU32 mark) {
     const ImVec2 p = f.hole(h);
     const ImU32 bare = f.side == Side::Copper ? palette::kBoardCopperSide : palette::kBoardComponent;
-    // The drilled-away copper ring shows the bare board, then the hole itself.
-    f.draw->AddCircleFilled(p, f.t.len(0.44f), bare, 20);
+    // The drilled-away copper ring shows the bare board, then the hole itself (from above only
+    // the mark, so parts over it stay visible).
+    if (f.side != Side::Component) f.draw->AddCircleFilled(p, f.t.len(0.44f), bare, 20);
     f.draw->AddCircle(p, f.t.len(0.44f), mark, 20, std::max(1.5f, f.t.len(0.09f)));
     f.draw->AddCircleFilled(p, f.t.len(0.22f), palette::kCutHole, 12);
     f.draw->AddCircleFilled(p, f.t.len(0.12f), palette::kHole, 10);
@@ -30,7 +31,7 @@ void drawBetweenCut(const CanvasFrame& f, netcheck::Hole left, ImU32 mark) {
     const ImU32 bare = f.side == Side::Copper ? palette::kBoardCopperSide : palette::kBoardComponent;
     const ImVec2 a = f.at({x - 0.07f, y - 0.46f});
     const ImVec2 b = f.at({x + 0.07f, y + 0.46f});
-    f.draw->AddRectFilled({std::min(a.x, b.x), a.y}, {std::max(a.x, b.x), b.y}, bare);
+    if (f.side != Side::Component) f.draw->AddRectFilled({std::min(a.x, b.x), a.y}, {std::max(a.x, b.x), b.y}, bare);
     // A knife score: a bold bar across the strip.
     f.draw->AddLine(f.at({x, y - 0.46f}), f.at({x, y + 0.46f}), mark, std::max(2.0f, f.t.len(0.1f)));
 }

@@ -45,7 +45,7 @@ void drawWires(const CanvasFrame& f, const netcheck::Board& board, const Selecte
         if (!a || !b) continue;
         const ImVec2 pa = f.at(*a), pb = f.at(*b);
         // A gentle sag, as a real lead hangs.
-        const float sag = std::min(f.t.len(2.0f), std::fabs(pb.x - pa.x) * 0.25f + f.t.len(0.5f));
+        const float sag = std::min(f.t.len(1.0f), std::fabs(pb.x - pa.x) * 0.1f + f.t.len(0.3f));
         const ImVec2 c1{pa.x + (pb.x - pa.x) * 0.3f, pa.y + sag};
         const ImVec2 c2{pa.x + (pb.x - pa.x) * 0.7f, pb.y + sag};
         const float w = std::max(2.5f, f.t.len(0.18f));

@@ -17,7 +17,9 @@ void findingRow(EditorApp& app, const netcheck::Finding& finding, int index) {
     const bool focused = app.view.focusedFinding && *app.view.focusedFinding == index;
     ImGui::PushStyleColor(ImGuiCol_Text, error ? ImVec4(1.0f, 0.5f, 0.45f, 1.0f) : ImVec4(1.0f, 0.78f, 0.35f, 1.0f));
     const std::string head = std::string(error ? "Error: " : "Warning: ") + finding.type;
-    if (ImGui::Selectable(head.c_str(), focused)) {
+    const bool clicked = ImGui::Selectable(head.c_str(), focused);
+    app.logItem("finding-" + std::to_string(index));
+    if (clicked) {
         app.view.focusedFinding = focused ? std::nullopt : std::optional<int>(index);
         if (!focused)
             if (auto where = findingLocation(app.doc.board(), finding)) centreOn(app, *where);
@@ -35,6 +37,7 @@ void findingRow(EditorApp& app, const netcheck::Finding& finding, int index) {
             app.perform(std::move(command));
             app.view.focusedFinding.reset();
         }
+        app.logItem("apply-fix-" + std::to_string(index));
     }
     ImGui::Unindent();
     ImGui::Spacing();

@@ -14,10 +14,15 @@
 namespace stripsmith {
 namespace {
 
+float halfWidth() {
+    return (ImGui::GetWindowContentRegionMax().x - ImGui::GetWindowContentRegionMin().x -
+            ImGui::GetStyle().ItemSpacing.x) * 0.5f;
+}
+
 void toolButton(EditorApp& app, const char* label, Tool tool, const char* tip) {
     const bool on = app.tool.tool == tool;
     if (on) ImGui::PushStyleColor(ImGuiCol_Button, ImGui::GetStyleColorVec4(ImGuiCol_ButtonActive));
-    if (ImGui::Button(label, {ImGui::GetContentRegionAvail().x * 0.5f - 4, 0})) selectTool(app, tool);
+    if (ImGui::Button(label, {halfWidth(), 0})) selectTool(app, tool);
     if (on) ImGui::PopStyleColor();
     if (ImGui::IsItemHovered()) ImGui::SetTooltip("%s", tip);
 }
@@ -80,8 +85,9 @@ void drawPartsPanel(EditorApp& app, ImVec2 pos, ImVec2 size) {
             const bool on = app.tool.tool == Tool::Place && app.tool.placeKind == name;
             if (column++ % 2) ImGui::SameLine();
             if (on) ImGui::PushStyleColor(ImGuiCol_Button, ImGui::GetStyleColorVec4(ImGuiCol_ButtonActive));
-            if (ImGui::Button(name.c_str(), {ImGui::GetContentRegionAvail().x * (column % 2 ? 0.5f : 1.0f) - 4, 0}))
+            if (ImGui::Button(name.c_str(), {halfWidth(), 0}))
                 startPlacing(app, name);
+            app.logItem("place-" + name);
             if (on) ImGui::PopStyleColor();
             if (ImGui::IsItemHovered()) ImGui::SetTooltip("%s", std::string(kind.label).c_str());
         }
@@ -94,7 +100,7 @@ void drawPartsPanel(EditorApp& app, ImVec2 pos, ImVec2 size) {
             if (!kind.offboard) continue;
             const std::string name(kind.name);
             if (column++ % 2) ImGui::SameLine();
-            if (ImGui::Button(("+ " + name).c_str(), {ImGui::GetContentRegionAvail().x * (column % 2 ? 0.5f : 1.0f) - 4, 0}))
+            if (ImGui::Button(("+ " + name).c_str(), {halfWidth(), 0}))
                 addOffboardPart(app, name);
             if (ImGui::IsItemHovered()) ImGui::SetTooltip("Add a %s beside the board", std::string(kind.label).c_str());
         }

@@ -1,0 +1,35 @@
+#!/usr/bin/env bash
+# End to end: open a board with a forgotten track cut, apply the cut the Check panel suggests with
+# a mouse click, save with Ctrl+S, and check that netcheck now passes the board.
+source "$(dirname "$0")/e2e_lib.sh"
+run_under_xvfb "$0"
+
+sample="$STRIPSMITH_SOURCE/samples/flasher-missing-cut.board.json"
+board="$WORK/flasher.board.json"
+cp "$sample" "$board"
+check "the sample fails its check before the fix" bash -c "! '$STRIPSMITH_BIN/netcheck' '$board' >/dev/null"
+
+start_editor "$board"
+screenshot fix-0-opened
+# Show the finding on the board, then apply its suggested cut.
+click_at $(item_xy finding-0)
+screenshot fix-1-finding
+click_at $(item_xy apply-fix-0)
+screenshot fix-2-applied
+keys ctrl+s
+sleep 1
+check "the previous version is kept as a backup" test -s "$board.bak"
+check "netcheck passes the saved board" "$STRIPSMITH_BIN/netcheck" "$board"
+check "exactly one cut was added" python3 - "$sample" "$board" <<'PY'
+import json, sys
+before = json.load(open(sys.argv[1]))["cuts"]
+after = json.load(open(sys.argv[2]))["cuts"]
+sys.exit(0 if len(after) == len(before) + 1 and all(c in after for c in before) else 1)
+PY
+# Undo with Ctrl+Z brings the fault back (the fix is an ordinary undoable command).
+keys ctrl+z
+keys ctrl+s
+sleep 1
+check "after undo and save the board fails again" bash -c "! '$STRIPSMITH_BIN/netcheck' '$board' >/dev/null"
+screenshot fix-3-undone
+finish
