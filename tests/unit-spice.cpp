@@ -5,11 +5,14 @@
 #include <doctest/doctest.h>
 
 #include <algorithm>
+#include <random>
 #include <string>
+#include <vector>
 
 #include "netcheck/spice/spice_import.hpp"
 #include "netcheck/spice/spice_number.hpp"
 #include "netcheck/value.hpp"
+#include "test_support.hpp"
 
 using netcheck::Circuit;
 using netcheck::PinRef;
@@ -521,4 +524,59 @@ TEST_CASE("spice deck detection") {
     CHECK(netcheck::looksLikeSpiceDeck("title\nR1 a b 1k", "amp.txt"));
     CHECK_FALSE(netcheck::looksLikeSpiceDeck("  {\"parts\": {}}", "amp.txt"));
     CHECK_FALSE(netcheck::looksLikeSpiceDeck("title", "amp.circuit.json"));
+}
+
+TEST_CASE("spice damaged decks") {
+    // Random edits of real decks (fixed seed): every result is either a whole circuit whose nets
+    // name only declared pins of its parts, or one located error; never a crash or half a circuit.
+    std::vector<std::string> decks;
+    for (const char* folder : {"samples/spice", "tests/spice/decks"}) {
+        for (const std::string& file : test_support::sourceFiles(folder, ".cir")) {
+            decks.push_back(test_support::readTextFile(file));
+        }
+    }
+    REQUIRE(decks.size() >= 6);
+    std::mt19937 random(5150);
+    const std::string alphabet = " \n+*.$;=(){},0xXrRkKmM@/\t7";
+    for (int round = 0; round < 3000; ++round) {
+        CAPTURE(round);
+        std::string text = decks[random() % decks.size()];
+        for (unsigned edit = 0; edit < 1 + random() % 4; ++edit) {
+            const std::size_t at = random() % (text.size() + 1);
+            switch (random() % 4) {
+                case 0:
+                    text.erase(at, 1 + random() % 12);
+                    break;
+                case 1:
+                    text.insert(at, 1, alphabet[random() % alphabet.size()]);
+                    break;
+                case 2:
+                    text.insert(at, text.substr(random() % (text.size() + 1), random() % 40));
+                    break;
+                default:
+                    text.resize(at);
+                    break;
+            }
+        }
+        netcheck::SpiceOptions options;
+        options.flatten = random() % 2 == 0;
+        const auto result = netcheck::importSpice(text, "damaged.cir", options);
+        CHECK(result.ok() != result.error.has_value());
+        if (result.error) {
+            CHECK(result.error->file == "damaged.cir");
+            CHECK_FALSE(result.error->message.empty());
+            CHECK(result.error->line >= 0);
+            CHECK(result.error->line <=
+                  static_cast<int>(std::count(text.begin(), text.end(), '\n')) + 1);
+            continue;
+        }
+        for (const auto& [net, pins] : result.value->nets) {
+            for (const PinRef& pin : pins) {
+                CAPTURE(pin.name());
+                REQUIRE(result.value->parts.count(pin.ref) == 1);
+                const auto& declared = result.value->parts.at(pin.ref).pins;
+                CHECK(std::find(declared.begin(), declared.end(), pin.pin) != declared.end());
+            }
+        }
+    }
 }
