@@ -51,9 +51,13 @@ start_editor() {
     for _ in $(seq 150); do
         if grep -q '^STRIPSMITH_E2E view A1' "$1" 2>/dev/null; then
             # No window manager runs: give the window the keyboard focus ourselves.
+            # The window under the pointer is the editor's (it is the only one).
             local window
-            window=$(xdotool search --onlyvisible --pid "$editorPid" | head -n 1)
-            [ -n "$window" ] && xdotool windowfocus --sync "$window"
+            xdotool mousemove 700 450
+            sleep 0.2
+            window=$(xdotool getmouselocation --shell | sed -n 's/^WINDOW=//p')
+            [ -n "$window" ] || fail "no window under the pointer"
+            xdotool windowfocus "$window" || true
             sleep 0.3
             return 0
         fi
@@ -66,7 +70,7 @@ start_editor() {
 # Window position of hole (row, col), both zero-based, from the newest layout the editor logged.
 hole_xy() {
     grep '^STRIPSMITH_E2E view A1' "$1" | tail -n 1 |
-        awk -v r="$2" -v c="$3" '{ p = $6; s = (p < 0 ? -p : p);
+        awk -v r="$2" -v c="$3" '{ p = $7; s = (p < 0 ? -p : p);
             printf "%d %d\n", $4 + c * p + 0.5, $5 + r * s + 0.5 }'
 }
 
