@@ -123,12 +123,12 @@ cmp -s "$board" "$work/empty.board.json" || fail "the board file changed before 
 # ---- second session: restore and save --------------------------------------------------------
 start_editor "$work/second.log"
 xdotool mousemove 5 5
-sleep 1.5
-shot recovery-offer
 # The offer is a modal; everything behind it is dimmed, so the only pixels in the plain button
 # colour are its two buttons, "Restore" (left) and "Discard" (right).
-convert "$work/recovery-offer.png" -depth 8 "$work/recovery-offer.ppm"
-read -r x y < <(python3 - "$work/recovery-offer.ppm" <<'PY'
+find_restore() {
+    shot recovery-offer
+    convert "$work/recovery-offer.png" -depth 8 "$work/recovery-offer.ppm"
+    python3 - "$work/recovery-offer.ppm" <<'PY'
 import sys
 data = open(sys.argv[1], "rb").read()
 # P6 header: magic, width, height, maxval, then RGB bytes.
@@ -139,24 +139,35 @@ while len(fields) < 4:
     while not data[end:end + 1].isspace(): end += 1
     fields.append(data[pos:end]); pos = end
 pos += 1
-width, height = int(fields[1]), int(fields[2])
+width = int(fields[1])
 pixels = data[pos:]
 button = bytes((56, 64, 74))  # the editor's button colour (0.22, 0.25, 0.29)
-found = [(i // 3 % width, i // 3 // width) for i in range(0, len(pixels), 3)
-         if pixels[i:i + 3] == button]
-if not found:
-    sys.exit("no button found")
+found = []
+start = pixels.find(button)
+while start >= 0:
+    if start % 3 == 0: found.append((start // 3 % width, start // 3 // width))
+    start = pixels.find(button, start + 1)
+if len(found) < 100:
+    sys.exit(1)  # not drawn yet
 left = min(x for x, _ in found)
 column = sorted(y for x, y in found if x == left)
 print(left + 12, column[len(column) // 2])
 PY
-) || fail "could not find the Restore button in recovery-offer.png"
+}
+restore=""
+for _ in $(seq 40); do
+    restore=$(find_restore) && break
+    restore=""
+    sleep 0.5
+done
+[ -n "$restore" ] || fail "the restore offer did not appear (see recovery-offer.png)"
+read -r x y <<<"$restore"
 click_at "$x" "$y"
 xdotool mousemove 700 450
 sleep 0.5
 shot restored
 key ctrl+s
-for _ in $(seq 40); do
+for _ in $(seq 120); do
     cmp -s "$board" "$work/empty.board.json" || break
     sleep 0.25
 done
