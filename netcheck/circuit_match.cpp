@@ -53,6 +53,7 @@ public:
     Uses(const CheckContext& context, const Circuit& circuit)
         : context_(context), slots_(indexBoardParts(context.board())) {
         uses_.reserve(circuit.parts.size());
+        byRef_.reserve(circuit.parts.size());
         for (const auto& [ref, part] : circuit.parts) add(ref, &part);
     }
 

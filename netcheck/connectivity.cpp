@@ -114,11 +114,6 @@ int Connectivity::islandOfHole(Hole hole) const {
     return islandOfNode_[static_cast<std::size_t>(hole.row * board_->cols + hole.col)];
 }
 
-int Connectivity::islandOfNode(int node) const {
-    if (node < 0 || node >= nodeCount()) return -1;
-    return islandOfNode_[static_cast<std::size_t>(node)];
-}
-
 int Connectivity::islandOfPin(const PinRef& pin) const {
     const int lug = findLug(pinNodes_, pin);
     if (lug >= 0) return islandOfNode(lug);

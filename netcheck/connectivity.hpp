@@ -37,7 +37,9 @@ public:
     /// Number of nodes: holes, then off-board lugs.
     int nodeCount() const { return static_cast<int>(islandOfNode_.size()); }
     /// Island of a node id (see the class comment); -1 when out of range.
-    int islandOfNode(int node) const;
+    int islandOfNode(int node) const {
+        return node < 0 || node >= nodeCount() ? -1 : islandOfNode_[static_cast<std::size_t>(node)];
+    }
 
 private:
     const Board* board_;

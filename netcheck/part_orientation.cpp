@@ -6,6 +6,7 @@
 #include <algorithm>
 #include <array>
 #include <cstdint>
+#include <optional>
 #include <unordered_map>
 
 #include "part_kinds.hpp"
@@ -34,11 +35,15 @@ Freedom freedomOf(const Board& board, const PartUse& use) {
     return Freedom::Fixed;
 }
 
-// How many pins of each intended net sit in each island.
+// How many pins of each intended net sit in each island. Most islands carry one net, so the count
+// lives in per-island arrays; only pins of a second net in an island go to a hash map.
 class NetCounts {
 public:
     NetCounts(const Connectivity& copper, const std::vector<PartUse>& uses, int netCount)
-        : copper_(copper), totals_(static_cast<std::size_t>(netCount), 0) {
+        : copper_(copper),
+          firstNet_(static_cast<std::size_t>(copper.islandCount()), -1),
+          firstCount_(static_cast<std::size_t>(copper.islandCount()), 0),
+          totals_(static_cast<std::size_t>(netCount), 0) {
         for (const PartUse& use : uses) add(use, +1);
     }
 
@@ -46,7 +51,7 @@ public:
         for (int k = 0; k < use.pinCount(); ++k) {
             const int net = use.net[static_cast<std::size_t>(k)];
             if (net < 0) continue;
-            counts_[key(net, islandOf(use, k))] += delta;
+            slot(net, islandOf(use, k)) += delta;
             totals_[static_cast<std::size_t>(net)] += delta;
         }
     }
@@ -54,8 +59,12 @@ public:
     int at(const PartUse& use, int pin) const {
         const int net = use.net[static_cast<std::size_t>(pin)];
         if (net < 0) return 0;
-        auto it = counts_.find(key(net, islandOf(use, pin)));
-        return it == counts_.end() ? 0 : it->second;
+        const int island = islandOf(use, pin);
+        if (firstNet_[static_cast<std::size_t>(island)] == net) {
+            return firstCount_[static_cast<std::size_t>(island)];
+        }
+        auto it = others_.find(key(net, island));
+        return it == others_.end() ? 0 : it->second;
     }
 
     /// Agreement of the part as presently oriented (its own pins must have been removed).
@@ -68,6 +77,12 @@ public:
     int total(int net) const { return net < 0 ? 0 : totals_[static_cast<std::size_t>(net)]; }
 
 private:
+    int& slot(int net, int island) {
+        int& first = firstNet_[static_cast<std::size_t>(island)];
+        if (first < 0) first = net;
+        if (first == net) return firstCount_[static_cast<std::size_t>(island)];
+        return others_[key(net, island)];
+    }
     int islandOf(const PartUse& use, int pin) const {
         return copper_.islandOfNode(use.nodes[static_cast<std::size_t>(pin)]);
     }
@@ -76,7 +91,9 @@ private:
                static_cast<std::uint32_t>(island);
     }
     const Connectivity& copper_;
-    std::unordered_map<std::uint64_t, int> counts_;
+    std::vector<int> firstNet_;
+    std::vector<int> firstCount_;
+    std::unordered_map<std::uint64_t, int> others_;
     std::vector<int> totals_;
 };
 
@@ -151,14 +168,36 @@ private:
     std::unordered_map<std::uint64_t, int> counts_;
 };
 
-void chooseEndForEnd(PartUse& use, NetCounts& counts, const FlexibleCounts& flexible) {
+// The flexible counts are only needed on a tie, so they are built on the first one.
+class LazyFlexibleCounts {
+public:
+    LazyFlexibleCounts(const Connectivity& copper, const std::vector<PartUse>& uses,
+                       const std::vector<Freedom>& freedom)
+        : copper_(copper), uses_(uses), freedom_(freedom) {}
+    const FlexibleCounts& get() {
+        if (!counts_) counts_.emplace(copper_, uses_, freedom_);
+        return *counts_;
+    }
+
+private:
+    const Connectivity& copper_;
+    const std::vector<PartUse>& uses_;
+    const std::vector<Freedom>& freedom_;
+    std::optional<FlexibleCounts> counts_;
+};
+
+void chooseEndForEnd(PartUse& use, NetCounts& counts, LazyFlexibleCounts& flexible) {
     counts.add(use, -1);
     const int placed = counts.score(use);
-    const int placedFlexible = flexible.score(use);
     use.swapPins(0, 1);
     const int swapped = counts.score(use);
-    const bool better = swapped > placed ||
-                        (swapped == placed && flexible.score(use) > placedFlexible);
+    bool better = swapped > placed;
+    if (swapped == placed && use.net[0] != use.net[1]) {
+        const int swappedFlexible = flexible.get().score(use);
+        use.swapPins(0, 1);
+        better = swappedFlexible > flexible.get().score(use);
+        use.swapPins(0, 1);
+    }
     if (!better) use.swapPins(0, 1);  // a full tie keeps the part as written
     counts.add(use, +1);
 }
@@ -265,7 +304,8 @@ void orientParts(const CheckContext& context, std::vector<PartUse>& uses,
     }
     if (!any) return;
     NetCounts counts(context.copper(), uses, static_cast<int>(netNames.size()));
-    const FlexibleCounts flexible(context.copper(), uses, freedom);
+    // Flexible counts do not depend on orientation, so building them late changes nothing.
+    LazyFlexibleCounts flexible(context.copper(), uses, freedom);
     // Two rounds, so a part flipped in the first round is seen by its neighbours in the second.
     for (int round = 0; round < 2; ++round) {
         for (std::size_t u = 0; u < uses.size(); ++u) {
