@@ -24,16 +24,19 @@ void drawBoardView(cairo_t* cr, const ViewContext& context) {
 void drawHoles(cairo_t* cr, const ViewContext& context, double outlineGrey) {
     const Tile& tile = context.view.tile;
     double radius = context.holeRadius();
-    cairo_set_line_width(cr, 0.12);
-    for (int row = tile.row0; row < tile.row0 + tile.rows; ++row) {
-        for (int col = tile.col0; col < tile.col0 + tile.cols; ++col) {
-            Point centre = context.at({row, col});
-            cairo_new_sub_path(cr);
-            cairo_arc(cr, centre.x, centre.y, radius, 0, 2 * M_PI);
-            cairo_set_source_rgb(cr, 1, 1, 1);
-            cairo_fill_preserve(cr);
-            cairo_set_source_rgb(cr, outlineGrey, outlineGrey, outlineGrey);
-            cairo_stroke(cr);
+    // Fills only (a grey disc, then a white one inside): exact circles with no stroke width,
+    // so each hole centre can be measured on the printed file.
+    for (int pass = 0; pass < 2; ++pass) {
+        double r = pass == 0 ? radius + 0.12 : radius;
+        double grey = pass == 0 ? outlineGrey : 1.0;
+        for (int row = tile.row0; row < tile.row0 + tile.rows; ++row) {
+            for (int col = tile.col0; col < tile.col0 + tile.cols; ++col) {
+                Point centre = context.at({row, col});
+                cairo_new_path(cr);
+                cairo_arc(cr, centre.x, centre.y, r, 0, 2 * M_PI);
+                cairo_set_source_rgb(cr, grey, grey, grey);
+                cairo_fill(cr);
+            }
         }
     }
 }

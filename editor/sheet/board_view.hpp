@@ -42,7 +42,7 @@ void drawViewFrame(cairo_t* cr, const ViewContext& context);
 /// On a split board: shades the holes shared with each neighbouring page and names that page.
 void drawOverlapMarks(cairo_t* cr, const ViewContext& context);
 
-/// Every hole of the tile as a small circle of `holeRadius()`, white inside.
+/// Every hole of the tile: a white disc of `holeRadius()` in a thin ring of `outlineGrey`.
 void drawHoles(cairo_t* cr, const ViewContext& context, double outlineGrey);
 
 }  // namespace sheet

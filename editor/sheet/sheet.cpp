@@ -127,6 +127,8 @@ std::optional<Rect> roomOnLastBoardPage(const SheetPlan& plan) {
 int countListPages(SheetData& data) {
     cairo_surface_t* scrap = cairo_image_surface_create(CAIRO_FORMAT_A8, 1, 1);
     cairo_t* cr = cairo_create(scrap);
+    prepareText(cr);
+    cairo_scale(cr, kPointsPerMm, kPointsPerMm);
     PageFlow flow(cr, roomOnLastBoardPage(data.plan), listArea(data.plan), [] {});
     drawLists(flow, data.board, data.report, data.cuts);
     int pages = flow.pageCount();
@@ -195,6 +197,10 @@ std::string statusText(cairo_status_t status) {
 
 }  // namespace
 
+bool isSheetPath(const std::string& outPath) {
+    return formatOf(outPath).has_value();
+}
+
 std::optional<std::string> exportSheet(const Board& board, const SheetOptions& options,
                                        const std::string& outPath) {
     auto format = formatOf(outPath);
@@ -203,6 +209,7 @@ std::optional<std::string> exportSheet(const Board& board, const SheetOptions& o
     data.pageCount = data.plan.boardPageCount + countListPages(data);
     cairo_surface_t* surface = createSurface(*format, outPath, data);
     cairo_t* cr = cairo_create(surface);
+    prepareText(cr);
     drawSheet(cr, *format, data);
     cairo_status_t status = cairo_status(cr);
     cairo_destroy(cr);
@@ -210,7 +217,8 @@ std::optional<std::string> exportSheet(const Board& board, const SheetOptions& o
     if (status == CAIRO_STATUS_SUCCESS) status = cairo_surface_status(surface);
     cairo_surface_destroy(surface);
     if (status != CAIRO_STATUS_SUCCESS) {
-        return "cannot write the sheet \"" + outPath + "\": " + statusText(status);
+        return "cannot write the sheet \"" + outPath + "\": " + statusText(status) +
+               " (does the folder exist, and may it be written?)";
     }
     return std::nullopt;
 }

@@ -19,6 +19,9 @@ struct SheetOptions {
     int overlapHoles = 2;    ///< holes repeated on both neighbouring pages when a board is split
 };
 
+/// True when `outPath` ends in ".pdf" or ".svg" (any case): the formats exportSheet writes.
+bool isSheetPath(const std::string& outPath);
+
 /// Writes the sheet to `outPath`: PDF when it ends in ".pdf", SVG when ".svg" (case-insensitive;
 /// an SVG holds all pages one under another, sized in millimetres). Returns an error message, or
 /// nullopt when the file was written.

@@ -1,5 +1,7 @@
 #include "sheet_cli.hpp"
 
+#include <cerrno>
+#include <cstring>
 #include <fstream>
 #include <iostream>
 #include <sstream>
@@ -53,6 +55,9 @@ std::optional<SheetArgs> parseArgs(int argc, char** argv) {
         }
     }
     if (args.out.empty()) return fail("--sheet needs the output file (.pdf or .svg)");
+    if (!isSheetPath(args.out)) {
+        return fail("\"" + args.out + "\" is not a .pdf or .svg file name");
+    }
     if (args.board.empty()) return fail("no board file given");
     return args;
 }
@@ -80,7 +85,8 @@ int runSheetCommand(int argc, char** argv) {
     if (!args) return 2;
     auto text = readFile(args->board);
     if (!text) {
-        std::cerr << "stripsmith: " << args->board << ": cannot read the board file\n";
+        std::cerr << "stripsmith: " << args->board
+                  << ": cannot read the board file: " << std::strerror(errno) << "\n";
         return 2;
     }
     auto board = netcheck::readBoard(*text, args->board);

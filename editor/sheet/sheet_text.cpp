@@ -8,6 +8,14 @@ void setColour(cairo_t* cr, Rgb colour) {
     cairo_set_source_rgb(cr, colour.r, colour.g, colour.b);
 }
 
+void prepareText(cairo_t* cr) {
+    cairo_font_options_t* options = cairo_font_options_create();
+    cairo_font_options_set_hint_metrics(options, CAIRO_HINT_METRICS_OFF);
+    cairo_font_options_set_hint_style(options, CAIRO_HINT_STYLE_NONE);
+    cairo_set_font_options(cr, options);
+    cairo_font_options_destroy(options);
+}
+
 void setFont(cairo_t* cr, double sizeMm, Weight weight) {
     cairo_select_font_face(
         cr, "DejaVu Sans", CAIRO_FONT_SLANT_NORMAL,

@@ -29,6 +29,10 @@ inline constexpr Rgb kGreyInk{0.35, 0.35, 0.35};
 
 void setColour(cairo_t* cr, Rgb colour);
 
+/// Turns off hinting of glyph advances so that text measures the same on every surface (the
+/// list pages are measured on a scrap surface before they are drawn).
+void prepareText(cairo_t* cr);
+
 /// Selects the sheet font at `sizeMm`.
 void setFont(cairo_t* cr, double sizeMm, Weight weight = Weight::Normal);
 
