@@ -25,6 +25,11 @@ bool EditorApp::perform(std::unique_ptr<netcheck::edit::Command> command, int me
     return true;
 }
 
+void EditorApp::say(std::string message) {
+    status = std::move(message);
+    if (logHoles) std::fprintf(stderr, "STRIPSMITH_E2E status %s\n", status.c_str());
+}
+
 void EditorApp::logItem(const std::string& name) {
     if (!logHoles) return;
     const ImVec2 a = ImGui::GetItemRectMin(), b = ImGui::GetItemRectMax();

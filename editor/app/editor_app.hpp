@@ -74,7 +74,7 @@ struct EditorApp {
     /// NAME X Y" when it moves, so scripted tests know where to click (they still click).
     void logItem(const std::string& name);
     /// Message for the status bar.
-    void say(std::string message) { status = std::move(message); }
+    void say(std::string message);
 };
 
 /// Merge keys: commands of one gesture share a key so the gesture is one undo step.

@@ -111,6 +111,14 @@ screenshot() {  # screenshot NAME
     import -window root "$ART/$1.png" 2>/dev/null || xwd -root -silent >"$ART/$1.xwd"
 }
 
+eventually() {  # eventually COMMAND...: retries for up to 10 s (frames are slow on a busy machine)
+    for _ in $(seq 1 50); do
+        if "$@" >/dev/null 2>&1; then return 0; fi
+        sleep 0.2
+    done
+    return 1
+}
+
 wait_for_file() {
     for _ in $(seq 1 50); do
         if [ -s "$1" ]; then return 0; fi

@@ -17,9 +17,8 @@ screenshot fix-1-finding
 click_at $(item_xy apply-fix-0)
 screenshot fix-2-applied
 keys ctrl+s
-sleep 1
-check "the previous version is kept as a backup" test -s "$board.bak"
-check "netcheck passes the saved board" "$STRIPSMITH_BIN/netcheck" "$board"
+check "the previous version is kept as a backup" eventually test -s "$board.bak"
+check "netcheck passes the saved board" eventually "$STRIPSMITH_BIN/netcheck" "$board"
 check "exactly one cut was added" python3 - "$sample" "$board" <<'PY'
 import json, sys
 before = json.load(open(sys.argv[1]))["cuts"]
@@ -29,7 +28,6 @@ PY
 # Undo with Ctrl+Z brings the fault back (the fix is an ordinary undoable command).
 keys ctrl+z
 keys ctrl+s
-sleep 1
-check "after undo and save the board fails again" bash -c "! '$STRIPSMITH_BIN/netcheck' '$board' >/dev/null"
+check "after undo and save the board fails again" eventually bash -c "! '$STRIPSMITH_BIN/netcheck' '$board'"
 screenshot fix-3-undone
 finish
