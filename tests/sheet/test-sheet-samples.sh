@@ -20,9 +20,10 @@ for board in "${boards[@]}"; do
   read -r w h < <(page_size_pt "$pdf")
   # ISO 216 A4 = 210 x 297 mm = 595.276 x 841.890 pt (1 pt = 1/72 in, ISO 32000-1).
   expect "$name: A4 pages" eval 'near "$w" 595.276 0.01 && near "$h" 841.890 0.01'
-  rm -f "$out/$name"-*.png
-  pdftoppm -r 100 -png "$pdf" "$out/$name"
-  pngs=$(find "$out" -maxdepth 1 -name "$name-*.png" -size +1k | wc -l)
+  rm -rf "${out:?}/$name"
+  mkdir -p "$out/$name"
+  pdftoppm -r 100 -png "$pdf" "$out/$name/page"
+  pngs=$(find "$out/$name" -name "page-*.png" -size +1k | wc -l)
   expect "$name: $pages pages rendered to PNG" test "$pngs" -eq "$pages"
 
   pdftocairo -svg -noshrink -nocenter -f 1 -l 1 "$pdf" "$out/$name-page1.svg"
