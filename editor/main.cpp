@@ -26,6 +26,7 @@
 #include "editor/app/frame.hpp"
 #include "editor/app/look.hpp"
 #include "editor/files/file_actions.hpp"
+#include "editor/platform/draw_data_split.hpp"
 #include "editor/platform/imgui_impl_sfml.hpp"
 #include "editor/platform/x11_errors.hpp"
 #include "editor/sheet/sheet_cli.hpp"
@@ -111,7 +112,7 @@ std::optional<Options> parseArgs(int argc, char** argv, std::string& problem) {
 
 // ---- window and ImGui ----------------------------------------------------------------------------
 
-void renderFrame(sf::Window& window, EditorApp& app, float dt) {
+void renderFrame(sf::Window& window, EditorApp& app, float dt, platform::DrawDataSplitter& splitter) {
     platform::newFrame(window, dt);
     ImGui_ImplOpenGL2_NewFrame();
     ImGui::NewFrame();
@@ -121,6 +122,7 @@ void renderFrame(sf::Window& window, EditorApp& app, float dt) {
     glViewport(0, 0, static_cast<int>(size.x), static_cast<int>(size.y));
     glClearColor(0.11f, 0.125f, 0.15f, 1.0f);
     glClear(GL_COLOR_BUFFER_BIT);
+    splitter.split(ImGui::GetDrawData());
     ImGui_ImplOpenGL2_RenderDrawData(ImGui::GetDrawData());
 }
 
@@ -166,6 +168,8 @@ int run(const Options& options) {
     window.setActive(true);
 
     ImGui_ImplOpenGL2_Init();
+    platform::allowLargeDrawLists();
+    platform::DrawDataSplitter splitter;
 
     EditorApp app;
     app.view.side = options.side;
@@ -187,7 +191,7 @@ int run(const Options& options) {
 
     if (screenshot && status == 0) {
         // Two frames let ImGui settle window sizes before the one captured.
-        for (int i = 0; i < 3; ++i) renderFrame(window, app, 1.0f / 60.0f);
+        for (int i = 0; i < 3; ++i) renderFrame(window, app, 1.0f / 60.0f, splitter);
         if (!saveScreenshot(options.width, options.height, options.screenshot)) {
             std::fprintf(stderr, "stripsmith: cannot write %s\n", options.screenshot.c_str());
             status = 2;
@@ -205,7 +209,7 @@ int run(const Options& options) {
         const auto now = std::chrono::steady_clock::now();
         const float dt = std::chrono::duration<float>(now - last).count();
         last = now;
-        renderFrame(window, app, dt);
+        renderFrame(window, app, dt, splitter);
         window.display();
         tickAutosave(app, dt);
         if (const std::string t = windowTitle(app); t != title) {

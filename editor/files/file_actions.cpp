@@ -6,6 +6,7 @@
 #include <imgui.h>
 #include <nlohmann/json.hpp>
 
+#include "editor/sheet/sheet.hpp"
 #include "netcheck/board_file.hpp"
 #include "netcheck/file_io.hpp"
 
@@ -85,6 +86,14 @@ bool saveBoardFile(EditorApp& app, const std::string& path) {
     if (!app.recoveryDir.empty()) clearRecovery(app.recoveryDir);
     app.say("Saved " + path);
     return true;
+}
+
+void exportSheetTo(EditorApp& app, const std::string& path) {
+    if (auto error = sheet::exportSheet(app.doc.board(), sheet::SheetOptions{}, path)) {
+        showError(app, "Could not write the build sheet", *error);
+        return;
+    }
+    app.say("Wrote the build sheet " + path);
 }
 
 // ---- actions -----------------------------------------------------------------------------------
@@ -210,7 +219,9 @@ void drawRecoveryOffer(EditorApp& app) {
     ImGui::Text("An automatic copy of the board you were working on was kept%s%s.",
                 rec.originalPath.empty() ? "" : " (", rec.originalPath.empty() ? "" : (rec.originalPath + ")").c_str());
     ImGui::Spacing();
-    if (ImGui::Button("Restore", {110, 0})) {
+    const bool restore = ImGui::Button("Restore", {110, 0});
+    app.logItem("restore");
+    if (restore) {
         auto result = netcheck::readBoard(rec.boardText, "recovered board");
         if (result.ok()) {
             app.doc.reset(std::move(*result.value), rec.originalPath, false, true);
@@ -244,8 +255,8 @@ void drawFileDialogs(EditorApp& app) {
                 doPending(app, app.dialogs.pending, app.dialogs.pendingPath);
             app.dialogs.pending = PendingAction::None;
             break;
-        case FileChooser::Purpose::OpenCircuit:
-        case FileChooser::Purpose::ExportSheet: app.chosenForPanel = path; break;
+        case FileChooser::Purpose::OpenCircuit: app.chosenForPanel = path; break;
+        case FileChooser::Purpose::ExportSheet: exportSheetTo(app, path); break;
         }
     } else if (wasOpen && !app.chooser.isOpen() && !app.dialogs.askUnsaved) {
         app.dialogs.pending = PendingAction::None;  // Save As cancelled: so is what waited for it

@@ -23,6 +23,9 @@ bool loadBoardFile(EditorApp& app, const std::string& path);
 /// Writes the document atomically (keeping `<path>.bak`); false with an error dialog on failure.
 bool saveBoardFile(EditorApp& app, const std::string& path);
 
+/// Writes the printable build sheet (PDF or SVG by the name's ending); errors in a dialog.
+void exportSheetTo(EditorApp& app, const std::string& path);
+
 /// Draws the chooser, the unsaved-changes prompt, error and notice dialogs, and the recovery offer.
 void drawFileDialogs(EditorApp& app);
 

@@ -20,6 +20,15 @@ void fileMenu(EditorApp& app) {
     if (ImGui::MenuItem("Save", "Ctrl+S")) actionSave(app);
     if (ImGui::MenuItem("Save as...", "Ctrl+Shift+S")) actionSaveAs(app);
     ImGui::Separator();
+    if (ImGui::MenuItem("Export build sheet (PDF/SVG)...")) {
+        std::string name = app.doc.path().empty() ? "board" : app.doc.path();
+        const auto slash = name.find_last_of('/');
+        if (slash != std::string::npos) name = name.substr(slash + 1);
+        if (const auto dot = name.find('.'); dot != std::string::npos) name = name.substr(0, dot);
+        const auto folder = app.doc.path().empty() ? std::string() : app.doc.path().substr(0, app.doc.path().find_last_of('/'));
+        app.chooser.open(FileChooser::Purpose::ExportSheet, folder, name + "-sheet.pdf");
+    }
+    ImGui::Separator();
     if (ImGui::MenuItem("Quit", "Ctrl+Q")) actionQuit(app);
     ImGui::EndMenu();
 }

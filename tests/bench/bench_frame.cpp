@@ -8,6 +8,7 @@
 #include "editor/app/editor_app.hpp"
 #include "editor/app/frame.hpp"
 #include "editor/app/look.hpp"
+#include "editor/platform/draw_data_split.hpp"
 #include "editor/tools/part_factory.hpp"
 
 namespace {
@@ -46,6 +47,7 @@ struct Fixture {
         ImGuiIO& io = ImGui::GetIO();
         io.IniFilename = nullptr;
         io.DisplaySize = {1400, 900};
+        platform::allowLargeDrawLists();
         loadFonts();
         unsigned char* pixels = nullptr;
         int w = 0, h = 0;
