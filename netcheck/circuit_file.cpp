@@ -88,13 +88,13 @@ Json circuitToJson(const Circuit& circuit) {
         entry["value"] = part.value;
         if (!part.pins.empty()) entry["pins"] = part.pins;
         appendExtras(entry, part.extra);
-        parts[ref] = std::move(entry);
+        appendMember(parts, ref, std::move(entry));
     }
     Json nets = Json::object();
     for (const auto& [name, pins] : circuit.nets) {
         Json list = Json::array();
         for (const PinRef& pin : pins) list.push_back(pin.name());
-        nets[name] = std::move(list);
+        appendMember(nets, name, std::move(list));
     }
     out["parts"] = std::move(parts);
     out["nets"] = std::move(nets);

@@ -64,6 +64,69 @@ std::string syntaxMessage(const nlohmann::json::parse_error& e) {
     return "JSON " + what;
 }
 
+// Builds the document like nlohmann's own DOM parser, but appends object members instead of
+// looking each key up first: ordered objects search linearly, which made large objects (a
+// circuit with thousands of parts) quadratic. Duplicate keys are found by a separate scan.
+class AppendingBuilder {
+public:
+    explicit AppendingBuilder(Json& root) : root_(root) {}
+
+    bool null() { return add(nullptr); }
+    bool boolean(bool value) { return add(value); }
+    bool number_integer(Json::number_integer_t value) { return add(value); }
+    bool number_unsigned(Json::number_unsigned_t value) { return add(value); }
+    bool number_float(Json::number_float_t value, const std::string&) { return add(value); }
+    bool string(std::string& value) { return add(std::move(value)); }
+    bool binary(Json::binary_t& value) { return add(Json::binary(std::move(value))); }
+    bool key(std::string& name) {
+        key_ = std::move(name);
+        return true;
+    }
+    bool start_object(std::size_t) { return open(Json::object()); }
+    bool start_array(std::size_t) { return open(Json::array()); }
+    bool end_object() { return close(); }
+    bool end_array() { return close(); }
+    bool parse_error(std::size_t, const std::string&, const nlohmann::detail::exception& e) {
+        if (const auto* syntax = dynamic_cast<const Json::parse_error*>(&e)) throw *syntax;
+        throw Json::parse_error::create(101, 0, e.what(), nullptr);
+    }
+
+private:
+    // Containers on the stack stay put: their parent gets no new member while they are open.
+    template <class Value>
+    bool add(Value&& value) {
+        place(Json(std::forward<Value>(value)));
+        return true;
+    }
+    bool open(Json container) {
+        open_.push_back(place(std::move(container)));
+        return true;
+    }
+    bool close() {
+        open_.pop_back();
+        return true;
+    }
+    Json* place(Json value) {
+        if (open_.empty()) {
+            root_ = std::move(value);
+            return &root_;
+        }
+        Json& parent = *open_.back();
+        if (parent.is_array()) {
+            auto& items = parent.get_ref<Json::array_t&>();
+            items.push_back(std::move(value));
+            return &items.back();
+        }
+        auto& members = parent.get_ref<Json::object_t&>();
+        members.emplace_back(std::move(key_), std::move(value));  // the vector's, not a lookup
+        return &members.back().second;
+    }
+
+    Json& root_;
+    std::vector<Json*> open_;
+    std::string key_;
+};
+
 std::string typeName(const Json& value) {
     if (value.is_number()) return "a number";
     if (value.is_string()) return "a string";
@@ -105,7 +168,9 @@ ReadResult<Json> parseJsonText(std::string_view text, std::string_view fileName,
         return result;
     }
     try {
-        Json document = Json::parse(text.begin(), text.end());
+        Json document;
+        AppendingBuilder builder(document);
+        Json::sax_parse(text.begin(), text.end(), &builder);
         if (!document.is_object()) {
             result.error = errorAt(text, fileName, findValue(text, {}).value_or(0),
                                    "the file holds " + typeName(document) + ", not a JSON object");
@@ -236,6 +301,10 @@ nlohmann::json JsonReader::extras(const Json& object,
         }
     }
     return kept;
+}
+
+void appendMember(Json& object, std::string key, Json value) {
+    object.get_ref<Json::object_t&>().emplace_back(std::move(key), std::move(value));
 }
 
 void appendExtras(Json& out, const nlohmann::json& extra) {

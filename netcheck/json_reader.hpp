@@ -109,6 +109,10 @@ ReadResult<T> readDocument(std::string_view text, std::string_view fileName,
 /// Quotes a string the JSON way for messages: "Z99".
 std::string inQuotes(std::string_view text);
 
+/// Appends a member whose key the caller knows is not in `object` yet, without the linear lookup
+/// of ordered objects.
+void appendMember(Json& object, std::string key, Json value);
+
 /// Appends `extra` members that do not clash with keys already in `out`.
 void appendExtras(Json& out, const nlohmann::json& extra);
 
