@@ -1,5 +1,6 @@
 // "Check": the live check's errors and warnings in the trade's words. Click one to see it on the
 // board; apply its suggested cut or link with one click (undoable).
+#include <optional>
 #include <string>
 
 #include <imgui.h>
@@ -11,7 +12,9 @@
 namespace stripsmith {
 namespace {
 
-void findingRow(EditorApp& app, const netcheck::Finding& finding, int index) {
+// Returns true when its fix button was pressed (applied after the list, which the fix changes).
+bool findingRow(EditorApp& app, const netcheck::Finding& finding, int index) {
+    bool fixPressed = false;
     ImGui::PushID(index);
     const bool error = finding.severity == netcheck::Severity::Error;
     const bool focused = app.view.focusedFinding && *app.view.focusedFinding == index;
@@ -30,18 +33,16 @@ void findingRow(EditorApp& app, const netcheck::Finding& finding, int index) {
     ImGui::TextUnformatted(finding.message.c_str());
     if (!finding.fix.empty()) ImGui::TextDisabled("%s", finding.fix.c_str());
     ImGui::PopTextWrapPos();
-    if (auto command = fixCommand(app.doc.board(), finding)) {
+    if (fixCommand(app.doc.board(), finding)) {
         const std::string label = finding.suggestedCut ? "Apply cut " + netcheck::cutName(*finding.suggestedCut)
                                                        : std::string(finding.suggestedLinks.size() > 1 ? "Add the links" : "Add the link");
-        if (ImGui::Button(label.c_str())) {
-            app.perform(std::move(command));
-            app.view.focusedFinding.reset();
-        }
+        fixPressed = ImGui::Button(label.c_str());
         app.logItem("apply-fix-" + std::to_string(index));
     }
     ImGui::Unindent();
     ImGui::Spacing();
     ImGui::PopID();
+    return fixPressed;
 }
 
 }  // namespace
@@ -58,11 +59,16 @@ void drawCheckPanel(EditorApp& app, ImVec2 pos, ImVec2 size) {
         }
         ImGui::Separator();
         const int errors = static_cast<int>(report.errors.size());
-        // Copies: applying a fix re-runs the check and replaces the report mid-loop.
-        const auto findings = report.errors;
-        const auto warnings = report.warnings;
-        for (int i = 0; i < errors; ++i) findingRow(app, findings[static_cast<std::size_t>(i)], i);
-        for (std::size_t i = 0; i < warnings.size(); ++i) findingRow(app, warnings[i], errors + static_cast<int>(i));
+        std::optional<netcheck::Finding> toFix;
+        for (int i = 0; i < errors; ++i)
+            if (findingRow(app, report.errors[static_cast<std::size_t>(i)], i)) toFix = report.errors[static_cast<std::size_t>(i)];
+        for (std::size_t i = 0; i < report.warnings.size(); ++i)
+            if (findingRow(app, report.warnings[i], errors + static_cast<int>(i))) toFix = report.warnings[i];
+        // Applying re-runs the check, so only after the list is drawn.
+        if (toFix) {
+            app.perform(fixCommand(app.doc.board(), *toFix));
+            app.view.focusedFinding.reset();
+        }
     }
     ImGui::End();
 }

@@ -35,6 +35,10 @@ check() {  # check "what" command...
 }
 
 finish() {
+    if [ "$FAILED" -ne 0 ]; then
+        echo "--- what the editor did:"
+        grep "STRIPSMITH_E2E status" "$LOG" || true
+    fi
     echo "$PASSED passed, $FAILED failed"
     [ "$FAILED" -eq 0 ]
 }
@@ -100,6 +104,23 @@ drag() {  # drag X1 Y1 X2 Y2
 keys() {  # keys KEY... (xdotool key names, e.g. ctrl+s Return)
     xdotool key --delay 120 "$@"
     sleep 0.4
+}
+
+# shortcut KEY PATTERN: presses KEY until the editor reports a new status line matching PATTERN
+# (up to three presses). On a heavily loaded machine the X server now and then drops a synthetic
+# key event before the window sees it; the editor's own reaction is what the test waits for.
+shortcut() {
+    local before
+    before=$(grep -c "STRIPSMITH_E2E status .*$2" "$LOG" || true)
+    for _ in 1 2 3; do
+        keys "$1"
+        for _ in $(seq 1 25); do
+            if [ "$(grep -c "STRIPSMITH_E2E status .*$2" "$LOG" || true)" -gt "$before" ]; then return 0; fi
+            sleep 0.2
+        done
+        echo "no \"$2\" after $1; pressing it again" >&2
+    done
+    return 1
 }
 
 type_text() {

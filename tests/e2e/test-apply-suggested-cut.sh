@@ -16,7 +16,7 @@ click_at $(item_xy finding-0)
 screenshot fix-1-finding
 click_at $(item_xy apply-fix-0)
 screenshot fix-2-applied
-keys ctrl+s
+shortcut ctrl+s Saved
 check "the previous version is kept as a backup" eventually test -s "$board.bak"
 check "netcheck passes the saved board" eventually "$STRIPSMITH_BIN/netcheck" "$board"
 check "exactly one cut was added" python3 - "$sample" "$board" <<'PY'
@@ -26,8 +26,8 @@ after = json.load(open(sys.argv[2]))["cuts"]
 sys.exit(0 if len(after) == len(before) + 1 and all(c in after for c in before) else 1)
 PY
 # Undo with Ctrl+Z brings the fault back (the fix is an ordinary undoable command).
-keys ctrl+z
-keys ctrl+s
+shortcut ctrl+z Undid
+shortcut ctrl+s Saved
 check "after undo and save the board fails again" eventually bash -c "! '$STRIPSMITH_BIN/netcheck' '$board'"
 screenshot fix-3-undone
 finish
