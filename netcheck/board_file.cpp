@@ -46,8 +46,9 @@ private:
             const auto step = r_.enter("format");
             r_.fail("format is " + inQuotes(format) + ", expected " + inQuotes(kBoardFormat));
         }
+        const Json& versionValue = r_.require(root, "version");
         const auto step = r_.enter("version");
-        const long long version = r_.asInteger(r_.require(root, "version"));
+        const long long version = r_.asInteger(versionValue);
         if (version < 1) r_.fail("version " + std::to_string(version) + " is not a valid version");
         if (version > kBoardVersion) {
             InvalidInput newer{r_.path(),
