@@ -13,6 +13,7 @@
 #include "editor/files/file_chooser.hpp"
 #include "editor/files/recent_files.hpp"
 #include "editor/files/recovery.hpp"
+#include "editor/panels/circuit_panel_state.hpp"
 #include "editor/tools/tool_state.hpp"
 
 namespace stripsmith {
@@ -67,6 +68,7 @@ struct EditorApp {
     std::string lastLoggedView;
     std::map<std::string, std::string> loggedItems;
     std::string chosenForPanel;           ///< a circuit or sheet path picked in the chooser
+    CircuitPanelState circuitPanel;       ///< the Circuit panel's typed text and choices
 
     /// Performs a command, clears the selection if asked, and reports errors in the status line.
     bool perform(std::unique_ptr<netcheck::edit::Command> command, int mergeKey = 0);

@@ -255,7 +255,8 @@ void drawFileDialogs(EditorApp& app) {
                 doPending(app, app.dialogs.pending, app.dialogs.pendingPath);
             app.dialogs.pending = PendingAction::None;
             break;
-        case FileChooser::Purpose::OpenCircuit: app.chosenForPanel = path; break;
+        case FileChooser::Purpose::OpenCircuit:
+        case FileChooser::Purpose::ExportCircuit: app.chosenForPanel = path; break;
         case FileChooser::Purpose::ExportSheet: exportSheetTo(app, path); break;
         }
     } else if (wasOpen && !app.chooser.isOpen() && !app.dialogs.askUnsaved) {

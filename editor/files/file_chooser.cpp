@@ -20,6 +20,7 @@ std::vector<std::string> suffixesFor(FileChooser::Purpose purpose) {
     case FileChooser::Purpose::SaveBoard: return {".board.json", ".json"};
     case FileChooser::Purpose::OpenCircuit: return {".json", ".cir", ".net", ".sp", ".spice"};
     case FileChooser::Purpose::ExportSheet: return {".pdf", ".svg"};
+    case FileChooser::Purpose::ExportCircuit: return {".json", ".cir", ".net", ".sp", ".spice"};
     }
     return {};
 }
@@ -30,6 +31,7 @@ const char* titleFor(FileChooser::Purpose purpose) {
     case FileChooser::Purpose::SaveBoard: return "Save board as";
     case FileChooser::Purpose::OpenCircuit: return "Load circuit";
     case FileChooser::Purpose::ExportSheet: return "Export build sheet";
+    case FileChooser::Purpose::ExportCircuit: return "Export circuit";
     }
     return "Choose a file";
 }
@@ -99,7 +101,8 @@ bool FileChooser::accept() {
         refresh();
         return false;
     }
-    const bool saving = purpose_ == Purpose::SaveBoard || purpose_ == Purpose::ExportSheet;
+    const bool saving = purpose_ == Purpose::SaveBoard || purpose_ == Purpose::ExportSheet ||
+                        purpose_ == Purpose::ExportCircuit;
     if (!saving && !fs::exists(path, ec)) {
         error_ = "No such file: " + path;
         return false;
@@ -156,7 +159,8 @@ bool FileChooser::draw() {
     if (ImGui::IsWindowAppearing()) ImGui::SetKeyboardFocusHere();
     if (ImGui::InputText("##path", &typed_, ImGuiInputTextFlags_EnterReturnsTrue)) picked = accept();
     if (!error_.empty()) ImGui::TextColored({1.0f, 0.45f, 0.4f, 1.0f}, "%s", error_.c_str());
-    const bool saving = purpose_ == Purpose::SaveBoard || purpose_ == Purpose::ExportSheet;
+    const bool saving = purpose_ == Purpose::SaveBoard || purpose_ == Purpose::ExportSheet ||
+                        purpose_ == Purpose::ExportCircuit;
     if (ImGui::Button(saving ? "Save" : "Open", {120, 0})) picked = accept();
     ImGui::SameLine();
     if (ImGui::Button("Cancel", {120, 0}) || ImGui::IsKeyPressed(ImGui::GetKeyIndex(ImGuiKey_Escape))) open_ = false;

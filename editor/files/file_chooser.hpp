@@ -10,7 +10,7 @@ namespace stripsmith {
 /// One chooser dialog at a time. open() shows it; draw() each frame returns when a path is picked.
 class FileChooser {
 public:
-    enum class Purpose { OpenBoard, SaveBoard, OpenCircuit, ExportSheet };
+    enum class Purpose { OpenBoard, SaveBoard, OpenCircuit, ExportSheet, ExportCircuit };
 
     /// Shows the chooser in `folder` (or the current folder), with `name` typed in.
     void open(Purpose purpose, std::string folder, std::string name = {});

@@ -52,7 +52,10 @@ void editMenu(EditorApp& app) {
 }
 
 void viewMenu(EditorApp& app) {
-    if (!ImGui::BeginMenu("View")) return;
+    if (!ImGui::BeginMenu("View")) {
+        app.logItem("menu-view");
+        return;
+    }
     auto side = [&](const char* label, Side s) {
         if (ImGui::MenuItem(label, nullptr, app.view.side == s)) {
             app.view.side = s;
@@ -65,6 +68,7 @@ void viewMenu(EditorApp& app) {
     ImGui::Separator();
     if (ImGui::MenuItem("Fit board", "F")) app.view.fitPending = true;
     ImGui::MenuItem("Circuit panel", nullptr, &app.view.showCircuit);
+    app.logItem("menu-circuit-panel");
     if (ImGui::BeginMenu("Interface size")) {
         if (ImGui::MenuItem("Normal (1x)", nullptr, app.view.uiScale == 1)) app.view.uiScale = 1;
         if (ImGui::MenuItem("Large (2x)", nullptr, app.view.uiScale == 2)) app.view.uiScale = 2;

@@ -1,78 +1,186 @@
-// "Circuit": the intended circuit the board is checked against. Load one from a file, take the
-// board's present connectivity as the circuit, or remove it.
+// "Circuit": the intended circuit the board is checked against. Load one from a JSON circuit file
+// or a SPICE deck, take the board's present connectivity as the circuit, type it in part by part,
+// compare it with the board, export it, or remove it. Every change is one SetCircuit command.
 #include <imgui.h>
+#include <imgui_stdlib.h>
+
+#include <cstdio>
 
 #include "editor/panels/circuit_capture.hpp"
+#include "editor/panels/circuit_files.hpp"
+#include "editor/panels/circuit_panel_views.hpp"
 #include "editor/panels/panels.hpp"
-#include "netcheck/circuit_loader.hpp"
 #include "netcheck/edit/edit.hpp"
 #include "netcheck/file_io.hpp"
 
 namespace stripsmith {
 namespace {
 
+std::string baseName(const std::string& path) {
+    const auto slash = path.find_last_of('/');
+    return slash == std::string::npos ? path : path.substr(slash + 1);
+}
+
+std::string folderOf(const std::string& path) {
+    const auto slash = path.find_last_of('/');
+    return slash == std::string::npos ? std::string() : path.substr(0, slash);
+}
+
+void refuseLoad(EditorApp& app, const std::string& message) {
+    app.dialogs.errorTitle = "Cannot load the circuit";
+    app.dialogs.errorText = message + "\n\nThe board's circuit is unchanged.";
+    app.say("Cannot load the circuit: " + message);
+}
+
+// For scripted tests: what the check says right after a load.
+void logFindings(const EditorApp& app) {
+    if (!app.logHoles) return;
+    for (const auto& finding : app.doc.report().errors)
+        std::fprintf(stderr, "STRIPSMITH_E2E finding %s %s\n", finding.type.c_str(), finding.message.c_str());
+}
+
 void loadCircuitFile(EditorApp& app, const std::string& path) {
     const netcheck::ReadLimits limits;
     auto text = netcheck::readFileLimited(path, limits.maxBytes);
     if (!text.ok()) {
-        app.dialogs.errorTitle = "Cannot load the circuit";
-        app.dialogs.errorText = text.error ? text.error->describe() : "cannot read " + path;
+        refuseLoad(app, text.error ? text.error->describe() : "cannot read " + path);
         return;
     }
-    auto circuit = netcheck::loadCircuitText(*text.value, path, limits);
+    auto circuit = readCircuitForEditor(*text.value, path, app.circuitPanel.spice);
     if (!circuit.ok()) {
-        app.dialogs.errorTitle = "Cannot load the circuit";
-        app.dialogs.errorText = (circuit.error ? circuit.error->describe() : "unreadable circuit") +
-                                "\n\nThe board's circuit is unchanged.";
+        refuseLoad(app, circuit.error ? circuit.error->describe() : "unreadable circuit " + path);
         return;
     }
-    app.perform(std::make_unique<netcheck::edit::SetCircuit>(app.doc.board(), *circuit.value, "Load circuit"));
+    app.circuitPanel.loadNotes = circuit.notes;
+    app.circuitPanel.loadedFrom = path;
+    if (app.logHoles)
+        for (const std::string& note : circuit.notes)
+            std::fprintf(stderr, "STRIPSMITH_E2E note %s\n", note.c_str());
+    app.perform(std::make_unique<netcheck::edit::SetCircuit>(app.doc.board(), *circuit.value,
+                                                             "Load circuit " + baseName(path)));
+    logFindings(app);
 }
 
-void circuitContents(const netcheck::Circuit& circuit) {
-    if (ImGui::TreeNodeEx("Parts", ImGuiTreeNodeFlags_DefaultOpen, "Parts (%zu)", circuit.parts.size())) {
-        for (const auto& [ref, part] : circuit.parts)
-            ImGui::BulletText("%s  %s  %s", ref.c_str(), part.kind.c_str(), part.value.c_str());
-        ImGui::TreePop();
+void exportCircuitFile(EditorApp& app, const std::string& path) {
+    const auto& board = app.doc.board();
+    if (!board.circuit) return;
+    const std::string title = board.title.empty() ? "Stripsmith circuit" : board.title;
+    if (auto problem = netcheck::saveFileAtomically(path, circuitFileText(*board.circuit, path, title))) {
+        app.dialogs.errorTitle = "Cannot export the circuit";
+        app.dialogs.errorText = *problem;
+        return;
     }
-    if (ImGui::TreeNodeEx("Nets", ImGuiTreeNodeFlags_DefaultOpen, "Nets (%zu)", circuit.nets.size())) {
-        for (const auto& [name, pins] : circuit.nets) {
-            std::string list;
-            for (const auto& pin : pins) list += (list.empty() ? "" : ", ") + pin.name();
-            ImGui::BulletText("%s: %s", name.c_str(), list.c_str());
-        }
-        ImGui::TreePop();
+    app.say("Exported the circuit to " + path);
+}
+
+void takeChosenFile(EditorApp& app) {
+    if (app.chosenForPanel.empty()) return;
+    if (app.chooser.purpose() == FileChooser::Purpose::OpenCircuit) {
+        loadCircuitFile(app, app.chosenForPanel);
+        app.chosenForPanel.clear();
+    } else if (app.chooser.purpose() == FileChooser::Purpose::ExportCircuit) {
+        exportCircuitFile(app, app.chosenForPanel);
+        app.chosenForPanel.clear();
     }
+}
+
+void spiceOptions(EditorApp& app) {
+    auto& options = app.circuitPanel.spice;
+    if (!ImGui::TreeNode("SPICE deck options")) return;
+    ImGui::SetNextItemWidth(120);
+    ImGui::InputText("Name of node 0", &options.groundName);
+    if (options.groundName.empty()) options.groundName = "GND";
+    ImGui::Checkbox("Flatten subcircuits into their parts (refs such as X1.R3)", &options.flatten);
+    bool supplies = options.sources == netcheck::SpiceOptions::Sources::Offboard;
+    if (ImGui::Checkbox("Voltage sources become off-board supplies", &supplies))
+        options.sources = supplies ? netcheck::SpiceOptions::Sources::Offboard
+                                   : netcheck::SpiceOptions::Sources::Ignore;
+    ImGui::TreePop();
+}
+
+void loadNotes(EditorApp& app) {
+    auto& state = app.circuitPanel;
+    if (state.loadNotes.empty()) return;
+    ImGui::TextColored({1.0f, 0.8f, 0.35f, 1.0f}, "Notes on %s (%zu):", baseName(state.loadedFrom).c_str(),
+                       state.loadNotes.size());
+    ImGui::SameLine();
+    if (ImGui::SmallButton("Dismiss")) state.loadNotes.clear();
+    ImGui::BeginChild("notes", {0, ImGui::GetTextLineHeightWithSpacing() * 4.5f}, true);
+    for (const std::string& note : state.loadNotes) ImGui::TextWrapped("%s", note.c_str());
+    ImGui::EndChild();
+}
+
+void toolbar(EditorApp& app) {
+    const auto& board = app.doc.board();
+    if (ImGui::Button("Load circuit file...")) app.chooser.open(FileChooser::Purpose::OpenCircuit, folderOf(app.doc.path()));
+    app.logItem("load-circuit");
+    if (ImGui::IsItemHovered()) ImGui::SetTooltip("A JSON circuit file or a SPICE deck (.cir, .sp, .spice, .net, .ckt).");
+    ImGui::SameLine();
+    if (ImGui::Button("Take the board as the circuit"))
+        app.perform(std::make_unique<netcheck::edit::SetCircuit>(board, captureCircuit(board), "Take the board as the circuit"));
+    if (ImGui::IsItemHovered())
+        ImGui::SetTooltip("The board's present connections become the intended circuit, so later edits are checked against them.");
+    if (!board.circuit) {
+        ImGui::SameLine();
+        if (ImGui::Button("Start an empty circuit"))
+            app.perform(std::make_unique<netcheck::edit::SetCircuit>(board, netcheck::Circuit{}, "Start an empty circuit"));
+        return;
+    }
+    ImGui::SameLine();
+    if (ImGui::Button("Export...")) {
+        const std::string name = baseName(app.doc.path());
+        const std::string stem = name.substr(0, name.find('.'));
+        app.chooser.open(FileChooser::Purpose::ExportCircuit, folderOf(app.doc.path()),
+                         (stem.empty() ? std::string("circuit") : stem) + ".cir");
+    }
+    if (ImGui::IsItemHovered()) ImGui::SetTooltip("Ending .cir, .sp, .spice, .net or .ckt: a SPICE deck; otherwise a JSON circuit file.\nThe circuit is also saved inside the board file.");
+    ImGui::SameLine();
+    if (ImGui::Button("Remove circuit"))
+        app.perform(std::make_unique<netcheck::edit::SetCircuit>(board, std::nullopt, "Remove circuit"));
 }
 
 }  // namespace
 
-void drawCircuitPanel(EditorApp& app) {
-    if (!app.chosenForPanel.empty() && app.chooser.purpose() == FileChooser::Purpose::OpenCircuit) {
-        loadCircuitFile(app, app.chosenForPanel);
-        app.chosenForPanel.clear();
+void applyCircuitEdit(EditorApp& app, const CircuitEdit& edit, const std::string& label) {
+    if (const auto* problem = std::get_if<std::string>(&edit)) {
+        app.say(*problem);
+        return;
     }
+    const auto& circuit = std::get<netcheck::Circuit>(edit);
+    if (app.doc.board().circuit == circuit) return;
+    app.perform(std::make_unique<netcheck::edit::SetCircuit>(app.doc.board(), circuit, label));
+}
+
+void drawCircuitPanel(EditorApp& app) {
+    takeChosenFile(app);
     if (!app.view.showCircuit) return;
     const ImVec2 d = ImGui::GetIO().DisplaySize;
-    ImGui::SetNextWindowPos({d.x * 0.3f, d.y * 0.15f}, ImGuiCond_FirstUseEver);
-    ImGui::SetNextWindowSize({d.x * 0.4f, d.y * 0.6f}, ImGuiCond_FirstUseEver);
+    ImGui::SetNextWindowPos({d.x * 0.25f, d.y * 0.1f}, ImGuiCond_FirstUseEver);
+    ImGui::SetNextWindowSize({d.x * 0.5f, d.y * 0.7f}, ImGuiCond_FirstUseEver);
     if (ImGui::Begin("Circuit", &app.view.showCircuit)) {
+        toolbar(app);
+        spiceOptions(app);
+        loadNotes(app);
+        ImGui::Separator();
         const auto& board = app.doc.board();
-        if (ImGui::Button("Load circuit file...")) app.chooser.open(FileChooser::Purpose::OpenCircuit, {});
-        ImGui::SameLine();
-        if (ImGui::Button("Take the board as the circuit"))
-            app.perform(std::make_unique<netcheck::edit::SetCircuit>(board, captureCircuit(board), "Take the board as the circuit"));
-        if (ImGui::IsItemHovered())
-            ImGui::SetTooltip("The board's present connections become the intended circuit, so later edits are checked against them.");
-        if (board.circuit) {
-            ImGui::SameLine();
-            if (ImGui::Button("Remove circuit"))
-                app.perform(std::make_unique<netcheck::edit::SetCircuit>(board, std::nullopt, "Remove circuit"));
-            ImGui::Separator();
-            circuitContents(*board.circuit);
-        } else {
-            ImGui::Separator();
-            ImGui::TextWrapped("No intended circuit yet. Load one, or take the board's connections once you have checked them by eye.");
+        if (!board.circuit) {
+            ImGui::TextWrapped("No intended circuit yet. Load one, start an empty one and type it in, or take the board's connections once you have checked them by eye.");
+        } else if (ImGui::BeginTabBar("circuit-views")) {
+            const netcheck::Circuit circuit = *board.circuit;  // edits below replace the board's
+            if (ImGui::BeginTabItem("Parts")) {
+                drawCircuitParts(app, circuit);
+                ImGui::EndTabItem();
+            }
+            if (ImGui::BeginTabItem("Nets")) {
+                drawCircuitNets(app, circuit);
+                ImGui::EndTabItem();
+            }
+            if (ImGui::BeginTabItem("Board against circuit")) {
+                drawCircuitDifference(app);
+                ImGui::EndTabItem();
+            }
+            app.logItem("circuit-tab-difference");
+            ImGui::EndTabBar();
         }
     }
     ImGui::End();

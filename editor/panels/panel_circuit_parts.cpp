@@ -1,0 +1,159 @@
+// The Circuit panel's parts: ref, kind, value, pins, and the net of every pin.
+#include <imgui.h>
+#include <imgui_stdlib.h>
+
+#include <sstream>
+
+#include "editor/panels/circuit_panel_views.hpp"
+#include "netcheck/part_kinds.hpp"
+
+namespace stripsmith {
+namespace {
+
+std::vector<std::string> splitPins(const std::string& text) {
+    std::vector<std::string> pins;
+    std::istringstream in(text);
+    for (std::string pin; in >> pin;) {
+        while (!pin.empty() && pin.back() == ',') pin.pop_back();
+        if (!pin.empty()) pins.push_back(pin);
+    }
+    return pins;
+}
+
+std::string joinPins(const std::vector<std::string>& pins) {
+    std::string text;
+    for (const auto& pin : pins) text += (text.empty() ? "" : " ") + pin;
+    return text;
+}
+
+/// Kind box with a list of the known kinds; picking one fills in its usual pin names.
+void kindPicker(const char* id, std::string& kind, std::string& pins) {
+    ImGui::PushID(id);
+    ImGui::SetNextItemWidth(110);
+    ImGui::InputText("##kind", &kind);
+    ImGui::SameLine(0, 0);
+    if (ImGui::BeginCombo("##kinds", nullptr, ImGuiComboFlags_NoPreview)) {
+        for (const netcheck::PartKind& known : netcheck::partKinds()) {
+            const std::string label = std::string(known.label) + " (" + std::string(known.name) + ")";
+            if (!ImGui::Selectable(label.c_str(), kind == known.name)) continue;
+            kind = known.name;
+            std::string names;
+            for (auto pin : known.pins) names += (names.empty() ? "" : " ") + std::string(pin);
+            pins = names.empty() ? "1 2" : names;
+        }
+        ImGui::EndCombo();
+    }
+    ImGui::PopID();
+}
+
+void addPartForm(EditorApp& app, const netcheck::Circuit& circuit) {
+    auto& s = app.circuitPanel;
+    ImGui::TextUnformatted("Add a part:");
+    ImGui::SetNextItemWidth(70);
+    ImGui::InputTextWithHint("##ref", "ref", &s.newRef);
+    ImGui::SameLine();
+    kindPicker("new", s.newKind, s.newPins);
+    ImGui::SameLine();
+    ImGui::SetNextItemWidth(80);
+    ImGui::InputTextWithHint("##value", "value", &s.newValue);
+    ImGui::SameLine();
+    ImGui::SetNextItemWidth(110);
+    ImGui::InputTextWithHint("##pins", "pins: 1 2", &s.newPins);
+    if (ImGui::IsItemHovered()) ImGui::SetTooltip("Pin names separated by spaces, e.g. 1 2, or A K, or C B E");
+    ImGui::SameLine();
+    if (ImGui::Button("Add")) {
+        const netcheck::CircuitPart part{s.newKind, s.newValue, splitPins(s.newPins), nlohmann::json::object()};
+        const auto edit = addCircuitPart(circuit, s.newRef, part);
+        if (std::holds_alternative<netcheck::Circuit>(edit)) s.newRef.clear();
+        applyCircuitEdit(app, edit, "Add " + s.newRef + " to the circuit");
+    }
+}
+
+void editPartForm(EditorApp& app, const netcheck::Circuit& circuit, const std::string& ref) {
+    auto& s = app.circuitPanel;
+    ImGui::Indent();
+    ImGui::SetNextItemWidth(70);
+    ImGui::InputText("##eref", &s.editRef);
+    ImGui::SameLine();
+    kindPicker("edit", s.editKind, s.editPins);
+    ImGui::SameLine();
+    ImGui::SetNextItemWidth(80);
+    ImGui::InputText("##evalue", &s.editValue);
+    ImGui::SameLine();
+    ImGui::SetNextItemWidth(110);
+    ImGui::InputText("##epins", &s.editPins);
+    ImGui::SameLine();
+    if (ImGui::Button("Apply")) {
+        const auto& old = circuit.parts.at(ref);
+        const netcheck::CircuitPart part{s.editKind, s.editValue, splitPins(s.editPins), old.extra};
+        const auto edit = editCircuitPart(circuit, ref, s.editRef, part);
+        if (std::holds_alternative<netcheck::Circuit>(edit)) s.editingRef.clear();
+        applyCircuitEdit(app, edit, "Edit " + ref + " in the circuit");
+    }
+    ImGui::SameLine();
+    if (ImGui::Button("Cancel")) s.editingRef.clear();
+    ImGui::Unindent();
+}
+
+void pinRows(EditorApp& app, const netcheck::Circuit& circuit, const std::string& ref) {
+    auto& s = app.circuitPanel;
+    for (const std::string& pinName : pinsOfPart(circuit, ref)) {
+        const netcheck::PinRef pin{ref, pinName};
+        const std::string key = pin.name();
+        const std::string current = circuit.netOf(pin).value_or("");
+        auto held = s.pinNetText.find(key);
+        std::string text = held != s.pinNetText.end() ? held->second : current;
+        ImGui::PushID(key.c_str());
+        ImGui::Text("%-6s", pinName.c_str());
+        ImGui::SameLine(90);
+        const bool confirmed = netNameInput("net", text, circuit, 160);
+        const bool active = ImGui::IsItemActive() || ImGui::IsPopupOpen("##pick_popup");
+        if (confirmed) {
+            s.pinNetText.erase(key);
+            applyCircuitEdit(app, assignPinToNet(circuit, pin, text),
+                             text.empty() ? "Take " + key + " out of its net" : "Join " + key + " to " + text);
+        } else if (text != current || active) {
+            s.pinNetText[key] = text;
+        } else {
+            s.pinNetText.erase(key);
+        }
+        if (current.empty()) {
+            ImGui::SameLine();
+            ImGui::TextDisabled("not connected");
+        }
+        ImGui::PopID();
+    }
+}
+
+}  // namespace
+
+void drawCircuitParts(EditorApp& app, const netcheck::Circuit& circuit) {
+    auto& s = app.circuitPanel;
+    addPartForm(app, circuit);
+    ImGui::Separator();
+    ImGui::BeginChild("parts");
+    for (const auto& [ref, part] : circuit.parts) {
+        ImGui::PushID(ref.c_str());
+        const std::string header = ref + "  " + part.kind + "  " + part.value;
+        const bool open = ImGui::TreeNode("part", "%s", header.c_str());
+        ImGui::SameLine(ImGui::GetWindowWidth() - 130);
+        if (ImGui::SmallButton("Edit")) {
+            s.editingRef = ref;
+            s.editRef = ref;
+            s.editKind = part.kind;
+            s.editValue = part.value;
+            s.editPins = joinPins(part.pins);
+        }
+        ImGui::SameLine();
+        if (ImGui::SmallButton("Remove")) applyCircuitEdit(app, removeCircuitPart(circuit, ref), "Remove " + ref + " from the circuit");
+        if (s.editingRef == ref) editPartForm(app, circuit, ref);
+        if (open) {
+            pinRows(app, circuit, ref);
+            ImGui::TreePop();
+        }
+        ImGui::PopID();
+    }
+    ImGui::EndChild();
+}
+
+}  // namespace stripsmith
