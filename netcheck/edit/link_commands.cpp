@@ -16,6 +16,8 @@ std::string LinkList::addLabel(const Link& link) { return "Add link " + linkName
 
 std::string LinkList::removeLabel(const Link& link) { return "Remove link " + linkName(link); }
 
+std::vector<Hole> LinkList::holes(const Link& link) { return {link.from, link.to}; }
+
 std::string LinkList::changeLabel(const Link& before, const Link& after) {
     const bool moved = before.from != after.from || before.to != after.to;
     return (moved ? "Move link " : "Edit link ") + linkName(before);

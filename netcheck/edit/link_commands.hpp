@@ -17,7 +17,7 @@ struct LinkList {
     static std::string addLabel(const Link& link);
     static std::string removeLabel(const Link& link);
     static std::string changeLabel(const Link& before, const Link& after);
-    static std::vector<Hole> holes(const Link& link) { return {link.from, link.to}; }
+    static std::vector<Hole> holes(const Link& link);
 };
 
 /// Adds a link (at the end of the list unless an index is given).

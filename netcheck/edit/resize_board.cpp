@@ -3,7 +3,12 @@
 #include <algorithm>
 #include <stdexcept>
 
+#include "netcheck/edit/cut_commands.hpp"
+#include "netcheck/edit/link_commands.hpp"
 #include "netcheck/edit/out_of_step.hpp"
+#include "netcheck/edit/part_commands.hpp"
+#include "netcheck/edit/shift_holes.hpp"
+#include "netcheck/edit/wire_commands.hpp"
 
 namespace netcheck::edit {
 
@@ -14,61 +19,33 @@ struct Offset {
     int cols = 0;
 };
 
-void shift(Hole& hole, Offset by) {
-    hole.row += by.rows;
-    hole.col += by.cols;
-}
-
-void shift(Cut& cut, Offset by) { shift(cut.hole, by); }
-
-void shift(Part& part, Offset by) {
-    for (Pin& pin : part.pins) shift(pin.hole, by);
-}
-
-void shift(Link& link, Offset by) {
-    shift(link.from, by);
-    shift(link.to, by);
-}
-
-void shift(Wire& wire, Offset by) {
-    if (wire.from.hole) shift(*wire.from.hole, by);
-    if (wire.to.hole) shift(*wire.to.hole, by);
-}
-
 struct Bounds {
     int rows;
     int cols;
     bool has(Hole h) const { return h.row >= 0 && h.row < rows && h.col >= 0 && h.col < cols; }
 };
 
-bool fits(const Cut& cut, Bounds b) {
-    if (cut.kind == Cut::Kind::Between) return b.has(cut.hole) && cut.hole.col + 1 < b.cols;
-    return b.has(cut.hole);
-}
-
-bool fits(const Part& part, Bounds b) {
-    return std::all_of(part.pins.begin(), part.pins.end(),
-                       [b](const Pin& pin) { return b.has(pin.hole); });
-}
-
-bool fits(const Link& link, Bounds b) { return b.has(link.from) && b.has(link.to); }
-
-bool fits(const Wire& wire, Bounds b) {
-    return (!wire.from.hole || b.has(*wire.from.hole)) && (!wire.to.hole || b.has(*wire.to.hole));
+// An element fits when every hole it names is on the board; for a between cut that includes the
+// hole after it, so a cut at the last hole of a strip does not fit.
+template <class List>
+bool fits(const typename List::Element& element, Bounds bounds) {
+    const auto holes = List::holes(element);
+    return std::all_of(holes.begin(), holes.end(), [bounds](Hole h) { return bounds.has(h); });
 }
 
 // Moves every element by `by`; those that no longer fit leave the list and are kept, unmoved,
 // with their old index.
-template <class T>
-void shiftAndDrop(std::vector<T>& list, Offset by, Bounds bounds,
-                  std::vector<std::pair<std::size_t, T>>& removed) {
+template <class List>
+void shiftAndDrop(Board& board, Offset by, Bounds bounds,
+                  std::vector<std::pair<std::size_t, typename List::Element>>& removed) {
+    auto& list = List::of(board);
     removed.clear();
-    std::vector<T> kept;
+    std::vector<typename List::Element> kept;
     kept.reserve(list.size());
     for (std::size_t i = 0; i < list.size(); ++i) {
-        T moved = list[i];
-        shift(moved, by);
-        if (fits(moved, bounds)) {
+        auto moved = list[i];
+        shiftHoles(moved, by.rows, by.cols);
+        if (fits<List>(moved, bounds)) {
             kept.push_back(std::move(moved));
         } else {
             removed.emplace_back(i, std::move(list[i]));
@@ -79,20 +56,30 @@ void shiftAndDrop(std::vector<T>& list, Offset by, Bounds bounds,
 
 // The inverse of shiftAndDrop: moves back, then reinserts in ascending index order, which puts
 // each removed element at its old index.
-template <class T>
-void unshiftAndRestore(std::vector<T>& list, Offset by,
-                       const std::vector<std::pair<std::size_t, T>>& removed) {
-    for (T& element : list) shift(element, Offset{-by.rows, -by.cols});
+template <class List>
+void unshiftAndRestore(Board& board, Offset by,
+                       const std::vector<std::pair<std::size_t, typename List::Element>>& removed) {
+    auto& list = List::of(board);
+    for (auto& element : list) shiftHoles(element, -by.rows, -by.cols);
     for (const auto& [index, element] : removed) {
         requireInStep(index <= list.size(), "Resize board", "cannot put a removed element back");
         list.insert(list.begin() + static_cast<std::ptrdiff_t>(index), element);
     }
 }
 
-template <class T, class HolesOf>
-void appendHoles(std::vector<Hole>& out, const std::vector<std::pair<std::size_t, T>>& removed,
-                 HolesOf holesOf) {
-    for (const auto& entry : removed) holesOf(out, entry.second);
+template <class List>
+void appendHoles(std::vector<Hole>& out,
+                 const std::vector<std::pair<std::size_t, typename List::Element>>& removed) {
+    for (const auto& entry : removed) {
+        for (const Hole& h : List::holes(entry.second)) out.push_back(h);
+    }
+}
+
+template <class List, class Include>
+void includeAll(const Board& board, Include& include) {
+    for (const auto& element : List::of(board)) {
+        for (const Hole& h : List::holes(element)) include(h);
+    }
 }
 
 }  // namespace
@@ -109,10 +96,10 @@ void ResizeBoard::apply(Board& board) {
                   "the board is not the size expected");
     const Offset by{change_.top, change_.left};
     const Bounds bounds{newRows(), newCols()};
-    shiftAndDrop(board.cuts, by, bounds, cuts_);
-    shiftAndDrop(board.parts, by, bounds, parts_);
-    shiftAndDrop(board.links, by, bounds, links_);
-    shiftAndDrop(board.wires, by, bounds, wires_);
+    shiftAndDrop<CutList>(board, by, bounds, cuts_);
+    shiftAndDrop<PartList>(board, by, bounds, parts_);
+    shiftAndDrop<LinkList>(board, by, bounds, links_);
+    shiftAndDrop<WireList>(board, by, bounds, wires_);
     board.rows = bounds.rows;
     board.cols = bounds.cols;
 }
@@ -121,10 +108,10 @@ void ResizeBoard::revert(Board& board) {
     requireInStep(board.rows == newRows() && board.cols == newCols(), label(),
                   "the board is not the size expected");
     const Offset by{change_.top, change_.left};
-    unshiftAndRestore(board.cuts, by, cuts_);
-    unshiftAndRestore(board.parts, by, parts_);
-    unshiftAndRestore(board.links, by, links_);
-    unshiftAndRestore(board.wires, by, wires_);
+    unshiftAndRestore<CutList>(board, by, cuts_);
+    unshiftAndRestore<PartList>(board, by, parts_);
+    unshiftAndRestore<LinkList>(board, by, links_);
+    unshiftAndRestore<WireList>(board, by, wires_);
     board.rows = oldRows_;
     board.cols = oldCols_;
 }
@@ -136,18 +123,10 @@ std::string ResizeBoard::label() const {
 
 std::vector<Hole> ResizeBoard::touched() const {
     std::vector<Hole> holes;
-    appendHoles(holes, cuts_, [](auto& out, const Cut& c) { out.push_back(c.hole); });
-    appendHoles(holes, parts_, [](auto& out, const Part& p) {
-        for (const Pin& pin : p.pins) out.push_back(pin.hole);
-    });
-    appendHoles(holes, links_, [](auto& out, const Link& l) {
-        out.push_back(l.from);
-        out.push_back(l.to);
-    });
-    appendHoles(holes, wires_, [](auto& out, const Wire& w) {
-        if (w.from.hole) out.push_back(*w.from.hole);
-        if (w.to.hole) out.push_back(*w.to.hole);
-    });
+    appendHoles<CutList>(holes, cuts_);
+    appendHoles<PartList>(holes, parts_);
+    appendHoles<LinkList>(holes, links_);
+    appendHoles<WireList>(holes, wires_);
     return holes;
 }
 
@@ -161,21 +140,10 @@ std::optional<HoleArea> usedArea(const Board& board) {
         area->first = Hole{std::min(area->first.row, h.row), std::min(area->first.col, h.col)};
         area->last = Hole{std::max(area->last.row, h.row), std::max(area->last.col, h.col)};
     };
-    for (const Cut& cut : board.cuts) {
-        include(cut.hole);
-        if (cut.kind == Cut::Kind::Between) include(Hole{cut.hole.row, cut.hole.col + 1});
-    }
-    for (const Part& part : board.parts) {
-        for (const Pin& pin : part.pins) include(pin.hole);
-    }
-    for (const Link& link : board.links) {
-        include(link.from);
-        include(link.to);
-    }
-    for (const Wire& wire : board.wires) {
-        if (wire.from.hole) include(*wire.from.hole);
-        if (wire.to.hole) include(*wire.to.hole);
-    }
+    includeAll<CutList>(board, include);
+    includeAll<PartList>(board, include);
+    includeAll<LinkList>(board, include);
+    includeAll<WireList>(board, include);
     return area;
 }
 

@@ -7,6 +7,7 @@
 #include "netcheck/edit/link_commands.hpp"
 #include "netcheck/edit/offboard_commands.hpp"
 #include "netcheck/edit/part_commands.hpp"
+#include "netcheck/edit/shift_holes.hpp"
 #include "netcheck/edit/wire_commands.hpp"
 
 namespace netcheck::edit {
@@ -55,37 +56,30 @@ void addDanglingWires(const Board& board, std::vector<ElementRef>& selection) {
     }
 }
 
-void shift(Hole& hole, int rows, int cols) {
-    hole.row += rows;
-    hole.col += cols;
-}
-
 std::unique_ptr<Command> moveOne(const Board& board, ElementRef ref, int rows, int cols) {
     switch (ref.kind) {
         case ElementRef::Kind::Part: {
             requireInStep(ref.index < board.parts.size(), "Move", "no such part");
             Part part = board.parts[ref.index];
-            for (Pin& pin : part.pins) shift(pin.hole, rows, cols);
+            shiftHoles(part, rows, cols);
             return std::make_unique<ReplacePart>(board, ref.index, std::move(part));
         }
         case ElementRef::Kind::Link: {
             requireInStep(ref.index < board.links.size(), "Move", "no such link");
             Link link = board.links[ref.index];
-            shift(link.from, rows, cols);
-            shift(link.to, rows, cols);
+            shiftHoles(link, rows, cols);
             return std::make_unique<ReplaceLink>(board, ref.index, std::move(link));
         }
         case ElementRef::Kind::Cut: {
             requireInStep(ref.index < board.cuts.size(), "Move", "no such cut");
             Cut cut = board.cuts[ref.index];
-            shift(cut.hole, rows, cols);
+            shiftHoles(cut, rows, cols);
             return std::make_unique<ReplaceCut>(board, ref.index, cut);
         }
         case ElementRef::Kind::Wire: {
             requireInStep(ref.index < board.wires.size(), "Move", "no such wire");
             Wire wire = board.wires[ref.index];
-            if (wire.from.hole) shift(*wire.from.hole, rows, cols);
-            if (wire.to.hole) shift(*wire.to.hole, rows, cols);
+            shiftHoles(wire, rows, cols);
             if (wire == board.wires[ref.index]) return nullptr;  // lug to lug: nothing moves
             return std::make_unique<ReplaceWire>(board, ref.index, std::move(wire));
         }
