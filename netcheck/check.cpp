@@ -118,41 +118,56 @@ std::vector<char> islandsWithNetPins(const CheckContext& context,
     return flagged;
 }
 
-// Islands that hold at least one pin or lug, in id order, with their holes and pins.
+// Islands that hold at least one pin or lug, in id order, with their holes and pins. Islands are
+// numbered in id order before any is filled, and each hole list is sized before it is filled.
 std::vector<Island> pinIslands(const CheckContext& context) {
     const Board& board = context.board();
     const Connectivity& copper = context.copper();
     std::vector<int> slot(static_cast<std::size_t>(copper.islandCount()), -1);
-    std::vector<Island> islands;
-    auto islandFor = [&](int node) -> Island& {
-        const int id = copper.islandOfNode(node);
-        int& at = slot[static_cast<std::size_t>(id)];
-        if (at < 0) {
-            at = static_cast<int>(islands.size());
-            islands.push_back(Island{id, {}, {}});
-        }
-        return islands[static_cast<std::size_t>(at)];
+    auto slotOf = [&](int node) -> int& {
+        return slot[static_cast<std::size_t>(copper.islandOfNode(node))];
     };
+    for (const Lead& lead : context.leads()) {
+        if (lead.kind == Lead::Kind::PartPin) slotOf(lead.hole) = 0;
+    }
+    for (std::size_t p = 0; p < board.offboard.size(); ++p) {
+        for (std::size_t k = 0; k < board.offboard[p].pins.size(); ++k) {
+            slotOf(context.lugNode(static_cast<int>(p), static_cast<int>(k))) = 0;
+        }
+    }
+    std::vector<Island> islands;
+    for (std::size_t id = 0; id < slot.size(); ++id) {
+        if (slot[id] < 0) continue;
+        slot[id] = static_cast<int>(islands.size());
+        islands.push_back(Island{static_cast<int>(id), {}, {}});
+    }
+    std::vector<int> holeCount(islands.size(), 0);
+    for (int hole = 0; hole < board.holeCount(); ++hole) {
+        const int at = slotOf(hole);
+        if (at >= 0) ++holeCount[static_cast<std::size_t>(at)];
+    }
+    for (std::size_t i = 0; i < islands.size(); ++i) {
+        islands[i].holes.reserve(static_cast<std::size_t>(holeCount[i]));
+    }
     for (const Lead& lead : context.leads()) {
         if (lead.kind != Lead::Kind::PartPin) continue;
         const Part& part = board.parts[static_cast<std::size_t>(lead.item)];
-        islandFor(lead.hole).pins.push_back(
+        islands[static_cast<std::size_t>(slotOf(lead.hole))].pins.push_back(
             PinRef{part.ref, part.pins[static_cast<std::size_t>(lead.sub)].name});
     }
     for (std::size_t p = 0; p < board.offboard.size(); ++p) {
         const OffboardPart& part = board.offboard[p];
         for (std::size_t k = 0; k < part.pins.size(); ++k) {
-            islandFor(context.lugNode(static_cast<int>(p), static_cast<int>(k)))
+            islands[static_cast<std::size_t>(
+                        slotOf(context.lugNode(static_cast<int>(p), static_cast<int>(k))))]
                 .pins.push_back(PinRef{part.ref, part.pins[k]});
         }
     }
     for (int hole = 0; hole < board.holeCount(); ++hole) {
-        const int at = slot[static_cast<std::size_t>(copper.islandOfNode(hole))];
+        const int at = slotOf(hole);
         if (at >= 0) islands[static_cast<std::size_t>(at)].holes.push_back(context.holeAt(hole));
     }
     for (Island& island : islands) std::sort(island.pins.begin(), island.pins.end());
-    std::sort(islands.begin(), islands.end(),
-              [](const Island& a, const Island& b) { return a.id < b.id; });
     return islands;
 }
 

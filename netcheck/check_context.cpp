@@ -14,6 +14,10 @@ CheckContext::CheckContext(const Board& board)
         unsigned char& count = leadCount_[static_cast<std::size_t>(index)];
         if (count < 255) ++count;
     };
+    std::size_t leadCount = 2 * (board.links.size() + board.wires.size());
+    for (const Part& part : board.parts) leadCount += part.pins.size();
+    leads_.reserve(leadCount);
+    lugBase_.reserve(board.offboard.size());
     for (std::size_t p = 0; p < board.parts.size(); ++p) {
         const auto& pins = board.parts[p].pins;
         for (std::size_t k = 0; k < pins.size(); ++k) {

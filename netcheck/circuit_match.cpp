@@ -1,9 +1,11 @@
-// Matching parts by reference designator. Lookups go through hash maps built once per check, so
-// the cost grows with the number of pins, not with pins times parts.
+// Matching parts by reference designator. Lookups go through one hash table built once per check, so
+// the cost grows with the number of pins, not with pins times parts; the per-pin arrays of every
+// part live in one pool.
 #include "circuit_match.hpp"
 
 #include <algorithm>
-#include <unordered_map>
+#include <cstdint>
+#include <span>
 
 #include "part_kinds.hpp"
 #include "part_orientation.hpp"
@@ -18,32 +20,76 @@ struct BoardSlot {
     int index = -1;
 };
 
-std::unordered_map<std::string_view, BoardSlot> indexBoardParts(const Board& board) {
-    std::unordered_map<std::string_view, BoardSlot> slots;
-    slots.reserve(board.parts.size() + board.offboard.size());
-    for (std::size_t p = 0; p < board.parts.size(); ++p) {
-        slots.emplace(board.parts[p].ref, BoardSlot{false, static_cast<int>(p)});
-    }
-    for (std::size_t p = 0; p < board.offboard.size(); ++p) {
-        slots.emplace(board.offboard[p].ref, BoardSlot{true, static_cast<int>(p)});
-    }
-    return slots;
-}
+// What one reference designator names: its board part (if any) and its use (if the circuit
+// mentions it).
+struct RefEntry {
+    BoardSlot slot;
+    int use = -1;
+};
 
-void placeOnBoard(const CheckContext& context, PartUse& use, BoardSlot slot) {
-    use.offboard = slot.offboard;
-    use.index = slot.index;
-    const Board& board = context.board();
-    const auto at = static_cast<std::size_t>(slot.index);
-    if (slot.offboard) {
-        const auto lugs = static_cast<int>(board.offboard[at].pins.size());
-        for (int k = 0; k < lugs; ++k) use.nodes.push_back(context.lugNode(slot.index, k));
-    } else {
-        for (const Pin& pin : board.parts[at].pins) use.nodes.push_back(context.holeIndex(pin.hole));
+// Refs to entries in one flat open-addressed table (linear probing, at most half full), so a
+// check allocates no node per part and hashes each ref once per lookup.
+class RefTable {
+public:
+    explicit RefTable(std::size_t expected) { rehash(2 * expected); }
+
+    /// The entry of `ref`, inserted empty if absent. `ref` must outlive the table.
+    RefEntry& at(std::string_view ref) {
+        if (2 * (used_ + 1) > slots_.size()) rehash(slots_.size() * 2);
+        Slot& slot = slots_[indexOf(ref)];
+        if (!slot.used) {
+            slot = Slot{ref, true, RefEntry{}};
+            ++used_;
+        }
+        return slot.entry;
     }
-    use.net.assign(use.nodes.size(), -1);
-    use.nameOf.resize(use.nodes.size());
-    for (std::size_t k = 0; k < use.nameOf.size(); ++k) use.nameOf[k] = static_cast<int>(k);
+
+    /// The entry of `ref`, or null.
+    const RefEntry* find(std::string_view ref) const {
+        const Slot& slot = slots_[indexOf(ref)];
+        return slot.used ? &slot.entry : nullptr;
+    }
+
+private:
+    struct Slot {
+        std::string_view key;
+        bool used = false;
+        RefEntry entry;
+    };
+
+    static std::size_t hash(std::string_view text) {
+        std::uint64_t h = 14695981039346656037ull;  // FNV-1a: refs are a few characters long
+        for (char c : text) h = (h ^ static_cast<unsigned char>(c)) * 1099511628211ull;
+        return static_cast<std::size_t>(h ^ (h >> 29));
+    }
+
+    // The slot holding `ref`, or the empty slot where it would go.
+    std::size_t indexOf(std::string_view ref) const {
+        const std::size_t mask = slots_.size() - 1;
+        for (std::size_t i = hash(ref) & mask;; i = (i + 1) & mask) {
+            if (!slots_[i].used || slots_[i].key == ref) return i;
+        }
+    }
+
+    void rehash(std::size_t wanted) {
+        std::size_t size = 16;
+        while (size < wanted) size *= 2;
+        std::vector<Slot> old = std::move(slots_);
+        slots_.assign(size, Slot{});
+        for (const Slot& slot : old) {
+            if (slot.used) slots_[indexOf(slot.key)] = slot;
+        }
+    }
+
+    std::vector<Slot> slots_;
+    std::size_t used_ = 0;
+};
+
+std::size_t boardPinCount(const Board& board) {
+    std::size_t count = 0;
+    for (const Part& part : board.parts) count += part.pins.size();
+    for (const OffboardPart& part : board.offboard) count += part.pins.size();
+    return count;
 }
 
 // Every ref the circuit mentions (declared parts, then refs only named in nets), placed on the
@@ -51,34 +97,71 @@ void placeOnBoard(const CheckContext& context, PartUse& use, BoardSlot slot) {
 class Uses {
 public:
     Uses(const CheckContext& context, const Circuit& circuit)
-        : context_(context), slots_(indexBoardParts(context.board())) {
+        : context_(context),
+          refs_(context.board().parts.size() + context.board().offboard.size() +
+                circuit.parts.size()) {
+        const Board& board = context.board();
+        // The first board part of a ref wins, on-board parts before off-board ones.
+        for (std::size_t p = 0; p < board.parts.size(); ++p) {
+            RefEntry& entry = refs_.at(board.parts[p].ref);
+            if (entry.slot.index < 0) entry.slot = BoardSlot{false, static_cast<int>(p)};
+        }
+        for (std::size_t p = 0; p < board.offboard.size(); ++p) {
+            RefEntry& entry = refs_.at(board.offboard[p].ref);
+            if (entry.slot.index < 0) entry.slot = BoardSlot{true, static_cast<int>(p)};
+        }
+        // Each board part is placed at most once, so the pool never grows past this and the
+        // spans into it stay valid.
+        pool_.reserve(3 * boardPinCount(board));
         uses_.reserve(circuit.parts.size());
-        byRef_.reserve(circuit.parts.size());
-        for (const auto& [ref, part] : circuit.parts) add(ref, &part);
+        for (const auto& [ref, part] : circuit.parts) get(ref).circuitPart = &part;
     }
 
     PartUse& get(std::string_view ref) {
-        auto it = byRef_.find(ref);
-        return it != byRef_.end() ? uses_[static_cast<std::size_t>(it->second)] : add(ref, nullptr);
+        RefEntry& entry = refs_.at(ref);
+        if (entry.use < 0) {
+            entry.use = static_cast<int>(uses_.size());
+            PartUse& use = uses_.emplace_back();
+            use.ref = ref;
+            if (entry.slot.index >= 0) place(use, entry.slot);
+        }
+        return uses_[static_cast<std::size_t>(entry.use)];
     }
 
     std::vector<PartUse>& all() { return uses_; }
-    bool mentions(std::string_view ref) const { return byRef_.count(ref) > 0; }
+    bool mentions(std::string_view ref) const {
+        const RefEntry* entry = refs_.find(ref);
+        return entry != nullptr && entry->use >= 0;
+    }
 
 private:
-    PartUse& add(std::string_view ref, const CircuitPart* part) {
-        byRef_.emplace(ref, static_cast<int>(uses_.size()));
-        PartUse& use = uses_.emplace_back();
-        use.ref = ref;
-        use.circuitPart = part;
-        auto slot = slots_.find(ref);
-        if (slot != slots_.end()) placeOnBoard(context_, use, slot->second);
-        return use;
+    std::span<int> take(std::size_t count) {
+        const std::size_t at = pool_.size();
+        pool_.resize(at + count);
+        return std::span<int>(pool_.data() + at, count);
+    }
+
+    void place(PartUse& use, BoardSlot slot) {
+        use.offboard = slot.offboard;
+        use.index = slot.index;
+        const Board& board = context_.board();
+        const auto at = static_cast<std::size_t>(slot.index);
+        const std::size_t pins =
+            slot.offboard ? board.offboard[at].pins.size() : board.parts[at].pins.size();
+        use.nodes = take(pins);
+        use.net = take(pins);
+        use.nameOf = take(pins);
+        for (std::size_t k = 0; k < pins; ++k) {
+            use.nodes[k] = slot.offboard ? context_.lugNode(slot.index, static_cast<int>(k))
+                                         : context_.holeIndex(board.parts[at].pins[k].hole);
+            use.net[k] = -1;
+            use.nameOf[k] = static_cast<int>(k);
+        }
     }
 
     const CheckContext& context_;
-    std::unordered_map<std::string_view, BoardSlot> slots_;
-    std::unordered_map<std::string_view, int> byRef_;
+    RefTable refs_;
+    std::vector<int> pool_;
     std::vector<PartUse> uses_;
 };
 
@@ -116,6 +199,8 @@ std::string describeCircuitPart(const PartUse& use) {
 }
 
 void checkPins(const CheckContext& context, const PartUse& use, std::vector<Finding>& errors) {
+    const bool declaresPins = use.circuitPart != nullptr && !use.circuitPart->pins.empty();
+    if (use.unknownPins.empty() && !declaresPins) return;  // nothing to compare
     const Board& board = context.board();
     const std::vector<std::string> onBoard = boardPinNames(board, use);
     std::string problem;
@@ -147,7 +232,7 @@ void checkValue(const CheckContext& context, const PartUse& use, std::vector<Fin
     const Board& board = context.board();
     const std::string& onBoard = use.value(board);
     const std::string& intended = use.circuitPart->value;
-    if (sameValue(onBoard, intended)) return;
+    if (onBoard == intended || sameValue(onBoard, intended)) return;
     const PartKind* kind = findPartKind(use.kind(board));
     if (kind == nullptr) kind = findPartKind(use.circuitPart->kind);
     const bool quantity = kind != nullptr && kind->quantity;
@@ -212,9 +297,19 @@ std::vector<std::string> assignNets(const CheckContext& context, const Circuit& 
 }
 
 std::vector<PlacedNet> placeNets(const Board& board, const std::vector<PartUse>& uses,
-                                 const std::vector<std::string>& names) {
+                                 std::vector<std::string> names) {
     std::vector<PlacedNet> nets(names.size());
-    for (std::size_t n = 0; n < names.size(); ++n) nets[n].name = names[n];
+    std::vector<std::size_t> sizes(names.size(), 0);
+    for (const PartUse& use : uses) {
+        if (!use.found() || !use.unknownPins.empty()) continue;
+        for (int net : use.net) {
+            if (net >= 0) ++sizes[static_cast<std::size_t>(net)];
+        }
+    }
+    for (std::size_t n = 0; n < names.size(); ++n) {
+        nets[n].name = std::move(names[n]);
+        nets[n].pins.reserve(sizes[n]);
+    }
     for (const PartUse& use : uses) {
         if (!use.found() || !use.unknownPins.empty()) continue;
         for (int k = 0; k < use.pinCount(); ++k) {
@@ -233,7 +328,7 @@ std::vector<PlacedNet> placeNets(const Board& board, const std::vector<PartUse>&
 CircuitMatch matchCircuit(const CheckContext& context, const Circuit& circuit) {
     CircuitMatch match;
     Uses uses(context, circuit);
-    const std::vector<std::string> names = assignNets(context, circuit, uses);
+    std::vector<std::string> names = assignNets(context, circuit, uses);
     std::vector<PartUse>& all = uses.all();
     // Declared parts come sorted from the circuit; only refs named just in nets need sorting.
     auto byRef = [](const PartUse& a, const PartUse& b) { return a.ref < b.ref; };
@@ -258,7 +353,7 @@ CircuitMatch matchCircuit(const CheckContext& context, const Circuit& circuit) {
         if (use.found()) checkValue(context, use, match.errors, match.warnings);
     }
     orientParts(context, all, names, match.errors, match.warnings);
-    match.nets = placeNets(context.board(), all, names);
+    match.nets = placeNets(context.board(), all, std::move(names));
     return match;
 }
 

@@ -100,13 +100,18 @@ Connectivity::Connectivity(const Board& board)
         if (a >= 0 && b >= 0) sets.unite(a, b);
     }
 
-    // Pass 3: dense island ids in order of first node.
-    std::vector<int> islandOfSet(static_cast<std::size_t>(segments + lugCount), -1);
-    for (int& id : islandOfNode_) {
-        int& island = islandOfSet[static_cast<std::size_t>(sets.find(id))];
+    // Pass 3: dense island ids in order of first node. Segment and lug ids already rise in node
+    // order, so numbering the sets in id order gives the same ids; each node then only looks up
+    // its segment's island.
+    const int setCount = segments + lugCount;
+    std::vector<int> islandOfRoot(static_cast<std::size_t>(setCount), -1);
+    std::vector<int> islandOfSegment(static_cast<std::size_t>(setCount));
+    for (int s = 0; s < setCount; ++s) {
+        int& island = islandOfRoot[static_cast<std::size_t>(sets.find(s))];
         if (island < 0) island = islandCount_++;
-        id = island;
+        islandOfSegment[static_cast<std::size_t>(s)] = island;
     }
+    for (int& id : islandOfNode_) id = islandOfSegment[static_cast<std::size_t>(id)];
 }
 
 int Connectivity::islandOfHole(Hole hole) const {

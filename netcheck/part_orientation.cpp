@@ -125,7 +125,8 @@ Finding partFinding(std::string type, Severity severity, const CheckContext& con
 }
 
 // Pins of end-for-end parts counted under both of their nets: a neighbour that could be turned
-// round still says which nets meet in an island. Used only to break ties.
+// round still says which nets meet in an island. Used only to break ties. The (net, island) keys
+// are kept sorted, so a count is the length of a run of equal keys.
 class FlexibleCounts {
 public:
     FlexibleCounts(const Connectivity& copper, const std::vector<PartUse>& uses,
@@ -135,10 +136,11 @@ public:
             if (freedom[u] != Freedom::EndForEnd) continue;
             for (int k = 0; k < 2; ++k) {
                 for (int net : uses[u].net) {
-                    if (net >= 0) ++counts_[key(net, islandOf(uses[u], k))];
+                    if (net >= 0) keys_.push_back(key(net, islandOf(uses[u], k)));
                 }
             }
         }
+        std::sort(keys_.begin(), keys_.end());
     }
 
     /// Agreement of `use` as oriented, without its own contribution.
@@ -147,11 +149,12 @@ public:
         for (int k = 0; k < 2; ++k) {
             const int net = use.net[static_cast<std::size_t>(k)];
             if (net < 0) continue;
-            auto it = counts_.find(key(net, islandOf(use, k)));
-            if (it == counts_.end()) continue;
+            const auto [first, last] =
+                std::equal_range(keys_.begin(), keys_.end(), key(net, islandOf(use, k)));
+            if (first == last) continue;
             int own = 0;
             for (int j = 0; j < 2; ++j) own += islandOf(use, j) == islandOf(use, k) ? 1 : 0;
-            total += it->second - own;
+            total += static_cast<int>(last - first) - own;
         }
         return total;
     }
@@ -165,7 +168,7 @@ private:
                static_cast<std::uint32_t>(island);
     }
     const Connectivity& copper_;
-    std::unordered_map<std::uint64_t, int> counts_;
+    std::vector<std::uint64_t> keys_;
 };
 
 // The flexible counts are only needed on a tie, so they are built on the first one.
@@ -265,7 +268,7 @@ std::string pinList(const CheckContext& context, const PartUse& use,
 void checkPolarised3(const CheckContext& context, PartUse& use, NetCounts& counts,
                      std::vector<Finding>& errors) {
     counts.add(use, -1);
-    const std::vector<int> placedNets = use.net;
+    const std::array<int, 3> placedNets{use.net[0], use.net[1], use.net[2]};
     const int placed = counts.score(use);
     std::array<int, 3> order{0, 1, 2};
     std::array<int, 3> best = order;
@@ -278,7 +281,7 @@ void checkPolarised3(const CheckContext& context, PartUse& use, NetCounts& count
             best = order;
         }
     }
-    use.net = placedNets;
+    std::copy(placedNets.begin(), placedNets.end(), use.net.begin());
     counts.add(use, +1);
     if (!clearlyBetter(bestScore, placed)) return;
     const std::array<int, 3> asPlaced{0, 1, 2};

@@ -2,6 +2,7 @@
 // meant to carry (private to the checker).
 #pragma once
 
+#include <span>
 #include <string>
 #include <string_view>
 #include <vector>
@@ -12,14 +13,16 @@
 
 namespace netcheck {
 
+/// The three per-pin spans point into one pool owned by the matcher, so placing a part allocates
+/// nothing of its own.
 struct PartUse {
     std::string_view ref;
     const CircuitPart* circuitPart = nullptr;  ///< null when the ref only appears in nets
     bool offboard = false;                     ///< board part is in board.offboard
     int index = -1;                            ///< index into board.parts / board.offboard; -1 missing
-    std::vector<int> nodes;                    ///< node of each board pin, in board pin order
-    std::vector<int> net;                      ///< intended net at each board pin, -1 = don't care
-    std::vector<int> nameOf;                   ///< the circuit's name at each board pin (a pin index)
+    std::span<int> nodes;                      ///< node of each board pin, in board pin order
+    std::span<int> net;                        ///< intended net at each board pin, -1 = don't care
+    std::span<int> nameOf;                     ///< the circuit's name at each board pin (a pin index)
     std::vector<std::string> unknownPins;      ///< pins the circuit uses that the board part lacks
 
     bool found() const { return index >= 0; }

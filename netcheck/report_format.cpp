@@ -69,6 +69,7 @@ nlohmann::ordered_json findingJson(const Finding& finding) {
         }
     }
     if (finding.hole) entry["hole"] = holeName(*finding.hole);
+    if (!finding.holes.empty()) entry["holes"] = holeNames(finding.holes);
     entry["message"] = finding.message;
     if (!finding.fix.empty()) entry["fix"] = finding.fix;
     return entry;
