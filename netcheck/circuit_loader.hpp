@@ -6,12 +6,13 @@
 #include "board_file.hpp"
 #include "circuit.hpp"
 #include "read_limits.hpp"
+#include "spice/spice_import.hpp"
 
 namespace netcheck {
 
-/// Reads circuit file text, choosing the reader by file name. JSON circuit files (the shape of a
-/// board file's `circuit` object) today; other formats add a branch here.
+/// Reads circuit file text, choosing the reader by file name and content: SPICE decks (read with
+/// `spice`), otherwise JSON circuit files (the shape of a board file's `circuit` object).
 ReadResult<Circuit> loadCircuitText(std::string_view text, std::string_view fileName,
-                                    const ReadLimits& limits = {});
+                                    const ReadLimits& limits = {}, const SpiceOptions& spice = {});
 
 }  // namespace netcheck

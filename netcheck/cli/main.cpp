@@ -1,16 +1,15 @@
 // netcheck: checks a board file against its intended circuit, or prints the board's netlist.
 // Exit status: 0 the board matches (warnings allowed), 1 errors found, 2 the input is unusable.
 #include <exception>
-#include <fstream>
 #include <iostream>
 #include <optional>
-#include <sstream>
 #include <string>
 #include <vector>
 
 #include "netcheck/board_file.hpp"
 #include "netcheck/check.hpp"
 #include "netcheck/circuit_loader.hpp"
+#include "netcheck/file_io.hpp"
 #include "netcheck/report_format.hpp"
 
 namespace {
@@ -25,13 +24,19 @@ constexpr const char* kUsage =
     "Checks a stripboard layout (BOARD, a .board.json file) against its intended circuit: the\n"
     "circuit embedded in the board file, or FILE. Prints every short, open and part mismatch with\n"
     "the holes concerned and a suggested fix. --nets prints the board's own connectivity instead.\n"
-    "Exit status: 0 the board matches (warnings allowed), 1 errors found, 2 unusable input.\n";
+    "Exit status: 0 the board matches (warnings allowed), 1 errors found, 2 unusable input.\n"
+    "\n"
+    "SPICE decks as FILE (.cir, .sp, .spice, .net, .ckt):\n"
+    "  --ground NAME            net name of node 0 (default GND)\n"
+    "  --spice-flatten          replace subcircuit calls by their parts (refs X1.R3)\n"
+    "  --spice-sources MODE     ignore (default) or offboard: V sources become battery entries\n";
 
 enum class Exit { Match = 0, Errors = 1, BadInput = 2 };
 
 struct Options {
     std::string boardFile;
     std::optional<std::string> circuitFile;
+    netcheck::SpiceOptions spice;
     bool json = false;
     bool nets = false;
     bool help = false;
@@ -57,6 +62,21 @@ Options parseArgs(const std::vector<std::string>& args) {
         } else if (arg == "--circuit") {
             if (i + 1 >= args.size()) throw UsageError{"--circuit needs a file name"};
             options.circuitFile = args[++i];
+        } else if (arg == "--ground") {
+            if (i + 1 >= args.size() || args[i + 1].empty())
+                throw UsageError{"--ground needs a net name"};
+            options.spice.groundName = args[++i];
+        } else if (arg == "--spice-flatten") {
+            options.spice.flatten = true;
+        } else if (arg == "--spice-sources") {
+            const std::string mode = i + 1 < args.size() ? args[++i] : "";
+            if (mode == "ignore") {
+                options.spice.sources = netcheck::SpiceOptions::Sources::Ignore;
+            } else if (mode == "offboard") {
+                options.spice.sources = netcheck::SpiceOptions::Sources::Offboard;
+            } else {
+                throw UsageError{"--spice-sources takes ignore or offboard"};
+            }
         } else if (arg.size() > 1 && arg[0] == '-') {
             throw UsageError{"unknown option " + arg};
         } else if (options.boardFile.empty()) {
@@ -74,25 +94,17 @@ Options parseArgs(const std::vector<std::string>& args) {
     return options;
 }
 
-std::optional<std::string> readFile(const std::string& path) {
-    std::ifstream in(path, std::ios::binary);
-    if (!in) return std::nullopt;
-    std::ostringstream text;
-    text << in.rdbuf();
-    if (in.bad()) return std::nullopt;
-    return text.str();
-}
-
-template <class T>
-std::optional<T> load(const std::string& path,
-                      netcheck::ReadResult<T> (*reader)(std::string_view, std::string_view,
-                                                        const netcheck::ReadLimits&)) {
-    const std::optional<std::string> text = readFile(path);
-    if (!text) {
-        std::cerr << "netcheck: " << path << ": cannot read the file (missing or unreadable)\n";
+/// Reads and parses one input file; on failure prints the located error and returns nullopt.
+template <class Reader>
+auto load(const std::string& path, Reader reader)
+    -> decltype(reader(std::string_view{}, std::string_view{}).value) {
+    const netcheck::ReadLimits limits;
+    netcheck::ReadResult<std::string> text = netcheck::readFileLimited(path, limits.maxBytes);
+    if (!text.ok()) {
+        std::cerr << "netcheck: " << (text.error ? text.error->describe() : path) << "\n";
         return std::nullopt;
     }
-    netcheck::ReadResult<T> result = reader(*text, path, netcheck::ReadLimits{});
+    auto result = reader(*text.value, path);
     if (!result.ok()) {
         std::cerr << "netcheck: "
                   << (result.error ? result.error->describe() : path + ": unreadable") << "\n";
@@ -103,7 +115,10 @@ std::optional<T> load(const std::string& path,
 }
 
 Exit run(const Options& options) {
-    std::optional<netcheck::Board> board = load(options.boardFile, &netcheck::readBoard);
+    std::optional<netcheck::Board> board =
+        load(options.boardFile, [](std::string_view text, std::string_view name) {
+            return netcheck::readBoard(text, name);
+        });
     if (!board) return Exit::BadInput;
     if (options.nets) {
         std::cout << (options.json ? netcheck::netsJson(*board).dump(2) + "\n"
@@ -112,7 +127,9 @@ Exit run(const Options& options) {
     }
     std::optional<netcheck::Circuit> circuit;
     if (options.circuitFile) {
-        circuit = load(*options.circuitFile, &netcheck::loadCircuitText);
+        circuit = load(*options.circuitFile, [&](std::string_view text, std::string_view name) {
+            return netcheck::loadCircuitText(text, name, netcheck::ReadLimits{}, options.spice);
+        });
         if (!circuit) return Exit::BadInput;
     }
     const netcheck::CheckReport report = netcheck::check(*board, circuit ? &*circuit : nullptr);
