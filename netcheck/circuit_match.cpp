@@ -1,6 +1,6 @@
-// Matching parts by reference designator. Lookups go through one hash table built once per check, so
-// the cost grows with the number of pins, not with pins times parts; the per-pin arrays of every
-// part live in one pool.
+// Matching parts by reference designator. Lookups go through one hash table built once per check,
+// so the cost grows with the number of pins, not with pins times parts; the per-pin arrays of
+// every part live in one pool.
 #include "circuit_match.hpp"
 
 #include <algorithm>
