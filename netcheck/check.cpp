@@ -136,6 +136,7 @@ std::vector<Island> pinIslands(const CheckContext& context) {
         }
     }
     std::vector<Island> islands;
+    islands.reserve(static_cast<std::size_t>(std::count(slot.begin(), slot.end(), 0)));
     for (std::size_t id = 0; id < slot.size(); ++id) {
         if (slot[id] < 0) continue;
         slot[id] = static_cast<int>(islands.size());
