@@ -88,6 +88,8 @@ public:
     bool end_array() { return close(); }
     bool parse_error(std::size_t, const std::string&, const nlohmann::detail::exception& e) {
         if (const auto* syntax = dynamic_cast<const Json::parse_error*>(&e)) throw *syntax;
+        // A number beyond a double (406) arrives here too; readJson turns it into its own message.
+        if (const auto* range = dynamic_cast<const Json::out_of_range*>(&e)) throw *range;
         throw Json::parse_error::create(101, 0, e.what(), nullptr);
     }
 

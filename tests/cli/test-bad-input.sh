@@ -39,8 +39,8 @@ expect2 "unknown option" "unknown option --frobnicate" "$bin/netcheck" --frobnic
 expect2 "two boards" "only one board file" "$bin/netcheck" "$sample" "$sample"
 expect2 "--circuit without a file" "--circuit needs a file name" "$bin/netcheck" "$sample" --circuit
 expect2 "--nets with --circuit" "takes no --circuit" "$bin/netcheck" --nets --circuit "$sample" "$sample"
-expect2 "missing board file" "no-such.board.json: cannot read" "$bin/netcheck" "$out/no-such.board.json"
-expect2 "missing circuit file" "no-such.circuit.json: cannot read" \
+expect2 "missing board file" "no-such.board.json: no such file" "$bin/netcheck" "$out/no-such.board.json"
+expect2 "missing circuit file" "no-such.circuit.json: no such file" \
     "$bin/netcheck" --circuit "$out/no-such.circuit.json" "$sample"
 printf '{"parts": {}, "nets": {"A": ["R1"]}}\n' > "$out/bad.circuit.json"
 expect2 "bad circuit file" "bad.circuit.json:1" "$bin/netcheck" --circuit "$out/bad.circuit.json" "$sample"

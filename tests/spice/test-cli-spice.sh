@@ -73,5 +73,19 @@ sed 's/^R2 DIS THR 47k$/R2 DIS THR 4K7/' "$samples/spice/flasher.cir" > "$out/fl
 expect "IEC-style value warned" 1 'value "4K7" reads as 4000 under SPICE rules' \
     "$bin/netcheck" --circuit "$out/flasher-iec.cir" "$samples/flasher.board.json"
 
+# Command-line options reach the importer: node 0 takes the given name; V sources become an
+# off-board battery (which this board does not have, so the checker says it is missing).
+expect "--ground names node 0" 1 "carries net ZERO" \
+    "$bin/netcheck" --ground ZERO --circuit "$samples/spice/flasher.cir" \
+    "$samples/flasher-reversed-electrolytic.board.json"
+printf 'supply\nV9 VCC 0 DC 9\nR1 VCC DIS 1k\n.end\n' > "$out/supply.cir"
+expect "--spice-sources offboard" 1 "missing-part V9" \
+    "$bin/netcheck" --spice-sources offboard --circuit "$out/supply.cir" "$samples/flasher.board.json"
+expect "sources ignored by default" 1 "extra-part" \
+    "$bin/netcheck" --circuit "$out/supply.cir" "$samples/flasher.board.json"
+grep -qF "V9" "$out/stdout" && fail "sources ignored by default: V9 still in the report"
+expect "--spice-sources takes a mode" 2 "--spice-sources takes ignore or offboard" \
+    "$bin/netcheck" --spice-sources maybe --circuit "$out/supply.cir" "$samples/flasher.board.json"
+
 echo "spice cli: $passed passed, $failed failed"
 [ "$failed" = 0 ]
