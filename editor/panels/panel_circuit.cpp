@@ -175,11 +175,12 @@ void drawCircuitPanel(EditorApp& app) {
                 drawCircuitNets(app, circuit);
                 ImGui::EndTabItem();
             }
-            if (ImGui::BeginTabItem("Board against circuit")) {
+            const bool comparing = ImGui::BeginTabItem("Board against circuit");
+            app.logItem("circuit-tab-difference");
+            if (comparing) {
                 drawCircuitDifference(app);
                 ImGui::EndTabItem();
             }
-            app.logItem("circuit-tab-difference");
             ImGui::EndTabBar();
         }
     }
