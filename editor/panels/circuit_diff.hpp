@@ -12,10 +12,11 @@ namespace stripsmith {
 /// One net of the circuit against the copper.
 struct NetDifference {
     std::string net;
-    std::vector<netcheck::PinRef> inCircuit;      ///< the pins the circuit names
-    std::vector<netcheck::PinRef> onBoard;        ///< every pin on the islands those pins are on
-    std::vector<netcheck::PinRef> missingOnBoard; ///< named by the circuit, not joined on the board
-    std::vector<netcheck::PinRef> extraOnBoard;   ///< joined on the board, not in this net
+    std::vector<netcheck::PinRef> inCircuit;  ///< the pins the circuit names
+    std::vector<netcheck::PinRef> onBoard;    ///< every pin on the islands those pins are on
+    std::vector<netcheck::PinRef>
+        missingOnBoard;                          ///< named by the circuit, not joined on the board
+    std::vector<netcheck::PinRef> extraOnBoard;  ///< joined on the board, not in this net
     bool same() const { return missingOnBoard.empty() && extraOnBoard.empty(); }
 };
 

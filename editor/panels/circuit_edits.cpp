@@ -111,8 +111,10 @@ std::vector<std::string> netNameSuggestions(const Circuit& circuit, const std::s
     std::vector<std::string> starting, containing;
     for (const auto& [name, pins] : circuit.nets) {
         const auto at = lowered(name).find(key);
-        if (at == 0) starting.push_back(name);
-        else if (at != std::string::npos) containing.push_back(name);
+        if (at == 0)
+            starting.push_back(name);
+        else if (at != std::string::npos)
+            containing.push_back(name);
     }
     starting.insert(starting.end(), containing.begin(), containing.end());
     if (starting.size() > limit) starting.resize(limit);

@@ -6,9 +6,8 @@
 
 namespace stripsmith {
 
-netcheck::ReadResult<netcheck::Circuit> readCircuitForEditor(std::string_view text,
-                                                             std::string_view fileName,
-                                                             const netcheck::SpiceOptions& options) {
+netcheck::ReadResult<netcheck::Circuit> readCircuitForEditor(
+    std::string_view text, std::string_view fileName, const netcheck::SpiceOptions& options) {
     if (netcheck::looksLikeSpiceDeck(text, fileName))
         return netcheck::importSpice(text, fileName, options);
     return netcheck::readCircuit(text, fileName);

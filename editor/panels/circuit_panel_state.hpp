@@ -11,13 +11,13 @@
 namespace stripsmith {
 
 struct CircuitPanelState {
-    netcheck::SpiceOptions spice;         ///< how the next SPICE deck is read
-    std::vector<std::string> loadNotes;   ///< the importer's remarks on the last loaded file
-    std::string loadedFrom;               ///< the file those notes are about
-    bool onlyDifferentNets = false;       ///< comparison lists only the nets that differ
+    netcheck::SpiceOptions spice;        ///< how the next SPICE deck is read
+    std::vector<std::string> loadNotes;  ///< the importer's remarks on the last loaded file
+    std::string loadedFrom;              ///< the file those notes are about
+    bool onlyDifferentNets = false;      ///< comparison lists only the nets that differ
 
     std::string newRef, newKind = "resistor", newValue, newPins = "1 2";
-    std::string editingRef;               ///< part whose fields are open for editing
+    std::string editingRef;  ///< part whose fields are open for editing
     std::string editRef, editKind, editValue, editPins;
     std::map<std::string, std::string> pinNetText;  ///< "REF.PIN" -> net name being typed
     std::string renameFrom, renameTo;

@@ -22,7 +22,6 @@ void drawCircuitDifference(EditorApp& app);
 /// Text box for a net name with a drop-down of matching existing names. True when the maker
 /// confirmed a name (Enter, leaving the box after typing, or a pick from the list); then `text`
 /// holds it.
-bool netNameInput(const char* id, std::string& text, const netcheck::Circuit& circuit,
-                  float width);
+bool netNameInput(const char* id, std::string& text, const netcheck::Circuit& circuit, float width);
 
 }  // namespace stripsmith

@@ -36,7 +36,8 @@ void refuseLoad(EditorApp& app, const std::string& message) {
 void logFindings(const EditorApp& app) {
     if (!app.logHoles) return;
     for (const auto& finding : app.doc.report().errors)
-        std::fprintf(stderr, "STRIPSMITH_E2E finding %s %s\n", finding.type.c_str(), finding.message.c_str());
+        std::fprintf(stderr, "STRIPSMITH_E2E finding %s %s\n", finding.type.c_str(),
+                     finding.message.c_str());
 }
 
 void loadCircuitFile(EditorApp& app, const std::string& path) {
@@ -65,7 +66,8 @@ void exportCircuitFile(EditorApp& app, const std::string& path) {
     const auto& board = app.doc.board();
     if (!board.circuit) return;
     const std::string title = board.title.empty() ? "Stripsmith circuit" : board.title;
-    if (auto problem = netcheck::saveFileAtomically(path, circuitFileText(*board.circuit, path, title))) {
+    if (auto problem =
+            netcheck::saveFileAtomically(path, circuitFileText(*board.circuit, path, title))) {
         app.dialogs.errorTitle = "Cannot export the circuit";
         app.dialogs.errorText = *problem;
         return;
@@ -101,7 +103,8 @@ void spiceOptions(EditorApp& app) {
 void loadNotes(EditorApp& app) {
     auto& state = app.circuitPanel;
     if (state.loadNotes.empty()) return;
-    ImGui::TextColored({1.0f, 0.8f, 0.35f, 1.0f}, "Notes on %s (%zu):", baseName(state.loadedFrom).c_str(),
+    ImGui::TextColored({1.0f, 0.8f, 0.35f, 1.0f},
+                       "Notes on %s (%zu):", baseName(state.loadedFrom).c_str(),
                        state.loadNotes.size());
     ImGui::SameLine();
     if (ImGui::SmallButton("Dismiss")) state.loadNotes.clear();
@@ -112,18 +115,24 @@ void loadNotes(EditorApp& app) {
 
 void toolbar(EditorApp& app) {
     const auto& board = app.doc.board();
-    if (ImGui::Button("Load circuit file...")) app.chooser.open(FileChooser::Purpose::OpenCircuit, folderOf(app.doc.path()));
+    if (ImGui::Button("Load circuit file..."))
+        app.chooser.open(FileChooser::Purpose::OpenCircuit, folderOf(app.doc.path()));
     app.logItem("load-circuit");
-    if (ImGui::IsItemHovered()) ImGui::SetTooltip("A JSON circuit file or a SPICE deck (.cir, .sp, .spice, .net, .ckt).");
+    if (ImGui::IsItemHovered())
+        ImGui::SetTooltip("A JSON circuit file or a SPICE deck (.cir, .sp, .spice, .net, .ckt).");
     ImGui::SameLine();
     if (ImGui::Button("Take the board as the circuit"))
-        app.perform(std::make_unique<netcheck::edit::SetCircuit>(board, captureCircuit(board), "Take the board as the circuit"));
+        app.perform(std::make_unique<netcheck::edit::SetCircuit>(board, captureCircuit(board),
+                                                                 "Take the board as the circuit"));
     if (ImGui::IsItemHovered())
-        ImGui::SetTooltip("The board's present connections become the intended circuit, so later edits are checked against them.");
+        ImGui::SetTooltip(
+            "The board's present connections become the intended circuit, so later edits are "
+            "checked against them.");
     if (!board.circuit) {
         ImGui::SameLine();
         if (ImGui::Button("Start an empty circuit"))
-            app.perform(std::make_unique<netcheck::edit::SetCircuit>(board, netcheck::Circuit{}, "Start an empty circuit"));
+            app.perform(std::make_unique<netcheck::edit::SetCircuit>(board, netcheck::Circuit{},
+                                                                     "Start an empty circuit"));
         return;
     }
     ImGui::SameLine();
@@ -133,10 +142,14 @@ void toolbar(EditorApp& app) {
         app.chooser.open(FileChooser::Purpose::ExportCircuit, folderOf(app.doc.path()),
                          (stem.empty() ? std::string("circuit") : stem) + ".cir");
     }
-    if (ImGui::IsItemHovered()) ImGui::SetTooltip("Ending .cir, .sp, .spice, .net or .ckt: a SPICE deck; otherwise a JSON circuit file.\nThe circuit is also saved inside the board file.");
+    if (ImGui::IsItemHovered())
+        ImGui::SetTooltip(
+            "Ending .cir, .sp, .spice, .net or .ckt: a SPICE deck; otherwise a JSON circuit "
+            "file.\nThe circuit is also saved inside the board file.");
     ImGui::SameLine();
     if (ImGui::Button("Remove circuit"))
-        app.perform(std::make_unique<netcheck::edit::SetCircuit>(board, std::nullopt, "Remove circuit"));
+        app.perform(
+            std::make_unique<netcheck::edit::SetCircuit>(board, std::nullopt, "Remove circuit"));
 }
 
 }  // namespace
@@ -164,7 +177,9 @@ void drawCircuitPanel(EditorApp& app) {
         ImGui::Separator();
         const auto& board = app.doc.board();
         if (!board.circuit) {
-            ImGui::TextWrapped("No intended circuit yet. Load one, start an empty one and type it in, or take the board's connections once you have checked them by eye.");
+            ImGui::TextWrapped(
+                "No intended circuit yet. Load one, start an empty one and type it in, or take the "
+                "board's connections once you have checked them by eye.");
         } else if (ImGui::BeginTabBar("circuit-views")) {
             const netcheck::Circuit circuit = *board.circuit;  // edits below replace the board's
             if (ImGui::BeginTabItem("Parts")) {

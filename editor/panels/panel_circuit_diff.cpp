@@ -23,7 +23,9 @@ std::string refList(const std::vector<std::string>& refs) {
 }
 
 void netRows(const CircuitDifference& diff, bool onlyDifferent) {
-    if (!ImGui::BeginTable("netdiff", 3, ImGuiTableFlags_RowBg | ImGuiTableFlags_BordersInnerV | ImGuiTableFlags_Resizable))
+    if (!ImGui::BeginTable(
+            "netdiff", 3,
+            ImGuiTableFlags_RowBg | ImGuiTableFlags_BordersInnerV | ImGuiTableFlags_Resizable))
         return;
     ImGui::TableSetupColumn("Net", ImGuiTableColumnFlags_WidthFixed, 110);
     ImGui::TableSetupColumn("The circuit says");
@@ -37,7 +39,8 @@ void netRows(const CircuitDifference& diff, bool onlyDifferent) {
         ImGui::TableNextColumn();
         ImGui::TextWrapped("%s", pinList(net.inCircuit).c_str());
         if (!net.missingOnBoard.empty())
-            ImGui::TextColored(kBad, "not joined on the board: %s", pinList(net.missingOnBoard).c_str());
+            ImGui::TextColored(kBad, "not joined on the board: %s",
+                               pinList(net.missingOnBoard).c_str());
         ImGui::TableNextColumn();
         ImGui::TextWrapped("%s", pinList(net.onBoard).c_str());
         if (!net.extraOnBoard.empty())
@@ -55,10 +58,12 @@ void drawCircuitDifference(EditorApp& app) {
     if (!diff.partsOnlyOnBoard.empty())
         ImGui::TextColored(kBad, "On the board only: %s", refList(diff.partsOnlyOnBoard).c_str());
     if (!diff.partsOnlyInCircuit.empty())
-        ImGui::TextColored(kBad, "In the circuit only: %s", refList(diff.partsOnlyInCircuit).c_str());
+        ImGui::TextColored(kBad, "In the circuit only: %s",
+                           refList(diff.partsOnlyInCircuit).c_str());
     for (const PartDifference& part : diff.parts)
-        ImGui::TextColored(kBad, "%s: board %s %s, circuit %s %s", part.ref.c_str(), part.boardKind.c_str(),
-                           part.boardValue.c_str(), part.circuitKind.c_str(), part.circuitValue.c_str());
+        ImGui::TextColored(kBad, "%s: board %s %s, circuit %s %s", part.ref.c_str(),
+                           part.boardKind.c_str(), part.boardValue.c_str(),
+                           part.circuitKind.c_str(), part.circuitValue.c_str());
     bool& onlyDifferent = app.circuitPanel.onlyDifferentNets;
     ImGui::Checkbox("Only nets that differ", &onlyDifferent);
     ImGui::BeginChild("diff");

@@ -56,7 +56,9 @@ void drawCircuitNets(EditorApp& app, const netcheck::Circuit& circuit) {
     mergeForm(app, circuit);
     ImGui::Separator();
     ImGui::BeginChild("nets");
-    if (ImGui::BeginTable("nets", 3, ImGuiTableFlags_RowBg | ImGuiTableFlags_Resizable | ImGuiTableFlags_BordersInnerV)) {
+    if (ImGui::BeginTable(
+            "nets", 3,
+            ImGuiTableFlags_RowBg | ImGuiTableFlags_Resizable | ImGuiTableFlags_BordersInnerV)) {
         ImGui::TableSetupColumn("Net", ImGuiTableColumnFlags_WidthFixed, 120);
         ImGui::TableSetupColumn("Pins");
         ImGui::TableSetupColumn("", ImGuiTableColumnFlags_WidthFixed, 110);

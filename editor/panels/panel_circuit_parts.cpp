@@ -34,7 +34,8 @@ void kindPicker(const char* id, std::string& kind, std::string& pins) {
     ImGui::SameLine(0, 0);
     if (ImGui::BeginCombo("##kinds", nullptr, ImGuiComboFlags_NoPreview)) {
         for (const netcheck::PartKind& known : netcheck::partKinds()) {
-            const std::string label = std::string(known.label) + " (" + std::string(known.name) + ")";
+            const std::string label =
+                std::string(known.label) + " (" + std::string(known.name) + ")";
             if (!ImGui::Selectable(label.c_str(), kind == known.name)) continue;
             kind = known.name;
             std::string names;
@@ -59,10 +60,12 @@ void addPartForm(EditorApp& app, const netcheck::Circuit& circuit) {
     ImGui::SameLine();
     ImGui::SetNextItemWidth(110);
     ImGui::InputTextWithHint("##pins", "pins: 1 2", &s.newPins);
-    if (ImGui::IsItemHovered()) ImGui::SetTooltip("Pin names separated by spaces, e.g. 1 2, or A K, or C B E");
+    if (ImGui::IsItemHovered())
+        ImGui::SetTooltip("Pin names separated by spaces, e.g. 1 2, or A K, or C B E");
     ImGui::SameLine();
     if (ImGui::Button("Add")) {
-        const netcheck::CircuitPart part{s.newKind, s.newValue, splitPins(s.newPins), nlohmann::json::object()};
+        const netcheck::CircuitPart part{s.newKind, s.newValue, splitPins(s.newPins),
+                                         nlohmann::json::object()};
         const auto edit = addCircuitPart(circuit, s.newRef, part);
         if (std::holds_alternative<netcheck::Circuit>(edit)) s.newRef.clear();
         applyCircuitEdit(app, edit, "Add " + s.newRef + " to the circuit");
@@ -110,8 +113,9 @@ void pinRows(EditorApp& app, const netcheck::Circuit& circuit, const std::string
         const bool active = ImGui::IsItemActive() || ImGui::IsPopupOpen("##pick_popup");
         if (confirmed) {
             s.pinNetText.erase(key);
-            applyCircuitEdit(app, assignPinToNet(circuit, pin, text),
-                             text.empty() ? "Take " + key + " out of its net" : "Join " + key + " to " + text);
+            applyCircuitEdit(
+                app, assignPinToNet(circuit, pin, text),
+                text.empty() ? "Take " + key + " out of its net" : "Join " + key + " to " + text);
         } else if (text != current || active) {
             s.pinNetText[key] = text;
         } else {
@@ -145,7 +149,9 @@ void drawCircuitParts(EditorApp& app, const netcheck::Circuit& circuit) {
             s.editPins = joinPins(part.pins);
         }
         ImGui::SameLine();
-        if (ImGui::SmallButton("Remove")) applyCircuitEdit(app, removeCircuitPart(circuit, ref), "Remove " + ref + " from the circuit");
+        if (ImGui::SmallButton("Remove"))
+            applyCircuitEdit(app, removeCircuitPart(circuit, ref),
+                             "Remove " + ref + " from the circuit");
         if (s.editingRef == ref) editPartForm(app, circuit, ref);
         if (open) {
             pinRows(app, circuit, ref);

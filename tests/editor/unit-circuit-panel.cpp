@@ -104,20 +104,23 @@ TEST_CASE("circuit panel edits") {
         CHECK_FALSE(refused(mergeNets(before, "MID", "MID")).empty());
     }
     SUBCASE("add, edit and remove parts") {
-        const Circuit added = edited(addCircuitPart(before, "D1", {"diode", "1N4148", {"A", "K"}, {}}));
+        const Circuit added =
+            edited(addCircuitPart(before, "D1", {"diode", "1N4148", {"A", "K"}, {}}));
         CHECK(added.parts.at("D1").pins == std::vector<std::string>{"A", "K"});
         CHECK_FALSE(refused(addCircuitPart(before, "R1", {})).empty());
         CHECK_FALSE(refused(addCircuitPart(before, "R.1", {})).empty());
         CHECK_FALSE(refused(addCircuitPart(before, "", {})).empty());
 
         // Renumbering R2 as R5 follows it into its nets; its value changes with it.
-        const Circuit renamed = edited(editCircuitPart(before, "R2", "R5", {"resistor", "2k2", {"1", "2"}, {}}));
+        const Circuit renamed =
+            edited(editCircuitPart(before, "R2", "R5", {"resistor", "2k2", {"1", "2"}, {}}));
         CHECK_FALSE(renamed.parts.count("R2"));
         CHECK(renamed.parts.at("R5").value == "2k2");
         CHECK(renamed.netOf({"R5", "1"}) == "MID");
         CHECK(renamed.netOf({"R5", "2"}) == "GND");
         // Dropping a pin from the list takes it out of its net.
-        const Circuit onePin = edited(editCircuitPart(before, "C1", "C1", {"capacitor", "100n", {"1"}, {}}));
+        const Circuit onePin =
+            edited(editCircuitPart(before, "C1", "C1", {"capacitor", "100n", {"1"}, {}}));
         CHECK_FALSE(onePin.netOf({"C1", "2"}).has_value());
 
         const Circuit removed = edited(removeCircuitPart(before, "R1"));
@@ -151,7 +154,8 @@ TEST_CASE("circuit panel undo") {
     const Circuit original = *board.circuit;
     netcheck::edit::History history;
     auto perform = [&](const CircuitEdit& edit, const char* label) {
-        history.perform(std::make_unique<netcheck::edit::SetCircuit>(board, edited(edit), label), board);
+        history.perform(std::make_unique<netcheck::edit::SetCircuit>(board, edited(edit), label),
+                        board);
     };
     perform(renameNet(*board.circuit, "DIS", "DISCHARGE"), "rename");
     const Circuit renamed = *board.circuit;
@@ -192,12 +196,14 @@ TEST_CASE("circuit panel files") {
     SUBCASE("4K7 reads as 4000 by the SPICE rule, with a note") {
         // ngspice manual, 2.3.2 (scale factors): letters after a number that are not a scale
         // factor are ignored, so 4K7 is 4K = 4000.
-        auto read = readCircuitForEditor("divider\nR1 in out 4K7\nR2 out 0 10k\n.end\n", "d.cir", {});
+        auto read =
+            readCircuitForEditor("divider\nR1 in out 4K7\nR2 out 0 10k\n.end\n", "d.cir", {});
         REQUIRE(read.ok());
         REQUIRE_FALSE(read.notes.empty());
-        const bool mentioned = std::any_of(read.notes.begin(), read.notes.end(), [](const std::string& n) {
-            return n.find("4K7") != std::string::npos && n.find("d.cir:2") != std::string::npos;
-        });
+        const bool mentioned =
+            std::any_of(read.notes.begin(), read.notes.end(), [](const std::string& n) {
+                return n.find("4K7") != std::string::npos && n.find("d.cir:2") != std::string::npos;
+            });
         CHECK(mentioned);
     }
     SUBCASE("a malformed deck is refused with file and line") {
