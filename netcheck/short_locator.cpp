@@ -50,8 +50,8 @@ private:
 
 // Nodes from a pin of net 0 to the nearest pin of another net, both ends included.
 std::vector<int> shortestPath(const IslandGraph& graph,
-                              const std::unordered_map<int, std::vector<PinAt>>& pinsAt,
-                              int& start, int& end) {
+                              const std::unordered_map<int, std::vector<PinAt>>& pinsAt, int& start,
+                              int& end) {
     std::unordered_map<int, int> parent;
     std::deque<int> queue;
     std::vector<int> sources;
@@ -88,13 +88,28 @@ std::vector<int> shortestPath(const IslandGraph& graph,
     return {};
 }
 
-// Candidate cuts along the path's strip runs: hole cuts in free holes first, nearest the middle
-// of the path first (a spot-face cutter in a free hole is the usual practice), then cuts between
-// holes.
+// True when the board already has a cut of the same kind in the same column on a neighbouring
+// strip: makers like cuts in a line (one pass of the cutter, easy to check by eye).
+bool inLineWithACut(const Board& board, const Cut& cut) {
+    for (const Cut& other : board.cuts) {
+        if (other.kind == cut.kind && other.hole.col == cut.hole.col &&
+            std::abs(other.hole.row - cut.hole.row) == 1) {
+            return true;
+        }
+    }
+    return false;
+}
+
+// Candidate cuts along the path's strip runs: hole cuts in free holes first (a spot-face cutter in
+// a free hole is the usual practice), then cuts between holes; within each, cuts in line with an
+// existing cut first, then nearest the middle of the path.
 std::vector<Cut> cutCandidates(const CheckContext& context, const std::vector<int>& path) {
     std::vector<std::pair<int, Cut>> holeCuts;
     std::vector<std::pair<int, Cut>> betweenCuts;
     const int middle = static_cast<int>(path.size()) - 1;  // twice the middle index
+    auto rank = [&](const Cut& cut, int distance) {
+        return (inLineWithACut(context.board(), cut) ? 0 : 1 << 24) + distance;
+    };
     std::set<int> holeCutSeen;
     for (std::size_t i = 0; i + 1 < path.size(); ++i) {
         const int a = path[i];
@@ -102,18 +117,20 @@ std::vector<Cut> cutCandidates(const CheckContext& context, const std::vector<in
         if (!context.isHoleNode(a) || !context.isHoleNode(b) || std::abs(a - b) != 1) continue;
         const Hole left = context.holeAt(std::min(a, b));
         if (context.holeAt(std::max(a, b)).row != left.row) continue;
-        const int distance = std::abs(static_cast<int>(2 * i + 1) - middle);
-        betweenCuts.push_back({distance, Cut{left, Cut::Kind::Between}});
+        const Cut between{left, Cut::Kind::Between};
+        betweenCuts.push_back(
+            {rank(between, std::abs(static_cast<int>(2 * i + 1) - middle)), between});
         for (std::size_t j : {i, i + 1}) {
             if (context.isFree(path[j]) && holeCutSeen.insert(path[j]).second) {
-                const int d = std::abs(static_cast<int>(2 * j) - middle);
-                holeCuts.push_back({d, Cut{context.holeAt(path[j]), Cut::Kind::Hole}});
+                const Cut holeCut{context.holeAt(path[j]), Cut::Kind::Hole};
+                holeCuts.push_back(
+                    {rank(holeCut, std::abs(static_cast<int>(2 * j) - middle)), holeCut});
             }
         }
     }
-    auto nearer = [](const auto& x, const auto& y) { return x.first < y.first; };
-    std::stable_sort(holeCuts.begin(), holeCuts.end(), nearer);
-    std::stable_sort(betweenCuts.begin(), betweenCuts.end(), nearer);
+    auto better = [](const auto& x, const auto& y) { return x.first < y.first; };
+    std::stable_sort(holeCuts.begin(), holeCuts.end(), better);
+    std::stable_sort(betweenCuts.begin(), betweenCuts.end(), better);
     std::vector<Cut> cuts;
     for (const auto& entry : holeCuts) cuts.push_back(entry.second);
     for (const auto& entry : betweenCuts) cuts.push_back(entry.second);
@@ -223,9 +240,7 @@ Finding locateShort(const CheckContext& context, int island,
     }
     const PinAt& from = pinOfNet(pinsAt.at(start), true);
     const PinAt& to = pinOfNet(pinsAt.at(end), false);
-    finding.message = names + ": " +
-                      (start == end ? "one hole holds "
-                                    : routeText(context, path)) +
+    finding.message = names + ": " + (start == end ? "one hole holds " : routeText(context, path)) +
                       pinText(context, from) + " and " + pinText(context, to);
     finding.suggestedCut = suggestCut(context, path, start, end, nets, pinsAt);
     finding.fix = finding.suggestedCut ? cutFix(*finding.suggestedCut)

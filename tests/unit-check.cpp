@@ -90,6 +90,31 @@ TEST_CASE("check") {
         CHECK(ofType(report.errors, "open").empty());
     }
 
+    SUBCASE("short: the suggested cut lines up with an existing cut (common practice)") {
+        // Strip A joins R1.1 (A2, net X) and R2.1 (A7, net Y). Free holes A3..A6 could all take
+        // the cut; B3 is already cut, so A3 keeps the cuts in one column.
+        Board board = stripBoard(4, 9);
+        addPart(board, "R1", "resistor", "1k", {{"1", h("A2")}, {"2", h("C2")}});
+        addPart(board, "R2", "resistor", "1k", {{"1", h("A7")}, {"2", h("D7")}});
+        board.cuts.push_back(Cut{h("B3"), Cut::Kind::Hole});
+        Circuit circuit;
+        circuit.parts["R1"] = {"resistor", "1k", {}, {}};
+        circuit.parts["R2"] = {"resistor", "1k", {}, {}};
+        circuit.nets["X"] = {pin("R1.1")};
+        circuit.nets["Y"] = {pin("R2.1")};
+        board.circuit = circuit;
+        const CheckReport report = check(board);
+        const auto shorts = ofType(report.errors, "short");
+        REQUIRE(shorts.size() == 1);
+        REQUIRE(shorts[0]->suggestedCut);
+        CHECK(cutName(*shorts[0]->suggestedCut) == "A3");
+        CHECK(separatesWithoutOpening(board, *shorts[0]));
+        board.cuts.clear();  // with nothing to line up with, the middle of the run is chosen
+        const auto alone = ofType(check(board).errors, "short");
+        REQUIRE(alone.size() == 1);
+        CHECK(cutName(*alone[0]->suggestedCut) != "A3");
+    }
+
     SUBCASE("short through a link: no single cut when the link holes are the pins' own") {
         Board board = stripBoard(2, 3);
         addPart(board, "R1", "resistor", "1k", {{"1", h("A1")}, {"2", h("B3")}});
