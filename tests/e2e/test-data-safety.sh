@@ -1,0 +1,243 @@
+#!/usr/bin/env bash
+# End to end: the editor never loses a board behind the maker's back.
+#  1. Opening a broken board file through the chooser shows an error naming the file and line, and
+#     the board already open (with an unsaved edit) stays as it was: saving it afterwards writes
+#     the original board plus that edit.
+#  2. Quitting with unsaved changes asks first: Ctrl+Q then Cancel keeps the editor running; the
+#     window manager's close request (WM_DELETE_WINDOW, what the title bar's close button sends)
+#     then "Don't save" ends it, and the file on disk is unchanged both times.
+source "$(dirname "$0")/e2e_lib.sh"
+run_under_xvfb "$0"
+
+sample="$STRIPSMITH_SOURCE/samples/flasher.board.json"
+board="$WORK/flasher.board.json"
+broken="$WORK/broken.board.json"
+cp "$sample" "$board"
+
+# The broken file: R1's second lead moved to E95 on an 18-column board.
+python3 - "$sample" "$broken" <<'PY'
+import sys
+text = open(sys.argv[1]).read()
+assert text.count('"E15"') == 1
+open(sys.argv[2], "w").write(text.replace('"E15"', '"E95"'))
+PY
+bad_line=$(grep -n '"E95"' "$broken" | cut -d: -f1)
+check "the broken file is refused by the netcheck CLI too (exit status 2)" \
+    bash -c "'$STRIPSMITH_BIN/netcheck' '$broken' >/dev/null 2>&1; [ \$? -eq 2 ]"
+
+# ---- helpers for the dialogs (the editor logs "STRIPSMITH_E2E dialogs ..." when they change) ----
+
+last_dialogs() { grep "STRIPSMITH_E2E dialogs" "$LOG" | tail -1 | cut -d' ' -f3-; }
+
+dialogs_match() { last_dialogs | grep -q -- "$1"; }
+
+wait_dialogs() {  # wait_dialogs PATTERN: up to 10 s for the open dialogs to match PATTERN
+    eventually dialogs_match "$1"
+}
+
+# press_for_dialog KEY PATTERN: presses KEY until the open dialogs match PATTERN (three tries; a
+# synthetic key event is now and then dropped on a loaded machine).
+press_for_dialog() {
+    for _ in 1 2 3; do
+        keys "$1"
+        if wait_dialogs "$2"; then return 0; fi
+        echo "no dialog \"$2\" after $1; pressing it again" >&2
+    done
+    return 1
+}
+
+# settled_item_xy NAME: an item's position once the popup holding it has stopped moving (an
+# auto-sized popup is placed again on its second frame).
+settled_item_xy() {
+    wait_for_log "STRIPSMITH_E2E item $1 " >/dev/null
+    local before=-1 now
+    for _ in $(seq 1 20); do
+        now=$(grep -c "STRIPSMITH_E2E item $1 " "$LOG" || true)
+        if [ "$now" = "$before" ]; then break; fi
+        before=$now
+        sleep 0.4
+    done
+    item_xy "$1"
+}
+
+click_item() {  # click_item NAME: a click on a dialog button once its popup has settled
+    local xy
+    xy=$(settled_item_xy "$1") || return 1
+    click_at $xy
+}
+
+status_count() { grep -c "STRIPSMITH_E2E status" "$LOG" || true; }
+
+wait_status_after() {  # wait_status_after COUNT PATTERN: a status line after the first COUNT ones
+    for _ in $(seq 1 50); do
+        if grep "STRIPSMITH_E2E status" "$LOG" | tail -n +"$(($1 + 1))" | grep -q -- "$2"; then
+            return 0
+        fi
+        sleep 0.2
+    done
+    return 1
+}
+
+# cut_gap ROW COL NAME: the cut tool, then a click on the gap after hole COL (zero-based) of strip
+# ROW; waits for the editor to report the cut NAME (tries again if the tool key was dropped).
+cut_gap() {
+    local before
+    for _ in 1 2; do
+        before=$(status_count)
+        keys x
+        click_at $(gap_xy "$1" "$2")
+        if wait_status_after "$before" "Add cut $3\$"; then return 0; fi
+    done
+    return 1
+}
+
+editor_running() { kill -0 "$EDITOR_PID" 2>/dev/null; }
+
+title_is() {  # title_is TITLE: the editor window's title, as the window manager shows it
+    [ "$(xdotool getwindowname "$(xdotool search --name '^Stripsmith' | head -1)")" = "$1" ]
+}
+
+# close_window: what a window manager sends when the title bar's close button is pressed.
+close_window() {
+    python3 - "$(xdotool search --name '^Stripsmith' | head -1)" <<'PY'
+import ctypes, sys
+x11 = ctypes.cdll.LoadLibrary("libX11.so.6")
+x11.XOpenDisplay.restype = ctypes.c_void_p
+x11.XOpenDisplay.argtypes = [ctypes.c_char_p]
+x11.XInternAtom.restype = ctypes.c_ulong
+x11.XInternAtom.argtypes = [ctypes.c_void_p, ctypes.c_char_p, ctypes.c_int]
+x11.XSendEvent.argtypes = [ctypes.c_void_p, ctypes.c_ulong, ctypes.c_int, ctypes.c_long,
+                          ctypes.c_void_p]
+x11.XFlush.argtypes = [ctypes.c_void_p]
+x11.XCloseDisplay.argtypes = [ctypes.c_void_p]
+
+class ClientMessage(ctypes.Structure):  # XClientMessageEvent from <X11/Xlib.h>
+    _fields_ = [("type", ctypes.c_int), ("serial", ctypes.c_ulong), ("send_event", ctypes.c_int),
+                ("display", ctypes.c_void_p), ("window", ctypes.c_ulong),
+                ("message_type", ctypes.c_ulong), ("format", ctypes.c_int),
+                ("data", ctypes.c_long * 5)]
+
+class Event(ctypes.Union):  # XEvent: 24 longs
+    _fields_ = [("xclient", ClientMessage), ("pad", ctypes.c_long * 24)]
+
+display = x11.XOpenDisplay(None)
+window = int(sys.argv[1])
+event = Event()
+event.xclient.type = 33  # ClientMessage
+event.xclient.window = window
+event.xclient.message_type = x11.XInternAtom(display, b"WM_PROTOCOLS", 0)
+event.xclient.format = 32
+event.xclient.data[0] = x11.XInternAtom(display, b"WM_DELETE_WINDOW", 0)
+x11.XSendEvent(display, window, 0, 0, ctypes.byref(event))
+x11.XFlush(display)
+x11.XCloseDisplay(display)
+PY
+}
+
+EXIT_STATUS=""
+wait_exit() {  # wait_exit: up to 10 s for the editor to end; sets EXIT_STATUS
+    EXIT_STATUS="still running"
+    for _ in $(seq 1 50); do
+        if ! editor_running; then
+            EXIT_STATUS=0
+            wait "$EDITOR_PID" 2>/dev/null || EXIT_STATUS=$?
+            return 0
+        fi
+        sleep 0.2
+    done
+    return 1
+}
+
+# ---- 1. a broken file does not replace the open board ----------------------------------------
+
+start_editor "$board"
+screenshot safety-0-opened
+# Cut strip A (the +9 V rail) between A13 and A14.
+check "the cut tool made a cut at A13|A14" cut_gap 0 12 "A13|A14"
+screenshot safety-1-cut
+
+# Ctrl+O on a changed board asks first; "Don't save" goes on to the chooser.
+check "Ctrl+O with an unsaved edit asks about the changes" press_for_dialog ctrl+o unsaved
+screenshot safety-2-ask-before-open
+check "\"Don't save\" is clicked" click_item unsaved-dont-save
+check "\"Don't save\" goes on to the file chooser" wait_dialogs "^chooser$"
+type_text "$broken"
+keys Return
+check "the error names the file and line: $broken:$bad_line" \
+    wait_dialogs "error .*$broken:$bad_line"
+check "the error says what is wrong (the hole E95)" dialogs_match "E95"
+sleep 1
+check "the error stays up until it is dismissed" dialogs_match "error "
+screenshot safety-3-error
+check "the window still shows the first board, with the change mark" \
+    title_is "Stripsmith - flasher.board.json *"
+check "the error's OK button is clicked" click_item message-ok
+check "OK closes the error" wait_dialogs "^-$"
+check "the broken file was not touched" cmp -s "$broken" <(sed 's/"E15"/"E95"/' "$sample")
+
+before=$(status_count)
+keys ctrl+s
+check "Ctrl+S saves the board that stayed open" wait_status_after "$before" "Saved $board"
+screenshot safety-4-saved
+
+check "the saved file is the original board plus the one cut" python3 - "$sample" "$board" <<'PY'
+import json, sys
+before, after = json.load(open(sys.argv[1])), json.load(open(sys.argv[2]))
+kept = ("board", "parts", "links", "offboard", "wires", "circuit")
+same = all(before[k] == after[k] for k in kept)
+sys.exit(0 if same and sorted(after["cuts"]) == sorted(before["cuts"] + ["A13|A14"]) else 1)
+PY
+nets_before=$("$STRIPSMITH_BIN/netcheck" --nets --json "$sample")
+nets_after=$("$STRIPSMITH_BIN/netcheck" --nets --json "$board" || true)
+# Traced by hand from the sample: strip A is the +9 V rail, fed by the battery at A1 and joined to
+# U1.4 (link A7-G7) and U1.8 (link A12-D12); R1.1 sits at A15. Cutting A13|A14 leaves R1.1 alone on
+# A14..A18 while the rest of the rail keeps its members.
+check "netcheck: R1.1 was on the 9 V rail before and is cut off from it after" python3 - <<PY
+import json
+before = json.loads('''$nets_before''')["nets"]
+after = json.loads('''$nets_after''')["nets"]
+def net_of(nets, pin):
+    return sorted([n for n in nets if pin in n][0])
+rail_before = net_of(before, "BT1.+")
+rail_after = net_of(after, "BT1.+")
+ok = ("R1.1" in rail_before and net_of(after, "R1.1") == ["R1.1"]
+      and rail_after == sorted(p for p in rail_before if p != "R1.1"))
+others = [sorted(n) for n in before if "BT1.+" not in n]
+ok = ok and all(n in [sorted(m) for m in after] for n in others)
+raise SystemExit(0 if ok else 1)
+PY
+
+# ---- 2. quitting with unsaved changes asks first ---------------------------------------------
+
+saved_sum=$(sha256sum <"$board")
+check "the cut tool made a second cut at I17|I18" cut_gap 8 16 "I17|I18"
+check "Ctrl+Q with an unsaved edit asks about the changes" press_for_dialog ctrl+q unsaved
+screenshot safety-5-ask-before-quit
+sleep 0.5
+check "the editor is still running while it asks" editor_running
+check "Cancel is clicked" click_item unsaved-cancel
+check "Cancel closes the question" wait_dialogs "^-$"
+sleep 1
+check "after Cancel the editor keeps running" editor_running
+check "after Cancel the edit is still there, unsaved" \
+    eventually title_is "Stripsmith - flasher.board.json *"
+check "after Cancel the file on disk is unchanged" test "$(sha256sum <"$board")" = "$saved_sum"
+screenshot safety-6-cancelled
+
+close_window
+check "closing the window with an unsaved edit asks about the changes" wait_dialogs unsaved
+sleep 0.5
+check "the editor is still running while it asks" editor_running
+screenshot safety-7-ask-before-close
+check "\"Don't save\" is clicked" click_item unsaved-dont-save
+wait_exit || true
+check "\"Don't save\" ends the editor normally (exit status: $EXIT_STATUS)" test "$EXIT_STATUS" = 0
+check "after \"Don't save\" the file on disk is unchanged" \
+    test "$(sha256sum <"$board")" = "$saved_sum"
+check "the unsaved second cut is not on disk" python3 - "$board" <<'PY'
+import json, sys
+sys.exit(0 if "I17|I18" not in json.load(open(sys.argv[1]))["cuts"] else 1)
+PY
+"$STRIPSMITH_BIN/stripsmith" --screenshot "$ART/safety-8-reopened.png" --size 1400x900 "$board" \
+    2>/dev/null || true
+finish
