@@ -1,6 +1,8 @@
 // Sections: loading and saving | actions | dialogs | autosave.
 #include "editor/files/file_actions.hpp"
 
+#include <algorithm>
+#include <cstdio>
 #include <filesystem>
 
 #include <imgui.h>
@@ -172,7 +174,9 @@ void drawUnsavedPrompt(EditorApp& app) {
         app.dialogs.pending = PendingAction::None;
         ImGui::CloseCurrentPopup();
     };
-    if (ImGui::Button("Save", {110, 0})) {
+    const bool save = ImGui::Button("Save", {110, 0});
+    app.logItem("unsaved-save");
+    if (save) {
         if (!app.doc.path().empty() && !app.doc.readOnly()) {
             close();
             if (saveBoardFile(app, app.doc.path())) doPending(app, action, path);
@@ -184,16 +188,20 @@ void drawUnsavedPrompt(EditorApp& app) {
         }
     }
     ImGui::SameLine();
-    if (ImGui::Button("Don't save", {110, 0})) {
+    const bool discard = ImGui::Button("Don't save", {110, 0});
+    app.logItem("unsaved-dont-save");
+    if (discard) {
         close();
         doPending(app, action, path);
     }
     ImGui::SameLine();
-    if (ImGui::Button("Cancel", {110, 0})) close();
+    const bool cancel = ImGui::Button("Cancel", {110, 0});
+    app.logItem("unsaved-cancel");
+    if (cancel) close();
     ImGui::EndPopup();
 }
 
-void drawMessage(const char* title, std::string& text, bool& clear) {
+void drawMessage(EditorApp& app, const char* title, std::string& text, bool& clear) {
     if (!text.empty() && !ImGui::IsPopupOpen(title)) ImGui::OpenPopup(title);
     centreNext();
     ImGui::SetNextWindowSizeConstraints({360, 0}, {760, 600});
@@ -202,7 +210,10 @@ void drawMessage(const char* title, std::string& text, bool& clear) {
     ImGui::TextUnformatted(text.c_str());
     ImGui::PopTextWrapPos();
     ImGui::Spacing();
-    if (ImGui::Button("OK", {110, 0}) || ImGui::IsKeyPressed(ImGui::GetKeyIndex(ImGuiKey_Enter))) {
+    const bool ok = ImGui::Button("OK", {110, 0});
+    app.logItem("message-ok");
+    // Not on the frame it appears: the Enter that accepted a file chooser would close it unseen.
+    if (ok || (ImGui::IsKeyPressed(ImGui::GetKeyIndex(ImGuiKey_Enter)) && !ImGui::IsWindowAppearing())) {
         clear = true;
         ImGui::CloseCurrentPopup();
     }
@@ -242,6 +253,22 @@ void drawRecoveryOffer(EditorApp& app) {
     ImGui::EndPopup();
 }
 
+// With STRIPSMITH_E2E_LOG set: one "STRIPSMITH_E2E dialogs ..." line each time the open dialogs
+// change, so scripted tests wait for a dialog before they type or click in it.
+void logDialogs(EditorApp& app) {
+    if (!app.logHoles) return;
+    std::string state = app.chooser.isOpen() ? "chooser" : "-";
+    if (app.dialogs.askUnsaved) state += " unsaved";
+    if (!app.dialogs.errorText.empty())
+        state += " error " + app.dialogs.errorTitle + ": " + app.dialogs.errorText;
+    if (!app.dialogs.notice.empty()) state += " note " + app.dialogs.notice;
+    std::replace(state.begin(), state.end(), '\n', ' ');
+    std::string& last = app.loggedItems["dialogs"];
+    if (last == state) return;
+    last = state;
+    std::fprintf(stderr, "STRIPSMITH_E2E dialogs %s\n", state.c_str());
+}
+
 }  // namespace
 
 void drawFileDialogs(EditorApp& app) {
@@ -266,10 +293,11 @@ void drawFileDialogs(EditorApp& app) {
     drawRecoveryOffer(app);
     bool clearError = false, clearNotice = false;
     std::string errorTitle = app.dialogs.errorTitle.empty() ? "Problem" : app.dialogs.errorTitle;
-    drawMessage(errorTitle.c_str(), app.dialogs.errorText, clearError);
-    drawMessage("Note", app.dialogs.notice, clearNotice);
+    drawMessage(app, errorTitle.c_str(), app.dialogs.errorText, clearError);
+    drawMessage(app, "Note", app.dialogs.notice, clearNotice);
     if (clearError) app.dialogs.errorText.clear();
     if (clearNotice) app.dialogs.notice.clear();
+    logDialogs(app);
 }
 
 // ---- autosave -----------------------------------------------------------------------------------
