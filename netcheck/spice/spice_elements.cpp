@@ -17,7 +17,7 @@ namespace netcheck::spice {
 
 namespace {
 
-std::string quoted(std::string_view text) {
+std::string inQuotes(std::string_view text) {
     return "\"" + std::string(text) + "\"";
 }
 
@@ -60,11 +60,11 @@ std::optional<std::string> valueField(const DeckLine& line, char letter) {
 std::optional<double> readNumber(const std::string& field, int line, const ReadContext& context) {
     if (!looksNumeric(field)) return std::nullopt;
     const auto number = parseSpiceNumber(field);
-    if (!number) throw DeckError{line, "bad number " + quoted(field)};
+    if (!number) throw DeckError{line, "bad number " + inQuotes(field)};
     if (number->iecReading && *number->iecReading != number->value) {
         char spice[40];
         std::snprintf(spice, sizeof spice, "%g", number->value);
-        context.note(line, "value " + quoted(field) + " reads as " + spice +
+        context.note(line, "value " + inQuotes(field) + " reads as " + spice +
                                " under SPICE rules (" + formatSpiceNumber(*number->iecReading) +
                                " if meant as IEC 60062 code " + upper(field) + ")");
     }
@@ -84,7 +84,7 @@ ElementPart twoTerminal(const DeckLine& line, char letter, const ReadContext& co
         part.value = canonicalValue(*part.magnitude, part.kind);
     } else {
         part.value = *field;
-        context.note(line.line, line.fields.front().text + ": value " + quoted(*field) +
+        context.note(line.line, line.fields.front().text + ": value " + inQuotes(*field) +
                                     " is not a number; kept as text");
     }
     return part;
