@@ -37,6 +37,17 @@ Freedom freedomOf(const Board& board, const PartUse& use) {
 
 // How many pins of each intended net sit in each island. Most islands carry one net, so the count
 // lives in per-island arrays; only pins of a second net in an island go to a hash map.
+// Island of pin `pin` of a part.
+int islandOfPin(const Connectivity& copper, const PartUse& use, int pin) {
+    return copper.islandOfNode(use.nodes[static_cast<std::size_t>(pin)]);
+}
+
+// One sortable number for a (net, island) pair.
+std::uint64_t key(int net, int island) {
+    return (static_cast<std::uint64_t>(static_cast<std::uint32_t>(net)) << 32) |
+           static_cast<std::uint32_t>(island);
+}
+
 class NetCounts {
 public:
     NetCounts(const Connectivity& copper, const std::vector<PartUse>& uses, int netCount)
@@ -83,13 +94,7 @@ private:
         if (first == net) return firstCount_[static_cast<std::size_t>(island)];
         return others_[key(net, island)];
     }
-    int islandOf(const PartUse& use, int pin) const {
-        return copper_.islandOfNode(use.nodes[static_cast<std::size_t>(pin)]);
-    }
-    static std::uint64_t key(int net, int island) {
-        return (static_cast<std::uint64_t>(static_cast<std::uint32_t>(net)) << 32) |
-               static_cast<std::uint32_t>(island);
-    }
+    int islandOf(const PartUse& use, int pin) const { return islandOfPin(copper_, use, pin); }
     const Connectivity& copper_;
     std::vector<int> firstNet_;
     std::vector<int> firstCount_;
@@ -160,13 +165,7 @@ public:
     }
 
 private:
-    int islandOf(const PartUse& use, int pin) const {
-        return copper_.islandOfNode(use.nodes[static_cast<std::size_t>(pin)]);
-    }
-    static std::uint64_t key(int net, int island) {
-        return (static_cast<std::uint64_t>(static_cast<std::uint32_t>(net)) << 32) |
-               static_cast<std::uint32_t>(island);
-    }
+    int islandOf(const PartUse& use, int pin) const { return islandOfPin(copper_, use, pin); }
     const Connectivity& copper_;
     std::vector<std::uint64_t> keys_;
 };
