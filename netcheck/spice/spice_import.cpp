@@ -64,15 +64,40 @@ Circuit buildCircuit(const std::vector<ElementPart>& parts, const spice::NodeNam
     return circuit;
 }
 
-// A deck is text: a control character would end up in a name no circuit file can hold (found by
-// fuzzing). Tabs, form feeds and line ends are the deck's own separators.
+// Length of the well-formed UTF-8 sequence at `at` (RFC 3629: no overlong forms, no surrogates,
+// nothing above U+10FFFF), or 0 when the bytes there are not UTF-8.
+std::size_t utf8Length(std::string_view text, std::size_t at) {
+    const auto byte = [&](std::size_t i) {
+        return i < text.size() ? static_cast<unsigned char>(text[i]) : 0u;
+    };
+    const unsigned lead = byte(at);
+    if (lead < 0x80) return 1;
+    std::size_t length = lead >= 0xf0 ? 4 : lead >= 0xe0 ? 3 : lead >= 0xc2 ? 2 : 0;
+    if (length == 0 || lead > 0xf4) return 0;
+    const unsigned second = byte(at + 1);
+    const unsigned low = lead == 0xe0 ? 0xa0 : lead == 0xf0 ? 0x90 : 0x80;
+    const unsigned high = lead == 0xed ? 0x9f : lead == 0xf4 ? 0x8f : 0xbf;
+    if (second < low || second > high) return 0;
+    for (std::size_t i = 2; i < length; ++i) {
+        if ((byte(at + i) & 0xc0u) != 0x80u) return 0;
+    }
+    return length;
+}
+
+// A deck is UTF-8 text: a control character or a broken byte sequence would end up in a name no
+// circuit file can hold (both found by fuzzing). Tabs, form feeds and line ends are the deck's own
+// separators.
 void requirePlainText(std::string_view text) {
     int line = 1;
-    for (const char c : text) {
+    for (std::size_t at = 0; at < text.size(); ++at) {
+        const char c = text[at];
         if (c == '\n') {
             ++line;
             continue;
         }
+        const std::size_t length = utf8Length(text, at);
+        if (length == 0) throw DeckError{line, "the deck is not UTF-8 text (a broken byte sequence)"};
+        at += length - 1;
         const auto byte = static_cast<unsigned char>(c);
         if ((byte < 0x20 && c != '\t' && c != '\r' && c != '\f' && c != '\v') || byte == 0x7f) {
             throw DeckError{line, "control character (byte " + std::to_string(byte) +

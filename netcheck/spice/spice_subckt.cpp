@@ -133,6 +133,13 @@ public:
             ElementPart part = element;
             part.nodes = std::move(keys);
             if (callee != nullptr) {
+                // The ports become pin names, which may not hold a '.' (found by fuzzing).
+                for (const std::string& port : callee->ports) {
+                    if (port.find('.') != std::string::npos) {
+                        throw DeckError{callee->line, ".subckt " + callee->name + " port " + port +
+                                                          " cannot name a pin: pin names hold no '.'"};
+                    }
+                }
                 part.pins = callee->ports;
                 part.subckt = callee->name;
                 part.value = callee->name;
