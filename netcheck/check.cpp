@@ -55,23 +55,30 @@ namespace netcheck {
 
 namespace {
 
+// Shorts, and (for the dangling-lead rule) the islands holding a pin meant to join another pin: a
+// pin the circuit leaves unconnected, or the only pin of its net, is meant to be alone.
 void findShorts(const CheckContext& context, const std::vector<PlacedNet>& nets,
-                std::vector<Finding>& errors) {
+                std::vector<Finding>& errors, std::vector<char>& islandsWithNetPins) {
     const Connectivity& copper = context.copper();
     std::vector<int> firstNet(static_cast<std::size_t>(copper.islandCount()), -1);
-    std::map<int, std::vector<const PlacedNet*>> shorted;
+    islandsWithNetPins.assign(firstNet.size(), 0);
+    std::vector<int> shortedIslands;
     for (std::size_t n = 0; n < nets.size(); ++n) {
+        const char meantToJoin = nets[n].pins.size() > 1 ? 1 : 0;
         for (const NetPin& pin : nets[n].pins) {
-            const int island = copper.islandOfNode(pin.node);
-            int& first = firstNet[static_cast<std::size_t>(island)];
+            const auto island = static_cast<std::size_t>(pin.island);
+            islandsWithNetPins[island] |= meantToJoin;
+            int& first = firstNet[island];
             if (first < 0) first = static_cast<int>(n);
-            if (first != static_cast<int>(n)) shorted[island];
+            if (first != static_cast<int>(n)) shortedIslands.push_back(pin.island);
         }
     }
-    if (shorted.empty()) return;
+    if (shortedIslands.empty()) return;
+    std::map<int, std::vector<const PlacedNet*>> shorted;
+    for (int island : shortedIslands) shorted[island];
     for (const PlacedNet& net : nets) {
         for (const NetPin& pin : net.pins) {
-            auto it = shorted.find(copper.islandOfNode(pin.node));
+            auto it = shorted.find(pin.island);
             if (it == shorted.end()) continue;
             if (it->second.empty() || it->second.back() != &net) it->second.push_back(&net);
         }
@@ -83,14 +90,12 @@ void findShorts(const CheckContext& context, const std::vector<PlacedNet>& nets,
 
 void findOpens(const CheckContext& context, const std::vector<PlacedNet>& nets,
                const std::vector<Finding>& shorts, std::vector<Finding>& errors) {
-    const Connectivity& copper = context.copper();
     std::vector<const PlacedNet*> open;
     for (const PlacedNet& net : nets) {
         if (net.pins.empty()) continue;
-        const int first = copper.islandOfNode(net.pins.front().node);
-        const bool split = std::any_of(net.pins.begin(), net.pins.end(), [&](const NetPin& pin) {
-            return copper.islandOfNode(pin.node) != first;
-        });
+        const int first = net.pins.front().island;
+        const bool split = std::any_of(net.pins.begin(), net.pins.end(),
+                                       [&](const NetPin& pin) { return pin.island != first; });
         if (split) open.push_back(&net);
     }
     if (open.empty()) return;
@@ -102,20 +107,6 @@ void findOpens(const CheckContext& context, const std::vector<PlacedNet>& nets,
     for (const PlacedNet* net : open) {
         errors.push_back(locateOpen(context, *net, RepairedBoard{&repaired, &repairedCopper, &nets}));
     }
-}
-
-// Islands holding a pin meant to join another pin (for the dangling-lead rule with a circuit):
-// a pin the circuit leaves unconnected, or the only pin of its net, is meant to be alone.
-std::vector<char> islandsWithNetPins(const CheckContext& context,
-                                     const std::vector<PlacedNet>& nets) {
-    std::vector<char> flagged(static_cast<std::size_t>(context.copper().islandCount()), 0);
-    for (const PlacedNet& net : nets) {
-        if (net.pins.size() < 2) continue;
-        for (const NetPin& pin : net.pins) {
-            flagged[static_cast<std::size_t>(context.copper().islandOfNode(pin.node))] = 1;
-        }
-    }
-    return flagged;
 }
 
 // Islands that hold at least one pin or lug, in id order, with their holes and pins. Islands are
@@ -185,16 +176,16 @@ CheckReport check(const Board& board, const Circuit* circuit) {
         report.errors = std::move(match.errors);
         report.warnings = std::move(match.warnings);
         std::vector<Finding> shorts;
-        findShorts(context, match.nets, shorts);
+        findShorts(context, match.nets, shorts, danglingIslands);
         report.errors.insert(report.errors.end(), shorts.begin(), shorts.end());
         findOpens(context, match.nets, shorts, report.errors);
-        danglingIslands = islandsWithNetPins(context, match.nets);
     }
     findSharedHoles(context, report.errors);
     findLeadsOnCuts(context, report.errors);
     findDanglingLeads(context, circuit ? &danglingIslands : nullptr, report.warnings);
     findTrim(context, report.warnings);
-    report.islands = pinIslands(context);
+    // With a circuit the findings say everything; the island list is the report of a board alone.
+    if (circuit == nullptr) report.islands = pinIslands(context);
     return report;
 }
 

@@ -33,6 +33,14 @@ CheckContext::CheckContext(const Board& board)
         if (wire.from.isHole()) add(Lead::Kind::WireEnd, static_cast<int>(w), 0, *wire.from.hole);
         if (wire.to.isHole()) add(Lead::Kind::WireEnd, static_cast<int>(w), 1, *wire.to.hole);
     }
+    // Leads lie scattered over the board, so their islands are asked for a few leads ahead.
+    constexpr std::size_t kLookAhead = 16;
+    for (std::size_t i = 0; i < leads_.size(); ++i) {
+        if (i + kLookAhead < leads_.size()) copper_.prefetchNode(leads_[i + kLookAhead].hole);
+        Lead& lead = leads_[i];
+        lead.island = copper_.islandOfNode(lead.hole);
+        lead.onCut = copper_.isHoleCut(holeAt(lead.hole));
+    }
     int base = board.holeCount();
     for (const OffboardPart& part : board.offboard) {
         lugBase_.push_back(base);

@@ -18,6 +18,8 @@ struct Lead {
     int item = 0;  ///< index into board.parts, board.links or board.wires
     int sub = 0;   ///< pin index, or 0/1 for the from/to end
     int hole = 0;  ///< hole index row * cols + col
+    int island = 0;       ///< island of the hole
+    bool onCut = false;   ///< the hole is hole-cut (the lead touches no copper)
 };
 
 /// One check run's shared facts. Node ids follow Connectivity: holes, then off-board lugs.

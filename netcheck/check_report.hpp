@@ -35,7 +35,7 @@ struct CheckReport {
     bool hasCircuit = false;
     std::vector<Finding> errors;
     std::vector<Finding> warnings;
-    std::vector<Island> islands;   ///< islands that hold at least one pin
+    std::vector<Island> islands;   ///< without a circuit: islands that hold at least one pin
     bool ok() const { return errors.empty(); }
 };
 

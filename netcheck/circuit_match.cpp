@@ -4,86 +4,18 @@
 #include "circuit_match.hpp"
 
 #include <algorithm>
+#include <array>
 #include <cstdint>
 #include <span>
 
 #include "part_kinds.hpp"
 #include "part_orientation.hpp"
+#include "ref_table.hpp"
 #include "value.hpp"
 
 namespace netcheck {
 
 namespace {
-
-struct BoardSlot {
-    bool offboard = false;
-    int index = -1;
-};
-
-// What one reference designator names: its board part (if any) and its use (if the circuit
-// mentions it).
-struct RefEntry {
-    BoardSlot slot;
-    int use = -1;
-};
-
-// Refs to entries in one flat open-addressed table (linear probing, at most half full), so a
-// check allocates no node per part and hashes each ref once per lookup.
-class RefTable {
-public:
-    explicit RefTable(std::size_t expected) { rehash(2 * expected); }
-
-    /// The entry of `ref`, inserted empty if absent. `ref` must outlive the table.
-    RefEntry& at(std::string_view ref) {
-        if (2 * (used_ + 1) > slots_.size()) rehash(slots_.size() * 2);
-        Slot& slot = slots_[indexOf(ref)];
-        if (!slot.used) {
-            slot = Slot{ref, true, RefEntry{}};
-            ++used_;
-        }
-        return slot.entry;
-    }
-
-    /// The entry of `ref`, or null.
-    const RefEntry* find(std::string_view ref) const {
-        const Slot& slot = slots_[indexOf(ref)];
-        return slot.used ? &slot.entry : nullptr;
-    }
-
-private:
-    struct Slot {
-        std::string_view key;
-        bool used = false;
-        RefEntry entry;
-    };
-
-    static std::size_t hash(std::string_view text) {
-        std::uint64_t h = 14695981039346656037ull;  // FNV-1a: refs are a few characters long
-        for (char c : text) h = (h ^ static_cast<unsigned char>(c)) * 1099511628211ull;
-        return static_cast<std::size_t>(h ^ (h >> 29));
-    }
-
-    // The slot holding `ref`, or the empty slot where it would go.
-    std::size_t indexOf(std::string_view ref) const {
-        const std::size_t mask = slots_.size() - 1;
-        for (std::size_t i = hash(ref) & mask;; i = (i + 1) & mask) {
-            if (!slots_[i].used || slots_[i].key == ref) return i;
-        }
-    }
-
-    void rehash(std::size_t wanted) {
-        std::size_t size = 16;
-        while (size < wanted) size *= 2;
-        std::vector<Slot> old = std::move(slots_);
-        slots_.assign(size, Slot{});
-        for (const Slot& slot : old) {
-            if (slot.used) slots_[indexOf(slot.key)] = slot;
-        }
-    }
-
-    std::vector<Slot> slots_;
-    std::size_t used_ = 0;
-};
 
 std::size_t boardPinCount(const Board& board) {
     std::size_t count = 0;
@@ -92,77 +24,152 @@ std::size_t boardPinCount(const Board& board) {
     return count;
 }
 
-// Every ref the circuit mentions (declared parts, then refs only named in nets), placed on the
-// board where it exists.
+// Asks for `lines` cache lines from `at` on to be brought in ahead of use.
+void prefetchLines(const void* at, int lines) {
+    const auto* line = static_cast<const char*>(at);
+    for (int i = 0; i < lines; ++i) __builtin_prefetch(line + 64 * i);
+}
+
+// Every board part gets a use as the check starts, read in the board's order (one pass through
+// memory); a ref the circuit names that the board lacks gets one when first named. The first
+// board part of a ref wins, on-board parts before off-board ones.
 class Uses {
 public:
     Uses(const CheckContext& context, const Circuit& circuit)
-        : context_(context),
-          refs_(context.board().parts.size() + context.board().offboard.size() +
-                circuit.parts.size()) {
+        : context_(context), refs_(context.board().parts.size() + context.board().offboard.size()) {
         const Board& board = context.board();
-        // The first board part of a ref wins, on-board parts before off-board ones.
+        uses_.reserve(board.parts.size() + board.offboard.size() + circuit.parts.size());
+        // Each board part is placed once, so the pool never grows past this and the spans into
+        // it stay valid.
+        pool_.reserve(PartUse::kArraysPerPin * boardPinCount(board));
+        useOfPart_.reserve(board.parts.size());
         for (std::size_t p = 0; p < board.parts.size(); ++p) {
-            RefEntry& entry = refs_.at(board.parts[p].ref);
-            if (entry.slot.index < 0) entry.slot = BoardSlot{false, static_cast<int>(p)};
+            if (p + kLookAhead < board.parts.size()) prefetchPart(board.parts[p + kLookAhead]);
+            useOfPart_.push_back(addBoardPart(board.parts[p].ref, false, p));
         }
+        useOfOffboard_.reserve(board.offboard.size());
         for (std::size_t p = 0; p < board.offboard.size(); ++p) {
-            RefEntry& entry = refs_.at(board.offboard[p].ref);
-            if (entry.slot.index < 0) entry.slot = BoardSlot{true, static_cast<int>(p)};
+            useOfOffboard_.push_back(addBoardPart(board.offboard[p].ref, true, p));
         }
-        // Each board part is placed at most once, so the pool never grows past this and the
-        // spans into it stay valid.
-        pool_.reserve(3 * boardPinCount(board));
-        uses_.reserve(circuit.parts.size());
-        for (const auto& [ref, part] : circuit.parts) get(ref).circuitPart = &part;
     }
 
-    PartUse& get(std::string_view ref) {
-        RefEntry& entry = refs_.at(ref);
-        if (entry.use < 0) {
-            entry.use = static_cast<int>(uses_.size());
-            PartUse& use = uses_.emplace_back();
-            use.ref = ref;
-            if (entry.slot.index >= 0) place(use, entry.slot);
+    /// Call once the circuit's declared parts are mentioned, before any ref only named in nets.
+    void endOfDeclaredParts() { declared_ = order_.size(); }
+
+    /// The use of a ref the circuit names.
+    PartUse& mention(std::string_view ref) { return at(mention(ref, RefTable::keyOf(ref))); }
+    int mention(std::string_view ref, const RefTable::Key& key) {
+        const int u = refs_.insert(ref, key, static_cast<int>(uses_.size()));
+        if (u == static_cast<int>(uses_.size())) uses_.emplace_back().ref = ref;
+        PartUse& use = at(u);
+        if (!use.mentioned) {
+            use.mentioned = true;
+            order_.push_back(u);
         }
-        return uses_[static_cast<std::size_t>(entry.use)];
+        return u;
     }
 
-    std::vector<PartUse>& all() { return uses_; }
-    bool mentions(std::string_view ref) const {
-        const RefEntry* entry = refs_.find(ref);
-        return entry != nullptr && entry->use >= 0;
+    PartUse& at(int u) { return uses_[static_cast<std::size_t>(u)]; }
+    const RefTable& refs() const { return refs_; }
+
+    /// Every use the circuit mentions, by ref, copied out together with its pin arrays into
+    /// memory in that order: every later pass goes through the parts by ref, and on a large board would
+    /// otherwise jump around in memory. Call once, after every ref has been mentioned.
+    std::vector<PartUse> takeMentionedByRef() {
+        // Declared parts come sorted from the circuit; only refs named just in nets need sorting.
+        if (order_.size() > declared_) {
+            std::stable_sort(order_.begin(), order_.end(),
+                             [&](int a, int b) { return at(a).ref < at(b).ref; });
+        }
+        std::size_t poolSize = 0;
+        for (int u : order_) poolSize += PartUse::kArraysPerPin * static_cast<std::size_t>(at(u).pins);
+        sortedPool_.resize(poolSize);
+        std::vector<PartUse> sorted;
+        sorted.reserve(order_.size());
+        int* pool = sortedPool_.data();
+        for (std::size_t i = 0; i < order_.size(); ++i) {
+            // The use a long way ahead, the pin arrays of one half as far (its use has arrived).
+            if (i + kLookAhead < order_.size()) prefetchLines(&at(order_[i + kLookAhead]), 2);
+            if (i + kLookAhead / 2 < order_.size()) prefetchLines(at(order_[i + kLookAhead / 2]).pool, 1);
+            PartUse& use = sorted.emplace_back(at(order_[i]));  // a copy: the flags stay behind
+            const std::size_t ints = PartUse::kArraysPerPin * static_cast<std::size_t>(use.pins);
+            if (ints > 0) std::copy(use.pool, use.pool + ints, pool);
+            use.pool = pool;
+            pool += ints;
+        }
+        return sorted;
     }
+
+    /// Whether the circuit names board part `p` (of board.parts, or of board.offboard).
+    bool mentionsPart(std::size_t p) const { return mentioned(useOfPart_[p]); }
+    bool mentionsOffboard(std::size_t p) const { return mentioned(useOfOffboard_[p]); }
 
 private:
-    std::span<int> take(std::size_t count) {
-        const std::size_t at = pool_.size();
-        pool_.resize(at + count);
-        return std::span<int>(pool_.data() + at, count);
+    // On a large board a part's table slot and pin islands are far apart in memory; asking for
+    // them a few parts ahead lets the waits overlap.
+    static constexpr std::size_t kLookAhead = 32;
+
+    void prefetchPart(const Part& part) const {
+        refs_.prefetch(RefTable::keyOf(part.ref));
+        for (const Pin& pin : part.pins) {
+            if (context_.board().contains(pin.hole)) {
+                context_.copper().prefetchNode(context_.holeIndex(pin.hole));
+            }
+        }
     }
 
-    void place(PartUse& use, BoardSlot slot) {
-        use.offboard = slot.offboard;
-        use.index = slot.index;
+    bool mentioned(int u) const { return uses_[static_cast<std::size_t>(u)].mentioned; }
+
+    int addBoardPart(std::string_view ref, bool offboard, std::size_t p) {
+        const int u = refs_.insert(ref, static_cast<int>(uses_.size()));
+        if (u == static_cast<int>(uses_.size())) {
+            PartUse& use = uses_.emplace_back();
+            use.ref = ref;
+            place(use, offboard, p);
+        }
+        return u;
+    }
+
+    void place(PartUse& use, bool offboard, std::size_t at) {
+        use.offboard = offboard;
+        use.index = static_cast<int>(at);
         const Board& board = context_.board();
-        const auto at = static_cast<std::size_t>(slot.index);
-        const std::size_t pins =
-            slot.offboard ? board.offboard[at].pins.size() : board.parts[at].pins.size();
-        use.nodes = take(pins);
-        use.net = take(pins);
-        use.nameOf = take(pins);
+        std::size_t pins = 0;
+        if (offboard) {
+            const OffboardPart& part = board.offboard[at];
+            use.board = BoardPartFacts{nullptr, part.pins.data(), &part.kind, &part.value,
+                                       ValueKey::of(part.value), findPartKind(part.kind)};
+            pins = part.pins.size();
+        } else {
+            const Part& part = board.parts[at];
+            use.board = BoardPartFacts{part.pins.data(), nullptr, &part.kind, &part.value,
+                                       ValueKey::of(part.value), findPartKind(part.kind)};
+            pins = part.pins.size();
+        }
+        use.pins = static_cast<int>(pins);
+        use.pool = pool_.data() + pool_.size();
+        pool_.resize(pool_.size() + PartUse::kArraysPerPin * pins);
+        const Connectivity& copper = context_.copper();
         for (std::size_t k = 0; k < pins; ++k) {
-            use.nodes[k] = slot.offboard ? context_.lugNode(slot.index, static_cast<int>(k))
-                                         : context_.holeIndex(board.parts[at].pins[k].hole);
-            use.net[k] = -1;
-            use.nameOf[k] = static_cast<int>(k);
+            const int node = offboard ? context_.lugNode(use.index, static_cast<int>(k))
+                                      : context_.holeIndex(use.board.pins[k].hole);
+            use.nodes()[k] = node;
+            use.islands()[k] = copper.islandOfNode(node);
+            use.net()[k] = -1;
+            use.nameOf()[k] = static_cast<int>(k);
+            use.pinKeys()[k] = static_cast<int>(PinKey::of(use.pinName(static_cast<int>(k))));
         }
     }
 
     const CheckContext& context_;
     RefTable refs_;
-    std::vector<int> pool_;
     std::vector<PartUse> uses_;
+    std::vector<int> pool_;
+    std::vector<int> useOfPart_;
+    std::vector<int> useOfOffboard_;
+    std::vector<int> order_;
+    std::size_t declared_ = 0;
+    std::vector<int> sortedPool_;
 };
 
 std::string joinNames(const std::vector<std::string>& names) {
@@ -171,15 +178,15 @@ std::string joinNames(const std::vector<std::string>& names) {
     return text;
 }
 
-std::vector<std::string> boardPinNames(const Board& board, const PartUse& use) {
+std::vector<std::string> boardPinNames(const PartUse& use) {
     std::vector<std::string> names;
-    for (int k = 0; k < use.pinCount(); ++k) names.push_back(use.pinName(board, k));
+    for (int k = 0; k < use.pinCount(); ++k) names.push_back(use.pinName(k));
     return names;
 }
 
 std::string placeText(const CheckContext& context, const PartUse& use) {
     std::vector<std::string> places;
-    for (int node : use.nodes) places.push_back(context.nodeName(node));
+    for (int node : use.nodes()) places.push_back(context.nodeName(node));
     return places.empty() ? "" : " (at " + joinNames(places) + ")";
 }
 
@@ -201,8 +208,7 @@ std::string describeCircuitPart(const PartUse& use) {
 void checkPins(const CheckContext& context, const PartUse& use, std::vector<Finding>& errors) {
     const bool declaresPins = use.circuitPart != nullptr && !use.circuitPart->pins.empty();
     if (use.unknownPins.empty() && !declaresPins) return;  // nothing to compare
-    const Board& board = context.board();
-    const std::vector<std::string> onBoard = boardPinNames(board, use);
+    const std::vector<std::string> onBoard = boardPinNames(use);
     std::string problem;
     if (!use.unknownPins.empty()) {
         problem = "the circuit uses pin" + std::string(use.unknownPins.size() > 1 ? "s " : " ") +
@@ -220,7 +226,7 @@ void checkPins(const CheckContext& context, const PartUse& use, std::vector<Find
     if (problem.empty()) return;
     Finding finding = refFinding("pin-mismatch", Severity::Error, use.ref,
                                  std::string(use.ref) + ": " + problem + placeText(context, use));
-    for (int node : use.nodes) {
+    for (int node : use.nodes()) {
         if (context.isHoleNode(node)) finding.holes.push_back(context.holeAt(node));
     }
     errors.push_back(std::move(finding));
@@ -228,12 +234,10 @@ void checkPins(const CheckContext& context, const PartUse& use, std::vector<Find
 
 void checkValue(const CheckContext& context, const PartUse& use, std::vector<Finding>& errors,
                 std::vector<Finding>& warnings) {
-    if (use.circuitPart == nullptr || use.circuitPart->value.empty()) return;
-    const Board& board = context.board();
-    const std::string& onBoard = use.value(board);
+    if (!use.valueDiffers) return;
+    const std::string& onBoard = use.value();
     const std::string& intended = use.circuitPart->value;
-    if (onBoard == intended || sameValue(onBoard, intended)) return;
-    const PartKind* kind = findPartKind(use.kind(board));
+    const PartKind* kind = use.board.known;
     if (kind == nullptr) kind = findPartKind(use.circuitPart->kind);
     const bool quantity = kind != nullptr && kind->quantity;
     const std::string shown = onBoard.empty() ? "no value" : "\"" + onBoard + "\"";
@@ -242,7 +246,7 @@ void checkValue(const CheckContext& context, const PartUse& use, std::vector<Fin
         use.ref,
         std::string(use.ref) + " is " + shown + " on the board but \"" + intended +
             "\" in the circuit" + placeText(context, use));
-    for (int node : use.nodes) {
+    for (int node : use.nodes()) {
         if (context.isHoleNode(node)) finding.holes.push_back(context.holeAt(node));
     }
     (quantity ? errors : warnings).push_back(std::move(finding));
@@ -251,8 +255,9 @@ void checkValue(const CheckContext& context, const PartUse& use, std::vector<Fin
 void reportExtraParts(const CheckContext& context, const Uses& uses, std::vector<Finding>& errors) {
     const Board& board = context.board();
     std::vector<Finding> extra;
-    for (const Part& part : board.parts) {
-        if (uses.mentions(part.ref)) continue;
+    for (std::size_t p = 0; p < board.parts.size(); ++p) {
+        if (uses.mentionsPart(p)) continue;
+        const Part& part = board.parts[p];
         Finding finding = refFinding("extra-part", Severity::Error, part.ref, "");
         std::vector<std::string> holes;
         for (const Pin& pin : part.pins) {
@@ -263,8 +268,9 @@ void reportExtraParts(const CheckContext& context, const Uses& uses, std::vector
                           joinNames(holes) + ") but not in the circuit";
         extra.push_back(std::move(finding));
     }
-    for (const OffboardPart& part : board.offboard) {
-        if (uses.mentions(part.ref)) continue;
+    for (std::size_t p = 0; p < board.offboard.size(); ++p) {
+        if (uses.mentionsOffboard(p)) continue;
+        const OffboardPart& part = board.offboard[p];
         extra.push_back(refFinding("extra-part", Severity::Error, part.ref,
                                    part.ref + " (" + part.kind +
                                        ", off the board) is wired up but not in the circuit"));
@@ -274,53 +280,116 @@ void reportExtraParts(const CheckContext& context, const Uses& uses, std::vector
     errors.insert(errors.end(), extra.begin(), extra.end());
 }
 
+// Refs are looked up in batches, in order: first the table slots of a whole batch are asked for,
+// then its uses, then their pin arrays, so on a large board the batch waits for memory three
+// times rather than three times per ref. `Finish(PartUse&, const Item&)` runs in the refs' order.
+template <typename Item, typename Finish>
+class MentionBatch {
+public:
+    MentionBatch(Uses& uses, Finish finish) : uses_(uses), finish_(std::move(finish)) {}
+
+    void add(std::string_view ref, const Item& item) {
+        const RefTable::Key key = RefTable::keyOf(ref);
+        uses_.refs().prefetch(key);
+        pending_[size_++] = Pending{ref, key, item, -1};
+        if (size_ == pending_.size()) flush();
+    }
+
+    void flush() {
+        for (std::size_t i = 0; i < size_; ++i) {
+            Pending& p = pending_[i];
+            p.use = uses_.mention(p.ref, p.key);
+            prefetchLines(&uses_.at(p.use), 2);
+        }
+        for (std::size_t i = 0; i < size_; ++i) __builtin_prefetch(uses_.at(pending_[i].use).pool);
+        for (std::size_t i = 0; i < size_; ++i) finish_(uses_.at(pending_[i].use), pending_[i].item);
+        size_ = 0;
+    }
+
+private:
+    struct Pending {
+        std::string_view ref;
+        RefTable::Key key;
+        Item item;
+        int use;
+    };
+
+    Uses& uses_;
+    Finish finish_;
+    std::array<Pending, 16> pending_{};
+    std::size_t size_ = 0;
+};
+
+// Declared parts: their circuit entries, and whether their values differ from the board's.
+void declareParts(const Circuit& circuit, Uses& uses) {
+    auto declare = [](PartUse& use, const CircuitPart* part) {
+        use.circuitPart = part;
+        use.valueDiffers = use.found() && !part->value.empty() && !use.valueIs(part->value) &&
+                           !sameValue(use.value(), part->value);
+    };
+    MentionBatch<const CircuitPart*, decltype(declare)> batch(uses, declare);
+    for (const auto& [ref, part] : circuit.parts) batch.add(ref, &part);
+    batch.flush();
+    uses.endOfDeclaredParts();
+}
+
 // Puts every net pin on its board pin; unknown pins are noted for pin-mismatch.
-std::vector<std::string> assignNets(const CheckContext& context, const Circuit& circuit,
-                                    Uses& uses) {
-    std::vector<std::string> names;
+std::vector<std::string_view> assignNets(const Circuit& circuit, Uses& uses) {
+    std::vector<std::string_view> names;
     names.reserve(circuit.nets.size());
+    struct PinOfNet {
+        const std::string* pin;
+        int net;
+    };
+    auto assign = [](PartUse& use, const PinOfNet& at) {
+        if (!use.found()) return;
+        const int k = use.findPin(*at.pin);
+        if (k < 0) {
+            use.unknownPins.push_back(*at.pin);
+        } else if (use.net()[static_cast<std::size_t>(k)] < 0) {
+            use.net()[static_cast<std::size_t>(k)] = at.net;
+        }
+    };
+    MentionBatch<PinOfNet, decltype(assign)> batch(uses, assign);
     for (const auto& [name, pins] : circuit.nets) {
         const int net = static_cast<int>(names.size());
         names.push_back(name);
-        for (const PinRef& pin : pins) {
-            PartUse& use = uses.get(pin.ref);
-            if (!use.found()) continue;
-            const int k = use.findPin(context.board(), pin.pin);
-            if (k < 0) {
-                use.unknownPins.push_back(pin.pin);
-            } else if (use.net[static_cast<std::size_t>(k)] < 0) {
-                use.net[static_cast<std::size_t>(k)] = net;
-            }
-        }
+        for (const PinRef& pin : pins) batch.add(pin.ref, PinOfNet{&pin.pin, net});
     }
+    batch.flush();
     return names;
 }
 
-std::vector<PlacedNet> placeNets(const Board& board, const std::vector<PartUse>& uses,
-                                 std::vector<std::string> names) {
-    std::vector<PlacedNet> nets(names.size());
-    std::vector<std::size_t> sizes(names.size(), 0);
+// The pins of every net, net after net in one array (a counting sort by net), each net's pins in
+// the order of the parts' refs.
+void placeNets(const std::vector<PartUse>& uses, const std::vector<std::string_view>& names,
+               CircuitMatch& match) {
+    std::vector<std::size_t> start(names.size() + 1, 0);
     for (const PartUse& use : uses) {
         if (!use.found() || !use.unknownPins.empty()) continue;
-        for (int net : use.net) {
-            if (net >= 0) ++sizes[static_cast<std::size_t>(net)];
+        for (int net : use.net()) {
+            if (net >= 0) ++start[static_cast<std::size_t>(net) + 1];
         }
     }
-    for (std::size_t n = 0; n < names.size(); ++n) {
-        nets[n].name = std::move(names[n]);
-        nets[n].pins.reserve(sizes[n]);
-    }
+    for (std::size_t n = 0; n < names.size(); ++n) start[n + 1] += start[n];
+    match.netPins.resize(start.back());
+    std::vector<std::size_t> next(start.begin(), start.end() - 1);
     for (const PartUse& use : uses) {
         if (!use.found() || !use.unknownPins.empty()) continue;
         for (int k = 0; k < use.pinCount(); ++k) {
             const auto at = static_cast<std::size_t>(k);
-            if (use.net[at] < 0) continue;
-            nets[static_cast<std::size_t>(use.net[at])].pins.push_back(
-                NetPin{PinRef{std::string(use.ref), use.pinName(board, use.nameOf[at])},
-                       use.nodes[at]});
+            const int net = use.net()[at];
+            if (net < 0) continue;
+            match.netPins[next[static_cast<std::size_t>(net)]++] =
+                NetPin{use.ref, &use.pinName(use.nameOf()[at]), use.nodes()[at], use.islands()[at]};
         }
     }
-    return nets;
+    match.nets.resize(names.size());
+    for (std::size_t n = 0; n < names.size(); ++n) {
+        match.nets[n].name = names[n];
+        match.nets[n].pins = std::span<const NetPin>(match.netPins.data() + start[n],
+                                                     start[n + 1] - start[n]);
+    }
 }
 
 }  // namespace
@@ -328,13 +397,9 @@ std::vector<PlacedNet> placeNets(const Board& board, const std::vector<PartUse>&
 CircuitMatch matchCircuit(const CheckContext& context, const Circuit& circuit) {
     CircuitMatch match;
     Uses uses(context, circuit);
-    std::vector<std::string> names = assignNets(context, circuit, uses);
-    std::vector<PartUse>& all = uses.all();
-    // Declared parts come sorted from the circuit; only refs named just in nets need sorting.
-    auto byRef = [](const PartUse& a, const PartUse& b) { return a.ref < b.ref; };
-    if (!std::is_sorted(all.begin(), all.end(), byRef)) {
-        std::stable_sort(all.begin(), all.end(), byRef);
-    }
+    declareParts(circuit, uses);
+    const std::vector<std::string_view> names = assignNets(circuit, uses);
+    std::vector<PartUse> all = uses.takeMentionedByRef();
     for (const PartUse& use : all) {
         if (use.found()) continue;
         match.errors.push_back(refFinding("missing-part", Severity::Error, use.ref,
@@ -344,16 +409,16 @@ CircuitMatch matchCircuit(const CheckContext& context, const Circuit& circuit) {
     reportExtraParts(context, uses, match.errors);
     for (PartUse& use : all) {
         if (!use.found()) continue;
-        std::sort(use.unknownPins.begin(), use.unknownPins.end());
-        use.unknownPins.erase(std::unique(use.unknownPins.begin(), use.unknownPins.end()),
-                              use.unknownPins.end());
+        std::vector<std::string>& unknown = use.unknownPins;
+        std::sort(unknown.begin(), unknown.end());
+        unknown.erase(std::unique(unknown.begin(), unknown.end()), unknown.end());
         checkPins(context, use, match.errors);
     }
     for (const PartUse& use : all) {
         if (use.found()) checkValue(context, use, match.errors, match.warnings);
     }
     orientParts(context, all, names, match.errors, match.warnings);
-    match.nets = placeNets(context.board(), all, std::move(names));
+    placeNets(all, names, match);
     return match;
 }
 

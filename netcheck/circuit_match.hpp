@@ -3,7 +3,9 @@
 // (private to the checker).
 #pragma once
 
+#include <span>
 #include <string>
+#include <string_view>
 #include <vector>
 
 #include "check_context.hpp"
@@ -12,22 +14,40 @@
 
 namespace netcheck {
 
-/// A pin of an intended net as placed on the board: the circuit's name for it and its node.
+/// A pin of an intended net as placed on the board: the circuit's name for it, its node and its
+/// island. The names point into the circuit and the board, which outlive the check.
 struct NetPin {
-    PinRef pin;
+    std::string_view ref;
+    const std::string* pin = nullptr;
     int node = 0;
+    int island = 0;
+
+    PinRef pinRef() const { return PinRef{std::string(ref), *pin}; }
+    std::string name() const { return std::string(ref) + "." + *pin; }
+    /// The order of PinRef: by ref, then by pin name.
+    bool operator<(const NetPin& other) const {
+        return ref != other.ref ? ref < other.ref : *pin < *other.pin;
+    }
 };
 
 /// An intended net with the pins the board actually has (pins of missing parts left out).
 struct PlacedNet {
-    std::string name;
-    std::vector<NetPin> pins;
+    std::string_view name;
+    std::span<const NetPin> pins;  ///< into CircuitMatch::netPins
 };
 
 struct CircuitMatch {
     std::vector<Finding> errors;    ///< part findings, by ref
     std::vector<Finding> warnings;  ///< value-differs, pot-reversed
     std::vector<PlacedNet> nets;    ///< in circuit order (sorted by name)
+    std::vector<NetPin> netPins;    ///< the pins of every net, net after net
+
+    // The nets point into netPins: moving keeps them valid, a copy would not.
+    CircuitMatch() = default;
+    CircuitMatch(CircuitMatch&&) = default;
+    CircuitMatch& operator=(CircuitMatch&&) = default;
+    CircuitMatch(const CircuitMatch&) = delete;
+    CircuitMatch& operator=(const CircuitMatch&) = delete;
 };
 
 /// Matches the board's parts and pins to `circuit`.

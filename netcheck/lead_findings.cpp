@@ -3,6 +3,7 @@
 #include "lead_findings.hpp"
 
 #include <algorithm>
+#include <cmath>
 #include <cstdio>
 
 namespace netcheck {
@@ -23,10 +24,16 @@ std::string plural(int count, const std::string& word) {
     return std::to_string(count) + " " + word + (count == 1 ? "" : "s");
 }
 
+// One decimal, rounded half away from zero (the editor re-checks on every edit, and printf's
+// float formatting costs more than the rest of a small board's check).
 std::string millimetres(double value) {
-    char text[32];
-    std::snprintf(text, sizeof text, "%.1f", value);
-    return text;
+    if (!(value >= 0 && value < 1e15)) {  // absurd pitches still print
+        char text[32];
+        std::snprintf(text, sizeof text, "%.1f", value);
+        return text;
+    }
+    const long long tenths = std::llround(value * 10);
+    return std::to_string(tenths / 10) + "." + std::to_string(tenths % 10);
 }
 
 }  // namespace
@@ -55,7 +62,7 @@ void findSharedHoles(const CheckContext& context, std::vector<Finding>& errors) 
 void findLeadsOnCuts(const CheckContext& context, std::vector<Finding>& errors) {
     std::vector<const Lead*> onCuts;
     for (const Lead& lead : context.leads()) {
-        if (context.copper().isHoleCut(context.holeAt(lead.hole))) onCuts.push_back(&lead);
+        if (lead.onCut) onCuts.push_back(&lead);
     }
     std::stable_sort(onCuts.begin(), onCuts.end(),
                      [](const Lead* a, const Lead* b) { return a->hole < b->hole; });
@@ -75,7 +82,7 @@ void findDanglingLeads(const CheckContext& context, const std::vector<char>* onl
     auto islandAt = [&](int node) { return static_cast<std::size_t>(copper.islandOfNode(node)); };
     for (const Lead& lead : context.leads()) {
         // A link or wire end makes the island more than a lone lead.
-        pins[islandAt(lead.hole)] += lead.kind == Lead::Kind::PartPin ? 1 : 2;
+        pins[static_cast<std::size_t>(lead.island)] += lead.kind == Lead::Kind::PartPin ? 1 : 2;
     }
     for (std::size_t p = 0; p < board.offboard.size(); ++p) {
         for (std::size_t k = 0; k < board.offboard[p].pins.size(); ++k) {
@@ -90,7 +97,7 @@ void findDanglingLeads(const CheckContext& context, const std::vector<char>* onl
     }
     std::vector<const Lead*> lonely;
     for (const Lead& lead : context.leads()) {
-        const std::size_t island = islandAt(lead.hole);
+        const auto island = static_cast<std::size_t>(lead.island);
         if (pins[island] != 1) continue;
         if (onlyIslands != nullptr && !(*onlyIslands)[island]) continue;
         lonely.push_back(&lead);

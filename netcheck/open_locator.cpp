@@ -34,11 +34,11 @@ std::vector<Piece> splitIntoPieces(const CheckContext& context, const PlacedNet&
     std::vector<Piece> pieces;
     for (auto& [island, piece] : byIsland) {
         std::sort(piece.pins.begin(), piece.pins.end(),
-                  [](const NetPin* a, const NetPin* b) { return a->pin < b->pin; });
+                  [](const NetPin* a, const NetPin* b) { return *a < *b; });
         pieces.push_back(std::move(piece));
     }
     std::sort(pieces.begin(), pieces.end(), [](const Piece& a, const Piece& b) {
-        return a.pins.front()->pin < b.pins.front()->pin;
+        return *a.pins.front() < *b.pins.front();
     });
     return pieces;
 }
@@ -157,7 +157,7 @@ std::string piecesText(const CheckContext& context, const std::vector<Piece>& pi
         if (!text.empty()) text += " | ";
         std::string pins;
         for (const NetPin* pin : piece.pins) {
-            pins += (pins.empty() ? "" : ", ") + pin->pin.name();
+            pins += (pins.empty() ? "" : ", ") + pin->name();
             if (context.isHoleNode(pin->node)) pins += " (" + context.nodeName(pin->node) + ")";
         }
         text += pins;
@@ -171,15 +171,15 @@ Finding locateOpen(const CheckContext& context, const PlacedNet& net, const Repa
     std::vector<Piece> pieces = splitIntoPieces(context, net);
     Finding finding;
     finding.type = "open";
-    finding.net = net.name;
+    finding.net = std::string(net.name);
     for (const Piece& piece : pieces) {
         std::vector<PinRef>& pins = finding.pieces.emplace_back();
         for (const NetPin* pin : piece.pins) {
-            pins.push_back(pin->pin);
+            pins.push_back(pin->pinRef());
             if (context.isHoleNode(pin->node)) finding.holes.push_back(context.holeAt(pin->node));
         }
     }
-    finding.message = net.name + " is in " + std::to_string(pieces.size()) +
+    finding.message = std::string(net.name) + " is in " + std::to_string(pieces.size()) +
                       " pieces: " + piecesText(context, pieces);
     if (const std::optional<Cut> cut = misplacedCut(context, net, repaired)) {
         finding.fix = "remove the cut at " + cutName(*cut);

@@ -17,14 +17,13 @@ namespace {
 
 enum class Freedom { Fixed, EndForEnd, PotEnds, Polarised2, Polarised3 };
 
-Freedom freedomOf(const Board& board, const PartUse& use) {
+Freedom freedomOf(const PartUse& use) {
     if (!use.found() || !use.unknownPins.empty()) return Freedom::Fixed;
-    const std::string& kindName = use.kind(board);
-    const PartKind* kind = findPartKind(kindName);
+    const PartKind* kind = use.board.known;
     if (kind == nullptr) return Freedom::Fixed;  // unknown kinds match pin names exactly
-    if (kindName == "pot" || kindName == "trimmer") {
-        const bool hasLugs = use.findPin(board, "1") >= 0 && use.findPin(board, "2") >= 0 &&
-                             use.findPin(board, "3") >= 0;
+    if (kind->name == "pot" || kind->name == "trimmer") {
+        const bool hasLugs =
+            use.findPin("1") >= 0 && use.findPin("2") >= 0 && use.findPin("3") >= 0;
         return hasLugs ? Freedom::PotEnds : Freedom::Fixed;
     }
     if (use.offboard) return Freedom::Fixed;
@@ -37,10 +36,7 @@ Freedom freedomOf(const Board& board, const PartUse& use) {
 
 // How many pins of each intended net sit in each island. Most islands carry one net, so the count
 // lives in per-island arrays; only pins of a second net in an island go to a hash map.
-// Island of pin `pin` of a part.
-int islandOfPin(const Connectivity& copper, const PartUse& use, int pin) {
-    return copper.islandOfNode(use.nodes[static_cast<std::size_t>(pin)]);
-}
+int islandOf(const PartUse& use, int pin) { return use.islands()[static_cast<std::size_t>(pin)]; }
 
 // One sortable number for a (net, island) pair.
 std::uint64_t key(int net, int island) {
@@ -50,17 +46,16 @@ std::uint64_t key(int net, int island) {
 
 class NetCounts {
 public:
-    NetCounts(const Connectivity& copper, const std::vector<PartUse>& uses, int netCount)
-        : copper_(copper),
-          firstNet_(static_cast<std::size_t>(copper.islandCount()), -1),
-          firstCount_(static_cast<std::size_t>(copper.islandCount()), 0),
+    NetCounts(int islandCount, const std::vector<PartUse>& uses, int netCount)
+        : firstNet_(static_cast<std::size_t>(islandCount), -1),
+          firstCount_(static_cast<std::size_t>(islandCount), 0),
           totals_(static_cast<std::size_t>(netCount), 0) {
         for (const PartUse& use : uses) add(use, +1);
     }
 
     void add(const PartUse& use, int delta) {
         for (int k = 0; k < use.pinCount(); ++k) {
-            const int net = use.net[static_cast<std::size_t>(k)];
+            const int net = use.net()[static_cast<std::size_t>(k)];
             if (net < 0) continue;
             slot(net, islandOf(use, k)) += delta;
             totals_[static_cast<std::size_t>(net)] += delta;
@@ -68,7 +63,7 @@ public:
     }
 
     int at(const PartUse& use, int pin) const {
-        const int net = use.net[static_cast<std::size_t>(pin)];
+        const int net = use.net()[static_cast<std::size_t>(pin)];
         if (net < 0) return 0;
         const int island = islandOf(use, pin);
         if (firstNet_[static_cast<std::size_t>(island)] == net) {
@@ -94,8 +89,6 @@ private:
         if (first == net) return firstCount_[static_cast<std::size_t>(island)];
         return others_[key(net, island)];
     }
-    int islandOf(const PartUse& use, int pin) const { return islandOfPin(copper_, use, pin); }
-    const Connectivity& copper_;
     std::vector<int> firstNet_;
     std::vector<int> firstCount_;
     std::unordered_map<std::uint64_t, int> others_;
@@ -106,13 +99,13 @@ private:
 // as the placement does.
 bool clearlyBetter(int other, int placed) { return other >= 2 && other > 2 * placed; }
 
-std::string partLabel(const Board& board, const PartUse& use) {
-    return std::string(use.ref) + " (" + use.kind(board) + ")";
+std::string partLabel(const PartUse& use) {
+    return std::string(use.ref) + " (" + use.kind() + ")";
 }
 
 std::vector<Hole> partHoles(const CheckContext& context, const PartUse& use) {
     std::vector<Hole> holes;
-    for (int node : use.nodes) {
+    for (int node : use.nodes()) {
         if (context.isHoleNode(node)) holes.push_back(context.holeAt(node));
     }
     return holes;
@@ -134,13 +127,11 @@ Finding partFinding(std::string type, Severity severity, const CheckContext& con
 // are kept sorted, so a count is the length of a run of equal keys.
 class FlexibleCounts {
 public:
-    FlexibleCounts(const Connectivity& copper, const std::vector<PartUse>& uses,
-                   const std::vector<Freedom>& freedom)
-        : copper_(copper) {
+    FlexibleCounts(const std::vector<PartUse>& uses, const std::vector<Freedom>& freedom) {
         for (std::size_t u = 0; u < uses.size(); ++u) {
             if (freedom[u] != Freedom::EndForEnd) continue;
             for (int k = 0; k < 2; ++k) {
-                for (int net : uses[u].net) {
+                for (int net : uses[u].net()) {
                     if (net >= 0) keys_.push_back(key(net, islandOf(uses[u], k)));
                 }
             }
@@ -152,7 +143,7 @@ public:
     int score(const PartUse& use) const {
         int total = 0;
         for (int k = 0; k < 2; ++k) {
-            const int net = use.net[static_cast<std::size_t>(k)];
+            const int net = use.net()[static_cast<std::size_t>(k)];
             if (net < 0) continue;
             const auto [first, last] =
                 std::equal_range(keys_.begin(), keys_.end(), key(net, islandOf(use, k)));
@@ -165,24 +156,20 @@ public:
     }
 
 private:
-    int islandOf(const PartUse& use, int pin) const { return islandOfPin(copper_, use, pin); }
-    const Connectivity& copper_;
     std::vector<std::uint64_t> keys_;
 };
 
 // The flexible counts are only needed on a tie, so they are built on the first one.
 class LazyFlexibleCounts {
 public:
-    LazyFlexibleCounts(const Connectivity& copper, const std::vector<PartUse>& uses,
-                       const std::vector<Freedom>& freedom)
-        : copper_(copper), uses_(uses), freedom_(freedom) {}
+    LazyFlexibleCounts(const std::vector<PartUse>& uses, const std::vector<Freedom>& freedom)
+        : uses_(uses), freedom_(freedom) {}
     const FlexibleCounts& get() {
-        if (!counts_) counts_.emplace(copper_, uses_, freedom_);
+        if (!counts_) counts_.emplace(uses_, freedom_);
         return *counts_;
     }
 
 private:
-    const Connectivity& copper_;
     const std::vector<PartUse>& uses_;
     const std::vector<Freedom>& freedom_;
     std::optional<FlexibleCounts> counts_;
@@ -194,7 +181,7 @@ void chooseEndForEnd(PartUse& use, NetCounts& counts, LazyFlexibleCounts& flexib
     use.swapPins(0, 1);
     const int swapped = counts.score(use);
     bool better = swapped > placed;
-    if (swapped == placed && use.net[0] != use.net[1]) {
+    if (swapped == placed && use.net()[0] != use.net()[1]) {
         const int swappedFlexible = flexible.get().score(use);
         use.swapPins(0, 1);
         better = swappedFlexible > flexible.get().score(use);
@@ -205,26 +192,25 @@ void chooseEndForEnd(PartUse& use, NetCounts& counts, LazyFlexibleCounts& flexib
 }
 
 void checkPot(const CheckContext& context, PartUse& use, NetCounts& counts,
-              const std::vector<std::string>& netNames, std::vector<Finding>& warnings) {
-    const Board& board = context.board();
-    const int one = use.findPin(board, "1");
-    const int wiper = use.findPin(board, "2");
-    const int three = use.findPin(board, "3");
+              const std::vector<std::string_view>& netNames, std::vector<Finding>& warnings) {
+    const int one = use.findPin("1");
+    const int wiper = use.findPin("2");
+    const int three = use.findPin("3");
     counts.add(use, -1);
     const int placed = counts.score(use);
-    const int wiperNet = use.net[static_cast<std::size_t>(wiper)];
+    const int wiperNet = use.net()[static_cast<std::size_t>(wiper)];
     const bool wiperRight = counts.at(use, wiper) > 0 || counts.total(wiperNet) == 0;
     use.swapPins(one, three);
     const int swapped = counts.score(use);
     if (swapped > placed && wiperRight) {
-        const int net1 = use.net[static_cast<std::size_t>(one)];
-        const int net3 = use.net[static_cast<std::size_t>(three)];
-        auto netLabel = [&](int net) { return net < 0 ? std::string("nothing") : "net " + netNames[static_cast<std::size_t>(net)]; };
+        const int net1 = use.net()[static_cast<std::size_t>(one)];
+        const int net3 = use.net()[static_cast<std::size_t>(three)];
+        auto netLabel = [&](int net) { return net < 0 ? std::string("nothing") : "net " + std::string(netNames[static_cast<std::size_t>(net)]); };
         warnings.push_back(partFinding(
             "pot-reversed", Severity::Warning, context, use,
-            partLabel(board, use) + " end lugs 1 and 3 are swapped against the circuit: " +
-                context.nodeName(use.nodes[static_cast<std::size_t>(one)]) + " is on " +
-                netLabel(net1) + ", " + context.nodeName(use.nodes[static_cast<std::size_t>(three)]) +
+            partLabel(use) + " end lugs 1 and 3 are swapped against the circuit: " +
+                context.nodeName(use.nodes()[static_cast<std::size_t>(one)]) + " is on " +
+                netLabel(net1) + ", " + context.nodeName(use.nodes()[static_cast<std::size_t>(three)]) +
                 " on " + netLabel(net3) + " (the control works backwards)"));
     } else {
         use.swapPins(one, three);
@@ -233,24 +219,23 @@ void checkPot(const CheckContext& context, PartUse& use, NetCounts& counts,
 }
 
 void checkPolarised2(const CheckContext& context, PartUse& use, NetCounts& counts,
-                     const std::vector<std::string>& netNames, std::vector<Finding>& errors) {
+                     const std::vector<std::string_view>& netNames, std::vector<Finding>& errors) {
     counts.add(use, -1);
     const int placed = counts.score(use);
     use.swapPins(0, 1);
     const int swapped = counts.score(use);
-    const int netAtFirst = use.net[0];
+    const int netAtFirst = use.net()[0];
     use.swapPins(0, 1);
     counts.add(use, +1);
     if (!clearlyBetter(swapped, placed)) return;
-    const Board& board = context.board();
     const std::string carries = netAtFirst < 0
                                     ? "where the other lead belongs"
                                     : "which carries net " +
-                                          netNames[static_cast<std::size_t>(netAtFirst)];
+                                          std::string(netNames[static_cast<std::size_t>(netAtFirst)]);
     errors.push_back(partFinding("reversed-part", Severity::Error, context, use,
-                                 partLabel(board, use) + " looks reversed: " +
-                                     use.pinName(board, 0) + " is in " +
-                                     context.nodeName(use.nodes[0]) + ", " + carries));
+                                 partLabel(use) + " looks reversed: " +
+                                     use.pinName(0) + " is in " +
+                                     context.nodeName(use.nodes()[0]) + ", " + carries));
 }
 
 std::string pinList(const CheckContext& context, const PartUse& use,
@@ -258,8 +243,8 @@ std::string pinList(const CheckContext& context, const PartUse& use,
     std::string text;
     for (int k = 0; k < 3; ++k) {
         if (k > 0) text += ", ";
-        text += use.pinName(context.board(), order[static_cast<std::size_t>(k)]) + " in " +
-                context.nodeName(use.nodes[static_cast<std::size_t>(k)]);
+        text += use.pinName(order[static_cast<std::size_t>(k)]) + " in " +
+                context.nodeName(use.nodes()[static_cast<std::size_t>(k)]);
     }
     return text;
 }
@@ -267,25 +252,25 @@ std::string pinList(const CheckContext& context, const PartUse& use,
 void checkPolarised3(const CheckContext& context, PartUse& use, NetCounts& counts,
                      std::vector<Finding>& errors) {
     counts.add(use, -1);
-    const std::array<int, 3> placedNets{use.net[0], use.net[1], use.net[2]};
+    const std::array<int, 3> placedNets{use.net()[0], use.net()[1], use.net()[2]};
     const int placed = counts.score(use);
     std::array<int, 3> order{0, 1, 2};
     std::array<int, 3> best = order;
     int bestScore = placed;
     while (std::next_permutation(order.begin(), order.end())) {
-        for (std::size_t k = 0; k < 3; ++k) use.net[k] = placedNets[static_cast<std::size_t>(order[k])];
+        for (std::size_t k = 0; k < 3; ++k) use.net()[k] = placedNets[static_cast<std::size_t>(order[k])];
         const int score = counts.score(use);
         if (score > bestScore) {
             bestScore = score;
             best = order;
         }
     }
-    std::copy(placedNets.begin(), placedNets.end(), use.net.begin());
+    std::copy(placedNets.begin(), placedNets.end(), use.net().begin());
     counts.add(use, +1);
     if (!clearlyBetter(bestScore, placed)) return;
     const std::array<int, 3> asPlaced{0, 1, 2};
     errors.push_back(partFinding("reversed-part", Severity::Error, context, use,
-                                 partLabel(context.board(), use) +
+                                 partLabel(use) +
                                      " pins look out of order: the copper fits " +
                                      pinList(context, use, best) + " (placed: " +
                                      pinList(context, use, asPlaced) + ")"));
@@ -294,20 +279,19 @@ void checkPolarised3(const CheckContext& context, PartUse& use, NetCounts& count
 }  // namespace
 
 void orientParts(const CheckContext& context, std::vector<PartUse>& uses,
-                 const std::vector<std::string>& netNames, std::vector<Finding>& errors,
+                 const std::vector<std::string_view>& netNames, std::vector<Finding>& errors,
                  std::vector<Finding>& warnings) {
-    const Board& board = context.board();
     std::vector<Freedom> freedom;
     freedom.reserve(uses.size());
     bool any = false;
     for (const PartUse& use : uses) {
-        freedom.push_back(freedomOf(board, use));
+        freedom.push_back(freedomOf(use));
         any = any || freedom.back() != Freedom::Fixed;
     }
     if (!any) return;
-    NetCounts counts(context.copper(), uses, static_cast<int>(netNames.size()));
+    NetCounts counts(context.copper().islandCount(), uses, static_cast<int>(netNames.size()));
     // Flexible counts do not depend on orientation, so building them late changes nothing.
-    LazyFlexibleCounts flexible(context.copper(), uses, freedom);
+    LazyFlexibleCounts flexible(uses, freedom);
     // Two rounds, so a part flipped in the first round is seen by its neighbours in the second.
     for (int round = 0; round < 2; ++round) {
         for (std::size_t u = 0; u < uses.size(); ++u) {

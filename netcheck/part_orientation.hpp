@@ -4,6 +4,7 @@
 #pragma once
 
 #include <string>
+#include <string_view>
 #include <vector>
 
 #include "check_context.hpp"
@@ -14,7 +15,7 @@ namespace netcheck {
 
 /// Orients `uses` in place and appends reversed-part errors and pot-reversed warnings.
 void orientParts(const CheckContext& context, std::vector<PartUse>& uses,
-                 const std::vector<std::string>& netNames, std::vector<Finding>& errors,
+                 const std::vector<std::string_view>& netNames, std::vector<Finding>& errors,
                  std::vector<Finding>& warnings);
 
 }  // namespace netcheck

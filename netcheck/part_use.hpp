@@ -2,56 +2,96 @@
 // meant to carry (private to the checker).
 #pragma once
 
+#include <cstdint>
 #include <span>
 #include <string>
 #include <string_view>
 #include <vector>
 
 #include "board.hpp"
-#include "check_context.hpp"
 #include "circuit.hpp"
+#include "packed_name.hpp"
+#include "part_kinds.hpp"
 
 namespace netcheck {
 
-/// The three per-pin spans point into one pool owned by the matcher, so placing a part allocates
-/// nothing of its own.
+/// What the board says of a placed part, read once in the board's order: later passes go
+/// through the circuit's order, and reading the board again there would jump around in memory.
+struct BoardPartFacts {
+    const Pin* pins = nullptr;              ///< on-board pins (null for an off-board part)
+    const std::string* lugs = nullptr;      ///< off-board lug names (null for an on-board part)
+    const std::string* kind = nullptr;
+    const std::string* value = nullptr;
+    std::uint64_t valueKey = 0;             ///< ValueKey of *value
+    const PartKind* known = nullptr;        ///< the kind's table row; null for unknown kinds
+};
+
+using PinKey = PackedName<std::uint32_t>;
+using ValueKey = PackedName<std::uint64_t>;
+
+/// A board part, or a ref the circuit names that the board lacks. Its per-pin arrays lie side by
+/// side in one pool owned by the matcher, so placing a part allocates nothing of its own and a
+/// part's pins share a cache line or two.
 struct PartUse {
+    static constexpr int kArraysPerPin = 5;
+
+    // What a net pin's lookup reads comes first, in one cache line.
     std::string_view ref;
-    const CircuitPart* circuitPart = nullptr;  ///< null when the ref only appears in nets
-    bool offboard = false;                     ///< board part is in board.offboard
+    int* pool = nullptr;                       ///< kArraysPerPin * pins ints
+    int pins = 0;                              ///< number of board pins
     int index = -1;                            ///< index into board.parts / board.offboard; -1 missing
-    std::span<int> nodes;                      ///< node of each board pin, in board pin order
-    std::span<int> net;                        ///< intended net at each board pin, -1 = don't care
-    std::span<int> nameOf;                     ///< the circuit's name at each board pin (a pin index)
+    bool mentioned = false;                    ///< the circuit names this ref
+    bool offboard = false;                     ///< board part is in board.offboard
+    bool valueDiffers = false;                 ///< board and circuit values differ (when found)
+    const CircuitPart* circuitPart = nullptr;  ///< null when the ref only appears in nets
+    BoardPartFacts board;                      ///< valid when found()
     std::vector<std::string> unknownPins;      ///< pins the circuit uses that the board part lacks
 
+    /// Node of each board pin, in board pin order.
+    std::span<int> nodes() const { return array(0); }
+    /// Island of each board pin.
+    std::span<int> islands() const { return array(1); }
+    /// Intended net at each board pin, -1 = don't care.
+    std::span<int> net() const { return array(2); }
+    /// The circuit's name at each board pin (a pin index).
+    std::span<int> nameOf() const { return array(3); }
+    /// PinKey of each board pin name.
+    std::span<int> pinKeys() const { return array(4); }
+
     bool found() const { return index >= 0; }
-    int pinCount() const { return static_cast<int>(nodes.size()); }
+    int pinCount() const { return pins; }
+    const std::string& kind() const { return *board.kind; }
+    const std::string& value() const { return *board.value; }
+    /// Whether the board value is `text` as written (without reading the board when both are
+    /// short).
+    bool valueIs(const std::string& text) const {
+        const std::uint64_t key = ValueKey::of(text);
+        if (key != ValueKey::kLong || board.valueKey != ValueKey::kLong) return key == board.valueKey;
+        return value() == text;
+    }
     /// Board pin name at `pin`.
-    const std::string& pinName(const Board& board, int pin) const {
+    const std::string& pinName(int pin) const {
         const auto at = static_cast<std::size_t>(pin);
-        return offboard ? board.offboard[static_cast<std::size_t>(index)].pins[at]
-                        : board.parts[static_cast<std::size_t>(index)].pins[at].name;
-    }
-    const std::string& kind(const Board& board) const {
-        const auto at = static_cast<std::size_t>(index);
-        return offboard ? board.offboard[at].kind : board.parts[at].kind;
-    }
-    const std::string& value(const Board& board) const {
-        const auto at = static_cast<std::size_t>(index);
-        return offboard ? board.offboard[at].value : board.parts[at].value;
+        return board.pins != nullptr ? board.pins[at].name : board.lugs[at];
     }
     /// Board pin index of a pin name; -1 when the part has no such pin.
-    int findPin(const Board& board, std::string_view name) const {
+    int findPin(std::string_view name) const {
+        const auto key = static_cast<int>(PinKey::of(name));
         for (int k = 0; k < pinCount(); ++k) {
-            if (pinName(board, k) == name) return k;
+            if (pinKeys()[static_cast<std::size_t>(k)] != key) continue;
+            if (key != static_cast<int>(PinKey::kLong) || pinName(k) == name) return k;
         }
         return -1;
     }
     /// Swaps what the circuit expects at two board pins (the part placed the other way round).
     void swapPins(int a, int b) {
-        std::swap(net[static_cast<std::size_t>(a)], net[static_cast<std::size_t>(b)]);
-        std::swap(nameOf[static_cast<std::size_t>(a)], nameOf[static_cast<std::size_t>(b)]);
+        std::swap(net()[static_cast<std::size_t>(a)], net()[static_cast<std::size_t>(b)]);
+        std::swap(nameOf()[static_cast<std::size_t>(a)], nameOf()[static_cast<std::size_t>(b)]);
+    }
+
+private:
+    std::span<int> array(int which) const {
+        return std::span<int>(pool + which * pins, static_cast<std::size_t>(pins));
     }
 };
 

@@ -172,7 +172,7 @@ std::optional<Cut> suggestCut(const CheckContext& context, const std::vector<int
 }
 
 std::string pinText(const CheckContext& context, const PinAt& pin) {
-    const std::string name = pin.pin->pin.name();
+    const std::string name = pin.pin->name();
     return context.isHoleNode(pin.pin->node) ? name + " (" + context.nodeName(pin.pin->node) + ")"
                                              : name + " (off board)";
 }
@@ -214,7 +214,7 @@ Finding locateShort(const CheckContext& context, int island,
                     const std::vector<const PlacedNet*>& nets) {
     Finding finding;
     finding.type = "short";
-    for (const PlacedNet* net : nets) finding.nets.push_back(net->name);
+    for (const PlacedNet* net : nets) finding.nets.emplace_back(net->name);
     std::unordered_map<int, std::vector<PinAt>> pinsAt;
     const Connectivity& copper = context.copper();
     for (std::size_t n = 0; n < nets.size(); ++n) {
