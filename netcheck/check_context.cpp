@@ -10,7 +10,7 @@ CheckContext::CheckContext(const Board& board)
     auto add = [&](Lead::Kind kind, int item, int sub, Hole hole) {
         if (!board.contains(hole)) return;
         const int index = holeIndex(hole);
-        leads_.push_back(Lead{kind, item, sub, index});
+        leads_.push_back(Lead{kind, item, sub, index, 0, copper_.isHoleCut(hole)});
         unsigned char& count = leadCount_[static_cast<std::size_t>(index)];
         if (count < 255) ++count;
     };
@@ -18,11 +18,15 @@ CheckContext::CheckContext(const Board& board)
     for (const Part& part : board.parts) leadCount += part.pins.size();
     leads_.reserve(leadCount);
     lugBase_.reserve(board.offboard.size());
+    firstLeadOfPart_.reserve(board.parts.size());
     for (std::size_t p = 0; p < board.parts.size(); ++p) {
         const auto& pins = board.parts[p].pins;
+        const std::size_t first = leads_.size();
         for (std::size_t k = 0; k < pins.size(); ++k) {
             add(Lead::Kind::PartPin, static_cast<int>(p), static_cast<int>(k), pins[k].hole);
         }
+        const bool everyPin = leads_.size() - first == pins.size();
+        firstLeadOfPart_.push_back(everyPin ? static_cast<int>(first) : -1);
     }
     for (std::size_t l = 0; l < board.links.size(); ++l) {
         add(Lead::Kind::LinkEnd, static_cast<int>(l), 0, board.links[l].from);
@@ -39,13 +43,19 @@ CheckContext::CheckContext(const Board& board)
         if (i + kLookAhead < leads_.size()) copper_.prefetchNode(leads_[i + kLookAhead].hole);
         Lead& lead = leads_[i];
         lead.island = copper_.islandOfNode(lead.hole);
-        lead.onCut = copper_.isHoleCut(holeAt(lead.hole));
     }
     int base = board.holeCount();
     for (const OffboardPart& part : board.offboard) {
         lugBase_.push_back(base);
         base += static_cast<int>(part.pins.size());
     }
+}
+
+int CheckContext::islandOfPartPin(int part, int pin) const {
+    const int first = firstLeadOfPart_[static_cast<std::size_t>(part)];
+    if (first >= 0) return leads_[static_cast<std::size_t>(first + pin)].island;
+    const Hole hole = board_->parts[static_cast<std::size_t>(part)].pins[static_cast<std::size_t>(pin)].hole;
+    return copper_.islandOfHole(hole);
 }
 
 bool CheckContext::isFree(int hole) const {

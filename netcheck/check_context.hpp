@@ -31,6 +31,9 @@ public:
     const Connectivity& copper() const { return copper_; }
     /// Every lead on the board, part pins first, then link ends, then wire ends.
     const std::vector<Lead>& leads() const { return leads_; }
+    /// Island of pin `pin` of board part `part` (-1 when its hole is off the board); read from
+    /// the part's leads, which lie in board order.
+    int islandOfPartPin(int part, int pin) const;
     /// Leads in a hole (saturates at 255).
     int leadsIn(int hole) const { return leadCount_[static_cast<std::size_t>(hole)]; }
     /// Copper present and nothing soldered in it: a place for a new link or a hole cut.
@@ -54,6 +57,7 @@ private:
     const Board* board_;
     Connectivity copper_;
     std::vector<Lead> leads_;
+    std::vector<int> firstLeadOfPart_;  // index of a part's first lead; -1 if a pin has none
     std::vector<unsigned char> leadCount_;
     std::vector<int> lugBase_;
 };

@@ -6,6 +6,7 @@
 #include <algorithm>
 #include <array>
 #include <cstdint>
+#include <numeric>
 #include <span>
 
 #include "part_kinds.hpp"
@@ -38,7 +39,9 @@ public:
     Uses(const CheckContext& context, const Circuit& circuit)
         : context_(context), refs_(context.board().parts.size() + context.board().offboard.size()) {
         const Board& board = context.board();
-        uses_.reserve(board.parts.size() + board.offboard.size() + circuit.parts.size());
+        // Circuit refs mostly name board parts: room for a few missing ones, growing past that.
+        uses_.reserve(board.parts.size() + board.offboard.size() + 16);
+        order_.reserve(circuit.parts.size());
         // Each board part is placed once, so the pool never grows past this and the spans into
         // it stay valid.
         pool_.reserve(PartUse::kArraysPerPin * boardPinCount(board));
@@ -72,53 +75,54 @@ public:
     PartUse& at(int u) { return uses_[static_cast<std::size_t>(u)]; }
     const RefTable& refs() const { return refs_; }
 
-    /// Every use the circuit mentions, by ref, copied out together with its pin arrays into
-    /// memory in that order: every later pass goes through the parts by ref, and on a large board would
-    /// otherwise jump around in memory. Call once, after every ref has been mentioned.
-    std::vector<PartUse> takeMentionedByRef() {
+    /// Every use the circuit mentions, by ref, moved in place to the front of the uses (the rest
+    /// follow): every later pass goes through the parts by ref, and on a large board would
+    /// otherwise jump around in memory. Call once, after every ref has been mentioned; afterwards
+    /// only mentionsPart() and mentionsOffboard() may still be asked.
+    std::span<PartUse> mentionedByRef() {
         // Declared parts come sorted from the circuit; only refs named just in nets need sorting.
         if (order_.size() > declared_) {
             std::stable_sort(order_.begin(), order_.end(),
                              [&](int a, int b) { return at(a).ref < at(b).ref; });
         }
-        std::size_t poolSize = 0;
-        for (int u : order_) poolSize += PartUse::kArraysPerPin * static_cast<std::size_t>(at(u).pins);
-        sortedPool_.resize(poolSize);
-        std::vector<PartUse> sorted;
-        sorted.reserve(order_.size());
-        int* pool = sortedPool_.data();
-        for (std::size_t i = 0; i < order_.size(); ++i) {
-            // The use a long way ahead, the pin arrays of one half as far (its use has arrived).
-            if (i + kLookAhead < order_.size()) prefetchLines(&at(order_[i + kLookAhead]), 2);
-            if (i + kLookAhead / 2 < order_.size()) prefetchLines(at(order_[i + kLookAhead / 2]).pool, 1);
-            PartUse& use = sorted.emplace_back(at(order_[i]));  // a copy: the flags stay behind
-            const std::size_t ints = PartUse::kArraysPerPin * static_cast<std::size_t>(use.pins);
-            if (ints > 0) std::copy(use.pool, use.pool + ints, pool);
-            use.pool = pool;
-            pool += ints;
+        for (int u : useOfPart_) mentionedPart_.push_back(at(u).mentioned ? 1 : 0);
+        for (int u : useOfOffboard_) mentionedOffboard_.push_back(at(u).mentioned ? 1 : 0);
+        // Boards numbered in placement order are often in ref order already.
+        bool inPlace = true;
+        for (std::size_t i = 0; i < order_.size() && inPlace; ++i) {
+            inPlace = order_[i] == static_cast<int>(i);
         }
-        return sorted;
+        if (inPlace) return std::span<PartUse>(uses_.data(), order_.size());
+        // Swaps each use into its place; `slot` and `use` track which use sits where.
+        std::vector<int> slot(uses_.size());
+        std::vector<int> use(uses_.size());
+        std::iota(slot.begin(), slot.end(), 0);
+        std::iota(use.begin(), use.end(), 0);
+        for (std::size_t i = 0; i < order_.size(); ++i) {
+            if (i + kLookAhead < order_.size()) {
+                prefetchLines(&uses_[static_cast<std::size_t>(slot[static_cast<std::size_t>(order_[i + kLookAhead])])], 2);
+            }
+            const auto from = static_cast<std::size_t>(slot[static_cast<std::size_t>(order_[i])]);
+            if (from == i) continue;
+            std::swap(uses_[i], uses_[from]);
+            std::swap(use[i], use[from]);
+            slot[static_cast<std::size_t>(use[i])] = static_cast<int>(i);
+            slot[static_cast<std::size_t>(use[from])] = static_cast<int>(from);
+        }
+        return std::span<PartUse>(uses_.data(), order_.size());
     }
 
-    /// Whether the circuit names board part `p` (of board.parts, or of board.offboard).
-    bool mentionsPart(std::size_t p) const { return mentioned(useOfPart_[p]); }
-    bool mentionsOffboard(std::size_t p) const { return mentioned(useOfOffboard_[p]); }
+    /// Whether the circuit names board part `p` (of board.parts, or of board.offboard); asked
+    /// after mentionedByRef().
+    bool mentionsPart(std::size_t p) const { return mentionedPart_[p] != 0; }
+    bool mentionsOffboard(std::size_t p) const { return mentionedOffboard_[p] != 0; }
 
 private:
-    // On a large board a part's table slot and pin islands are far apart in memory; asking for
+    // On a large board the table slots of consecutive parts are far apart in memory; asking for
     // them a few parts ahead lets the waits overlap.
     static constexpr std::size_t kLookAhead = 32;
 
-    void prefetchPart(const Part& part) const {
-        refs_.prefetch(RefTable::keyOf(part.ref));
-        for (const Pin& pin : part.pins) {
-            if (context_.board().contains(pin.hole)) {
-                context_.copper().prefetchNode(context_.holeIndex(pin.hole));
-            }
-        }
-    }
-
-    bool mentioned(int u) const { return uses_[static_cast<std::size_t>(u)].mentioned; }
+    void prefetchPart(const Part& part) const { refs_.prefetch(RefTable::keyOf(part.ref)); }
 
     int addBoardPart(std::string_view ref, bool offboard, std::size_t p) {
         const int u = refs_.insert(ref, static_cast<int>(uses_.size()));
@@ -154,7 +158,8 @@ private:
             const int node = offboard ? context_.lugNode(use.index, static_cast<int>(k))
                                       : context_.holeIndex(use.board.pins[k].hole);
             use.nodes()[k] = node;
-            use.islands()[k] = copper.islandOfNode(node);
+            use.islands()[k] = offboard ? copper.islandOfNode(node)
+                                        : context_.islandOfPartPin(use.index, static_cast<int>(k));
             use.net()[k] = -1;
             use.nameOf()[k] = static_cast<int>(k);
             use.pinKeys()[k] = static_cast<int>(PinKey::of(use.pinName(static_cast<int>(k))));
@@ -167,9 +172,10 @@ private:
     std::vector<int> pool_;
     std::vector<int> useOfPart_;
     std::vector<int> useOfOffboard_;
+    std::vector<char> mentionedPart_;      // filled by mentionedByRef()
+    std::vector<char> mentionedOffboard_;
     std::vector<int> order_;
     std::size_t declared_ = 0;
-    std::vector<int> sortedPool_;
 };
 
 std::string joinNames(const std::vector<std::string>& names) {
@@ -316,7 +322,7 @@ private:
 
     Uses& uses_;
     Finish finish_;
-    std::array<Pending, 16> pending_{};
+    std::array<Pending, 16> pending_;  // entries below size_ are written before read
     std::size_t size_ = 0;
 };
 
@@ -351,7 +357,11 @@ std::vector<std::string_view> assignNets(const Circuit& circuit, Uses& uses) {
         }
     };
     MentionBatch<PinOfNet, decltype(assign)> batch(uses, assign);
+    // Each net's pins lie in a block of their own: ask for the block a few nets ahead.
+    auto ahead = circuit.nets.begin();
+    for (int i = 0; i < 8 && ahead != circuit.nets.end(); ++i) ++ahead;
     for (const auto& [name, pins] : circuit.nets) {
+        if (ahead != circuit.nets.end()) prefetchLines((ahead++)->second.data(), 2);
         const int net = static_cast<int>(names.size());
         names.push_back(name);
         for (const PinRef& pin : pins) batch.add(pin.ref, PinOfNet{&pin.pin, net});
@@ -362,7 +372,7 @@ std::vector<std::string_view> assignNets(const Circuit& circuit, Uses& uses) {
 
 // The pins of every net, net after net in one array (a counting sort by net), each net's pins in
 // the order of the parts' refs.
-void placeNets(const std::vector<PartUse>& uses, const std::vector<std::string_view>& names,
+void placeNets(std::span<const PartUse> uses, const std::vector<std::string_view>& names,
                CircuitMatch& match) {
     std::vector<std::size_t> start(names.size() + 1, 0);
     for (const PartUse& use : uses) {
@@ -373,7 +383,8 @@ void placeNets(const std::vector<PartUse>& uses, const std::vector<std::string_v
     }
     for (std::size_t n = 0; n < names.size(); ++n) start[n + 1] += start[n];
     match.netPins.resize(start.back());
-    std::vector<std::size_t> next(start.begin(), start.end() - 1);
+    // Filling net n moves start[n] on to where net n + 1 begins; shifting back restores it.
+    std::vector<std::size_t>& next = start;
     for (const PartUse& use : uses) {
         if (!use.found() || !use.unknownPins.empty()) continue;
         for (int k = 0; k < use.pinCount(); ++k) {
@@ -384,6 +395,8 @@ void placeNets(const std::vector<PartUse>& uses, const std::vector<std::string_v
                 NetPin{use.ref, &use.pinName(use.nameOf()[at]), use.nodes()[at], use.islands()[at]};
         }
     }
+    std::copy_backward(start.begin(), start.end() - 1, start.end());
+    start[0] = 0;
     match.nets.resize(names.size());
     for (std::size_t n = 0; n < names.size(); ++n) {
         match.nets[n].name = names[n];
@@ -399,7 +412,7 @@ CircuitMatch matchCircuit(const CheckContext& context, const Circuit& circuit) {
     Uses uses(context, circuit);
     declareParts(circuit, uses);
     const std::vector<std::string_view> names = assignNets(circuit, uses);
-    std::vector<PartUse> all = uses.takeMentionedByRef();
+    const std::span<PartUse> all = uses.mentionedByRef();
     for (const PartUse& use : all) {
         if (use.found()) continue;
         match.errors.push_back(refFinding("missing-part", Severity::Error, use.ref,

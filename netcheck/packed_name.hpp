@@ -3,7 +3,6 @@
 #pragma once
 
 #include <cstddef>
-#include <cstring>
 #include <string_view>
 
 namespace netcheck {
@@ -18,9 +17,9 @@ struct PackedName {
     static Word of(std::string_view name) {
         if (name.size() > kMaxBytes) return kLong;
         Word packed = static_cast<Word>(name.size()) << (8 * kMaxBytes);
-        unsigned char bytes[sizeof(Word)] = {};
-        if (!name.empty()) std::memcpy(bytes, name.data(), name.size());
-        for (std::size_t i = 0; i < kMaxBytes; ++i) packed |= static_cast<Word>(bytes[i]) << (8 * i);
+        for (std::size_t i = 0; i < name.size(); ++i) {
+            packed |= static_cast<Word>(static_cast<unsigned char>(name[i])) << (8 * i);
+        }
         return packed;
     }
 };

@@ -34,8 +34,6 @@ Freedom freedomOf(const PartUse& use) {
     return Freedom::Fixed;
 }
 
-// How many pins of each intended net sit in each island. Most islands carry one net, so the count
-// lives in per-island arrays; only pins of a second net in an island go to a hash map.
 int islandOf(const PartUse& use, int pin) { return use.islands()[static_cast<std::size_t>(pin)]; }
 
 // One sortable number for a (net, island) pair.
@@ -44,11 +42,12 @@ std::uint64_t key(int net, int island) {
            static_cast<std::uint32_t>(island);
 }
 
+// How many pins of each intended net sit in each island. Most islands carry one net, so the count
+// lives in a per-island array; only pins of a second net in an island go to a hash map.
 class NetCounts {
 public:
-    NetCounts(int islandCount, const std::vector<PartUse>& uses, int netCount)
-        : firstNet_(static_cast<std::size_t>(islandCount), -1),
-          firstCount_(static_cast<std::size_t>(islandCount), 0),
+    NetCounts(int islandCount, std::span<const PartUse> uses, int netCount)
+        : first_(static_cast<std::size_t>(islandCount)),
           totals_(static_cast<std::size_t>(netCount), 0) {
         for (const PartUse& use : uses) add(use, +1);
     }
@@ -66,9 +65,8 @@ public:
         const int net = use.net()[static_cast<std::size_t>(pin)];
         if (net < 0) return 0;
         const int island = islandOf(use, pin);
-        if (firstNet_[static_cast<std::size_t>(island)] == net) {
-            return firstCount_[static_cast<std::size_t>(island)];
-        }
+        const First& first = first_[static_cast<std::size_t>(island)];
+        if (first.net == net) return first.count;
         auto it = others_.find(key(net, island));
         return it == others_.end() ? 0 : it->second;
     }
@@ -84,13 +82,17 @@ public:
 
 private:
     int& slot(int net, int island) {
-        int& first = firstNet_[static_cast<std::size_t>(island)];
-        if (first < 0) first = net;
-        if (first == net) return firstCount_[static_cast<std::size_t>(island)];
+        First& first = first_[static_cast<std::size_t>(island)];
+        if (first.net < 0) first.net = net;
+        if (first.net == net) return first.count;
         return others_[key(net, island)];
     }
-    std::vector<int> firstNet_;
-    std::vector<int> firstCount_;
+    // The first net seen in an island and its count side by side: one cache line per look.
+    struct First {
+        int net = -1;
+        int count = 0;
+    };
+    std::vector<First> first_;
     std::unordered_map<std::uint64_t, int> others_;
     std::vector<int> totals_;
 };
@@ -127,7 +129,7 @@ Finding partFinding(std::string type, Severity severity, const CheckContext& con
 // are kept sorted, so a count is the length of a run of equal keys.
 class FlexibleCounts {
 public:
-    FlexibleCounts(const std::vector<PartUse>& uses, const std::vector<Freedom>& freedom) {
+    FlexibleCounts(std::span<const PartUse> uses, const std::vector<Freedom>& freedom) {
         for (std::size_t u = 0; u < uses.size(); ++u) {
             if (freedom[u] != Freedom::EndForEnd) continue;
             for (int k = 0; k < 2; ++k) {
@@ -162,7 +164,7 @@ private:
 // The flexible counts are only needed on a tie, so they are built on the first one.
 class LazyFlexibleCounts {
 public:
-    LazyFlexibleCounts(const std::vector<PartUse>& uses, const std::vector<Freedom>& freedom)
+    LazyFlexibleCounts(std::span<const PartUse> uses, const std::vector<Freedom>& freedom)
         : uses_(uses), freedom_(freedom) {}
     const FlexibleCounts& get() {
         if (!counts_) counts_.emplace(uses_, freedom_);
@@ -170,7 +172,7 @@ public:
     }
 
 private:
-    const std::vector<PartUse>& uses_;
+    std::span<const PartUse> uses_;
     const std::vector<Freedom>& freedom_;
     std::optional<FlexibleCounts> counts_;
 };
@@ -278,7 +280,7 @@ void checkPolarised3(const CheckContext& context, PartUse& use, NetCounts& count
 
 }  // namespace
 
-void orientParts(const CheckContext& context, std::vector<PartUse>& uses,
+void orientParts(const CheckContext& context, std::span<PartUse> uses,
                  const std::vector<std::string_view>& netNames, std::vector<Finding>& errors,
                  std::vector<Finding>& warnings) {
     std::vector<Freedom> freedom;

@@ -3,6 +3,7 @@
 // as reversed (private to the checker).
 #pragma once
 
+#include <span>
 #include <string>
 #include <string_view>
 #include <vector>
@@ -14,7 +15,7 @@
 namespace netcheck {
 
 /// Orients `uses` in place and appends reversed-part errors and pot-reversed warnings.
-void orientParts(const CheckContext& context, std::vector<PartUse>& uses,
+void orientParts(const CheckContext& context, std::span<PartUse> uses,
                  const std::vector<std::string_view>& netNames, std::vector<Finding>& errors,
                  std::vector<Finding>& warnings);
 

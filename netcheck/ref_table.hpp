@@ -32,9 +32,15 @@ public:
     };
 
     static Key keyOf(std::string_view text) {
-        std::uint64_t h = 14695981039346656037ull;  // FNV-1a: refs are a few characters long
-        for (char c : text) h = (h ^ static_cast<unsigned char>(c)) * 1099511628211ull;
-        return Key{Packed::of(text), static_cast<std::uint32_t>(h ^ (h >> 32))};
+        const std::uint64_t packed = Packed::of(text);
+        std::uint64_t h = 0;
+        if (packed != Packed::kLong) {
+            h = packed * 0x9E3779B97F4A7C15ull;  // a short name is its own hash, mixed (Fibonacci)
+        } else {
+            h = 14695981039346656037ull;  // FNV-1a
+            for (char c : text) h = (h ^ static_cast<unsigned char>(c)) * 1099511628211ull;
+        }
+        return Key{packed, static_cast<std::uint32_t>(h >> 32)};
     }
 
     /// Asks for the slot of `key` to be brought into cache ahead of a lookup, so that a batch of
