@@ -10,7 +10,7 @@ CheckContext::CheckContext(const Board& board)
     auto add = [&](Lead::Kind kind, int item, int sub, Hole hole) {
         if (!board.contains(hole)) return;
         const int index = holeIndex(hole);
-        leads_.push_back(Lead{kind, item, sub, index, 0, copper_.isHoleCut(hole)});
+        leads_.push_back(Lead{kind, item, sub, index});
         unsigned char& count = leadCount_[static_cast<std::size_t>(index)];
         if (count < 255) ++count;
     };
@@ -19,7 +19,13 @@ CheckContext::CheckContext(const Board& board)
     leads_.reserve(leadCount);
     lugBase_.reserve(board.offboard.size());
     firstLeadOfPart_.reserve(board.parts.size());
+    constexpr std::size_t kPartsAhead = 16;  // parts lie scattered: count their holes early
     for (std::size_t p = 0; p < board.parts.size(); ++p) {
+        if (p + kPartsAhead < board.parts.size()) {
+            for (const Pin& pin : board.parts[p + kPartsAhead].pins) {
+                if (board.contains(pin.hole)) __builtin_prefetch(&leadCount_[static_cast<std::size_t>(holeIndex(pin.hole))]);
+            }
+        }
         const auto& pins = board.parts[p].pins;
         const std::size_t first = leads_.size();
         for (std::size_t k = 0; k < pins.size(); ++k) {
@@ -37,12 +43,20 @@ CheckContext::CheckContext(const Board& board)
         if (wire.from.isHole()) add(Lead::Kind::WireEnd, static_cast<int>(w), 0, *wire.from.hole);
         if (wire.to.isHole()) add(Lead::Kind::WireEnd, static_cast<int>(w), 1, *wire.to.hole);
     }
-    // Leads lie scattered over the board, so their islands are asked for a few leads ahead.
+    // Leads lie scattered over the board, so what is known of their holes is asked for a few
+    // leads ahead.
     constexpr std::size_t kLookAhead = 16;
     for (std::size_t i = 0; i < leads_.size(); ++i) {
-        if (i + kLookAhead < leads_.size()) copper_.prefetchNode(leads_[i + kLookAhead].hole);
+        if (i + kLookAhead < leads_.size()) {
+            const int ahead = leads_[i + kLookAhead].hole;
+            copper_.prefetchNode(ahead);
+            copper_.prefetchHole(ahead);
+            __builtin_prefetch(&leadCount_[static_cast<std::size_t>(ahead)]);
+        }
         Lead& lead = leads_[i];
         lead.island = copper_.islandOfNode(lead.hole);
+        lead.onCut = copper_.isHoleCutAt(lead.hole);
+        lead.shared = leadsIn(lead.hole) > 1;
     }
     int base = board.holeCount();
     for (const OffboardPart& part : board.offboard) {

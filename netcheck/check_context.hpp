@@ -20,6 +20,7 @@ struct Lead {
     int hole = 0;  ///< hole index row * cols + col
     int island = 0;       ///< island of the hole
     bool onCut = false;   ///< the hole is hole-cut (the lead touches no copper)
+    bool shared = false;  ///< another lead is in the same hole
 };
 
 /// One check run's shared facts. Node ids follow Connectivity: holes, then off-board lugs.

@@ -212,8 +212,7 @@ std::string describeCircuitPart(const PartUse& use) {
 }
 
 void checkPins(const CheckContext& context, const PartUse& use, std::vector<Finding>& errors) {
-    const bool declaresPins = use.circuitPart != nullptr && !use.circuitPart->pins.empty();
-    if (use.unknownPins.empty() && !declaresPins) return;  // nothing to compare
+    if (use.unknownPins.empty() && !use.declaresPins) return;  // nothing to compare
     const std::vector<std::string> onBoard = boardPinNames(use);
     std::string problem;
     if (!use.unknownPins.empty()) {
@@ -330,6 +329,7 @@ private:
 void declareParts(const Circuit& circuit, Uses& uses) {
     auto declare = [](PartUse& use, const CircuitPart* part) {
         use.circuitPart = part;
+        use.declaresPins = !part->pins.empty();
         use.valueDiffers = use.found() && !part->value.empty() && !use.valueIs(part->value) &&
                            !sameValue(use.value(), part->value);
     };

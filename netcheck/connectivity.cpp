@@ -132,6 +132,10 @@ bool Connectivity::isHoleCut(Hole hole) const {
            (holeCut_[static_cast<std::size_t>(hole.row * board_->cols + hole.col)] & kHoleCutFlag);
 }
 
+bool Connectivity::isHoleCutAt(int hole) const {
+    return (holeCut_[static_cast<std::size_t>(hole)] & kHoleCutFlag) != 0;
+}
+
 bool Connectivity::joinsNext(Hole hole) const {
     return board_->contains(hole) &&
            !(holeCut_[static_cast<std::size_t>(hole.row * board_->cols + hole.col)] &

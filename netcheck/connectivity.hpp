@@ -32,6 +32,8 @@ public:
     std::vector<Island> islands() const;
     /// True when a hole cut removed this hole's copper.
     bool isHoleCut(Hole hole) const;
+    /// The same for a hole index (row * cols + col) known to be on the board.
+    bool isHoleCutAt(int hole) const;
     /// True when copper joins `hole` with the next hole along its strip (column + 1).
     bool joinsNext(Hole hole) const;
     /// Number of nodes: holes, then off-board lugs.
@@ -45,6 +47,8 @@ public:
     void prefetchNode(int node) const {
         if (node >= 0 && node < nodeCount()) __builtin_prefetch(&islandOfNode_[static_cast<std::size_t>(node)]);
     }
+    /// The same for isHoleCutAt().
+    void prefetchHole(int hole) const { __builtin_prefetch(&holeCut_[static_cast<std::size_t>(hole)]); }
 
 private:
     const Board* board_;

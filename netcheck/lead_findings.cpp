@@ -41,7 +41,7 @@ std::string millimetres(double value) {
 void findSharedHoles(const CheckContext& context, std::vector<Finding>& errors) {
     std::vector<const Lead*> crowded;
     for (const Lead& lead : context.leads()) {
-        if (context.leadsIn(lead.hole) > 1) crowded.push_back(&lead);
+        if (lead.shared) crowded.push_back(&lead);
     }
     std::stable_sort(crowded.begin(), crowded.end(),
                      [](const Lead* a, const Lead* b) { return a->hole < b->hole; });

@@ -177,7 +177,8 @@ private:
     std::optional<FlexibleCounts> counts_;
 };
 
-void chooseEndForEnd(PartUse& use, NetCounts& counts, LazyFlexibleCounts& flexible) {
+// Returns whether the part was turned round.
+bool chooseEndForEnd(PartUse& use, NetCounts& counts, LazyFlexibleCounts& flexible) {
     counts.add(use, -1);
     const int placed = counts.score(use);
     use.swapPins(0, 1);
@@ -191,6 +192,7 @@ void chooseEndForEnd(PartUse& use, NetCounts& counts, LazyFlexibleCounts& flexib
     }
     if (!better) use.swapPins(0, 1);  // a full tie keeps the part as written
     counts.add(use, +1);
+    return better;
 }
 
 void checkPot(const CheckContext& context, PartUse& use, NetCounts& counts,
@@ -294,10 +296,14 @@ void orientParts(const CheckContext& context, std::span<PartUse> uses,
     NetCounts counts(context.copper().islandCount(), uses, static_cast<int>(netNames.size()));
     // Flexible counts do not depend on orientation, so building them late changes nothing.
     LazyFlexibleCounts flexible(uses, freedom);
-    // Two rounds, so a part flipped in the first round is seen by its neighbours in the second.
-    for (int round = 0; round < 2; ++round) {
+    // Two rounds, so a part flipped in the first round is seen by its neighbours in the second
+    // (when nothing was flipped, the second round would see and decide exactly the same).
+    bool flipped = true;
+    for (int round = 0; round < 2 && flipped; ++round) {
+        flipped = false;
         for (std::size_t u = 0; u < uses.size(); ++u) {
-            if (freedom[u] == Freedom::EndForEnd) chooseEndForEnd(uses[u], counts, flexible);
+            if (freedom[u] != Freedom::EndForEnd) continue;
+            flipped = chooseEndForEnd(uses[u], counts, flexible) || flipped;
         }
     }
     for (std::size_t u = 0; u < uses.size(); ++u) {

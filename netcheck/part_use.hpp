@@ -43,6 +43,7 @@ struct PartUse {
     bool mentioned = false;                    ///< the circuit names this ref
     bool offboard = false;                     ///< board part is in board.offboard
     bool valueDiffers = false;                 ///< board and circuit values differ (when found)
+    bool declaresPins = false;                 ///< the circuit part lists its pin names
     const CircuitPart* circuitPart = nullptr;  ///< null when the ref only appears in nets
     BoardPartFacts board;                      ///< valid when found()
     std::vector<std::string> unknownPins;      ///< pins the circuit uses that the board part lacks
