@@ -62,28 +62,29 @@ Connectivity::Connectivity(const Board& board)
     : board_(&board), holeCut_(copperFlags(board)), pinNodes_(lugNodes(board)) {
     const int holes = board.holeCount();
     const int lugCount = static_cast<int>(pinNodes_.size());
-    islandOfNode_.resize(static_cast<std::size_t>(holes + lugCount));
+    segmentOfNode_.resize(static_cast<std::size_t>(holes + lugCount));
 
-    // Pass 1: strip segment of every hole (stored in islandOfNode_ for now).
+    // Pass 1: strip segment of every hole (a running count of the breaks before it), then one
+    // segment per lug.
     int segment = 0;
     for (int i = 0; i < holes; ++i) {
-        islandOfNode_[static_cast<std::size_t>(i)] = segment;
-        if (holeCut_[static_cast<std::size_t>(i)] & kNoJoinNextFlag) ++segment;
+        segmentOfNode_[static_cast<std::size_t>(i)] = segment;
+        segment += (holeCut_[static_cast<std::size_t>(i)] & kNoJoinNextFlag) != 0 ? 1 : 0;
     }
     const int segments = segment;
-    for (int l = 0; l < lugCount; ++l) islandOfNode_[static_cast<std::size_t>(holes + l)] = segment++;
+    for (int l = 0; l < lugCount; ++l) segmentOfNode_[static_cast<std::size_t>(holes + l)] = segment++;
 
     // Pass 2: links and wires join segments and lugs.
     UnionFind sets(segments + lugCount);
     auto setOfHole = [&](Hole hole) -> int {
         return board.contains(hole)
-                   ? islandOfNode_[static_cast<std::size_t>(hole.row * board.cols + hole.col)]
+                   ? segmentOfNode_[static_cast<std::size_t>(hole.row * board.cols + hole.col)]
                    : -1;
     };
     auto setOf = [&](const Endpoint& end) -> int {
         if (end.isHole()) return setOfHole(*end.hole);
         const int node = findLug(pinNodes_, end.lug);
-        if (node >= 0) return islandOfNode_[static_cast<std::size_t>(node)];
+        if (node >= 0) return segmentOfNode_[static_cast<std::size_t>(node)];
         // A wire may also end on the lead of an on-board part: it joins that lead's hole.
         const Part* part = board.findPart(end.lug.ref);
         const Pin* pin = part ? part->findPin(end.lug.pin) : nullptr;
@@ -101,22 +102,22 @@ Connectivity::Connectivity(const Board& board)
     }
 
     // Pass 3: dense island ids in order of first node. Segment and lug ids already rise in node
-    // order, so numbering the sets in id order gives the same ids; each node then only looks up
-    // its segment's island.
+    // order, so numbering the sets in id order gives the same ids. A node's island is then its
+    // segment's: the table per segment is far smaller than one per hole, and needs no pass over
+    // the holes.
     const int setCount = segments + lugCount;
     std::vector<int> islandOfRoot(static_cast<std::size_t>(setCount), -1);
-    std::vector<int> islandOfSegment(static_cast<std::size_t>(setCount));
+    islandOfSegment_.resize(static_cast<std::size_t>(setCount));
     for (int s = 0; s < setCount; ++s) {
         int& island = islandOfRoot[static_cast<std::size_t>(sets.find(s))];
         if (island < 0) island = islandCount_++;
-        islandOfSegment[static_cast<std::size_t>(s)] = island;
+        islandOfSegment_[static_cast<std::size_t>(s)] = island;
     }
-    for (int& id : islandOfNode_) id = islandOfSegment[static_cast<std::size_t>(id)];
 }
 
 int Connectivity::islandOfHole(Hole hole) const {
     if (!board_->contains(hole)) return -1;
-    return islandOfNode_[static_cast<std::size_t>(hole.row * board_->cols + hole.col)];
+    return islandOfNode(hole.row * board_->cols + hole.col);
 }
 
 int Connectivity::islandOfPin(const PinRef& pin) const {
@@ -147,7 +148,7 @@ std::vector<Island> Connectivity::islands() const {
     for (int i = 0; i < islandCount_; ++i) result[static_cast<std::size_t>(i)].id = i;
     const int cols = board_->cols;
     for (int i = 0; i < board_->holeCount(); ++i) {
-        result[static_cast<std::size_t>(islandOfNode_[static_cast<std::size_t>(i)])]
+        result[static_cast<std::size_t>(islandOfNode(i))]
             .holes.push_back(Hole{i / cols, i % cols});
     }
     for (const Part& part : board_->parts) {

@@ -7,6 +7,7 @@
 
 #include "board.hpp"
 #include "circuit.hpp"
+#include "default_init_allocator.hpp"
 
 namespace netcheck {
 
@@ -37,22 +38,24 @@ public:
     /// True when copper joins `hole` with the next hole along its strip (column + 1).
     bool joinsNext(Hole hole) const;
     /// Number of nodes: holes, then off-board lugs.
-    int nodeCount() const { return static_cast<int>(islandOfNode_.size()); }
+    int nodeCount() const { return static_cast<int>(segmentOfNode_.size()); }
     /// Island of a node id (see the class comment); -1 when out of range.
     int islandOfNode(int node) const {
-        return node < 0 || node >= nodeCount() ? -1 : islandOfNode_[static_cast<std::size_t>(node)];
+        if (node < 0 || node >= nodeCount()) return -1;
+        return islandOfSegment_[static_cast<std::size_t>(segmentOfNode_[static_cast<std::size_t>(node)])];
     }
     /// Asks for a node's island to be brought into cache ahead of islandOfNode(), for passes that
     /// look up many nodes scattered over a large board.
     void prefetchNode(int node) const {
-        if (node >= 0 && node < nodeCount()) __builtin_prefetch(&islandOfNode_[static_cast<std::size_t>(node)]);
+        if (node >= 0 && node < nodeCount()) __builtin_prefetch(&segmentOfNode_[static_cast<std::size_t>(node)]);
     }
     /// The same for isHoleCutAt().
     void prefetchHole(int hole) const { __builtin_prefetch(&holeCut_[static_cast<std::size_t>(hole)]); }
 
 private:
     const Board* board_;
-    std::vector<int> islandOfNode_;
+    std::vector<int, DefaultInitAllocator<int>> segmentOfNode_;  // every entry set while tracing
+    std::vector<int> islandOfSegment_;
     std::vector<unsigned char> holeCut_;
     std::vector<std::pair<PinRef, int>> pinNodes_;  // sorted by PinRef, for islandOfPin
     int islandCount_ = 0;
