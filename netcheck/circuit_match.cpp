@@ -112,6 +112,26 @@ public:
         return std::span<PartUse>(uses_.data(), order_.size());
     }
 
+    /// Notes a pin the circuit uses that the part lacks (for pin-mismatch).
+    void noteUnknownPin(PartUse& use, std::string_view pin) {
+        use.hasUnknownPins = true;
+        unknownPins_.emplace_back(use.ref, pin);
+    }
+
+    /// The pins the circuit uses that the board part of `ref` lacks, sorted, each once.
+    std::vector<std::string> unknownPinsOf(std::string_view ref) {
+        if (!unknownSorted_) {
+            std::sort(unknownPins_.begin(), unknownPins_.end());
+            unknownPins_.erase(std::unique(unknownPins_.begin(), unknownPins_.end()), unknownPins_.end());
+            unknownSorted_ = true;
+        }
+        std::vector<std::string> pins;
+        auto it = std::lower_bound(unknownPins_.begin(), unknownPins_.end(),
+                                   std::pair<std::string_view, std::string_view>{ref, {}});
+        for (; it != unknownPins_.end() && it->first == ref; ++it) pins.emplace_back(it->second);
+        return pins;
+    }
+
     /// Whether the circuit names board part `p` (of board.parts, or of board.offboard); asked
     /// after mentionedByRef().
     bool mentionsPart(std::size_t p) const { return mentionedPart_[p] != 0; }
@@ -141,13 +161,13 @@ private:
         std::size_t pins = 0;
         if (offboard) {
             const OffboardPart& part = board.offboard[at];
-            use.board = BoardPartFacts{nullptr, part.pins.data(), &part.kind, &part.value,
-                                       ValueKey::of(part.value), findPartKind(part.kind)};
+            use.board = BoardPartFacts{nullptr, part.pins.data(), ValueKey::of(part.value),
+                                       findPartKind(part.kind)};
             pins = part.pins.size();
         } else {
             const Part& part = board.parts[at];
-            use.board = BoardPartFacts{part.pins.data(), nullptr, &part.kind, &part.value,
-                                       ValueKey::of(part.value), findPartKind(part.kind)};
+            use.board = BoardPartFacts{part.pins.data(), nullptr, ValueKey::of(part.value),
+                                       findPartKind(part.kind)};
             pins = part.pins.size();
         }
         use.pins = static_cast<int>(pins);
@@ -172,6 +192,8 @@ private:
     std::vector<int> pool_;
     std::vector<int> useOfPart_;
     std::vector<int> useOfOffboard_;
+    std::vector<std::pair<std::string_view, std::string_view>> unknownPins_;  // (ref, pin)
+    bool unknownSorted_ = false;
     std::vector<char> mentionedPart_;      // filled by mentionedByRef()
     std::vector<char> mentionedOffboard_;
     std::vector<int> order_;
@@ -211,13 +233,14 @@ std::string describeCircuitPart(const PartUse& use) {
     return " (" + use.circuitPart->kind + (value.empty() ? "" : " " + value) + ")";
 }
 
-void checkPins(const CheckContext& context, const PartUse& use, std::vector<Finding>& errors) {
-    if (use.unknownPins.empty() && !use.declaresPins) return;  // nothing to compare
+void checkPins(const CheckContext& context, const PartUse& use,
+               const std::vector<std::string>& unknownPins, std::vector<Finding>& errors) {
+    if (unknownPins.empty() && !use.declaresPins) return;  // nothing to compare
     const std::vector<std::string> onBoard = boardPinNames(use);
     std::string problem;
-    if (!use.unknownPins.empty()) {
-        problem = "the circuit uses pin" + std::string(use.unknownPins.size() > 1 ? "s " : " ") +
-                  joinNames(use.unknownPins) + ", but the board part has " + joinNames(onBoard);
+    if (!unknownPins.empty()) {
+        problem = "the circuit uses pin" + std::string(unknownPins.size() > 1 ? "s " : " ") +
+                  joinNames(unknownPins) + ", but the board part has " + joinNames(onBoard);
     } else if (use.circuitPart != nullptr && !use.circuitPart->pins.empty()) {
         std::vector<std::string> declared = use.circuitPart->pins;
         std::vector<std::string> present = onBoard;
@@ -240,7 +263,7 @@ void checkPins(const CheckContext& context, const PartUse& use, std::vector<Find
 void checkValue(const CheckContext& context, const PartUse& use, std::vector<Finding>& errors,
                 std::vector<Finding>& warnings) {
     if (!use.valueDiffers) return;
-    const std::string& onBoard = use.value();
+    const std::string& onBoard = use.value(context.board());
     const std::string& intended = use.circuitPart->value;
     const PartKind* kind = use.board.known;
     if (kind == nullptr) kind = findPartKind(use.circuitPart->kind);
@@ -326,12 +349,12 @@ private:
 };
 
 // Declared parts: their circuit entries, and whether their values differ from the board's.
-void declareParts(const Circuit& circuit, Uses& uses) {
-    auto declare = [](PartUse& use, const CircuitPart* part) {
+void declareParts(const Board& board, const Circuit& circuit, Uses& uses) {
+    auto declare = [&board](PartUse& use, const CircuitPart* part) {
         use.circuitPart = part;
         use.declaresPins = !part->pins.empty();
-        use.valueDiffers = use.found() && !part->value.empty() && !use.valueIs(part->value) &&
-                           !sameValue(use.value(), part->value);
+        use.valueDiffers = use.found() && !part->value.empty() && !use.valueIs(board, part->value) &&
+                           !sameValue(use.value(board), part->value);
     };
     MentionBatch<const CircuitPart*, decltype(declare)> batch(uses, declare);
     for (const auto& [ref, part] : circuit.parts) batch.add(ref, &part);
@@ -347,11 +370,11 @@ std::vector<std::string_view> assignNets(const Circuit& circuit, Uses& uses) {
         const std::string* pin;
         int net;
     };
-    auto assign = [](PartUse& use, const PinOfNet& at) {
+    auto assign = [&uses](PartUse& use, const PinOfNet& at) {
         if (!use.found()) return;
         const int k = use.findPin(*at.pin);
         if (k < 0) {
-            use.unknownPins.push_back(*at.pin);
+            uses.noteUnknownPin(use, *at.pin);
         } else if (use.net()[static_cast<std::size_t>(k)] < 0) {
             use.net()[static_cast<std::size_t>(k)] = at.net;
         }
@@ -376,7 +399,7 @@ void placeNets(std::span<const PartUse> uses, const std::vector<std::string_view
                CircuitMatch& match) {
     std::vector<std::size_t> start(names.size() + 1, 0);
     for (const PartUse& use : uses) {
-        if (!use.found() || !use.unknownPins.empty()) continue;
+        if (!use.found() || use.hasUnknownPins) continue;
         for (int net : use.net()) {
             if (net >= 0) ++start[static_cast<std::size_t>(net) + 1];
         }
@@ -386,7 +409,7 @@ void placeNets(std::span<const PartUse> uses, const std::vector<std::string_view
     // Filling net n moves start[n] on to where net n + 1 begins; shifting back restores it.
     std::vector<std::size_t>& next = start;
     for (const PartUse& use : uses) {
-        if (!use.found() || !use.unknownPins.empty()) continue;
+        if (!use.found() || use.hasUnknownPins) continue;
         for (int k = 0; k < use.pinCount(); ++k) {
             const auto at = static_cast<std::size_t>(k);
             const int net = use.net()[at];
@@ -410,7 +433,7 @@ void placeNets(std::span<const PartUse> uses, const std::vector<std::string_view
 CircuitMatch matchCircuit(const CheckContext& context, const Circuit& circuit) {
     CircuitMatch match;
     Uses uses(context, circuit);
-    declareParts(circuit, uses);
+    declareParts(context.board(), circuit, uses);
     const std::vector<std::string_view> names = assignNets(circuit, uses);
     const std::span<PartUse> all = uses.mentionedByRef();
     for (const PartUse& use : all) {
@@ -420,12 +443,11 @@ CircuitMatch matchCircuit(const CheckContext& context, const Circuit& circuit) {
                                               " is in the circuit but not on the board"));
     }
     reportExtraParts(context, uses, match.errors);
-    for (PartUse& use : all) {
+    for (const PartUse& use : all) {
         if (!use.found()) continue;
-        std::vector<std::string>& unknown = use.unknownPins;
-        std::sort(unknown.begin(), unknown.end());
-        unknown.erase(std::unique(unknown.begin(), unknown.end()), unknown.end());
-        checkPins(context, use, match.errors);
+        const std::vector<std::string> unknown =
+            use.hasUnknownPins ? uses.unknownPinsOf(use.ref) : std::vector<std::string>{};
+        checkPins(context, use, unknown, match.errors);
     }
     for (const PartUse& use : all) {
         if (use.found()) checkValue(context, use, match.errors, match.warnings);

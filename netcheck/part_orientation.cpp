@@ -18,7 +18,7 @@ namespace {
 enum class Freedom { Fixed, EndForEnd, PotEnds, Polarised2, Polarised3 };
 
 Freedom freedomOf(const PartUse& use) {
-    if (!use.found() || !use.unknownPins.empty()) return Freedom::Fixed;
+    if (!use.found() || use.hasUnknownPins) return Freedom::Fixed;
     const PartKind* kind = use.board.known;
     if (kind == nullptr) return Freedom::Fixed;  // unknown kinds match pin names exactly
     if (kind->name == "pot" || kind->name == "trimmer") {
@@ -101,8 +101,8 @@ private:
 // as the placement does.
 bool clearlyBetter(int other, int placed) { return other >= 2 && other > 2 * placed; }
 
-std::string partLabel(const PartUse& use) {
-    return std::string(use.ref) + " (" + use.kind() + ")";
+std::string partLabel(const Board& board, const PartUse& use) {
+    return std::string(use.ref) + " (" + use.kind(board) + ")";
 }
 
 std::vector<Hole> partHoles(const CheckContext& context, const PartUse& use) {
@@ -212,7 +212,7 @@ void checkPot(const CheckContext& context, PartUse& use, NetCounts& counts,
         auto netLabel = [&](int net) { return net < 0 ? std::string("nothing") : "net " + std::string(netNames[static_cast<std::size_t>(net)]); };
         warnings.push_back(partFinding(
             "pot-reversed", Severity::Warning, context, use,
-            partLabel(use) + " end lugs 1 and 3 are swapped against the circuit: " +
+            partLabel(context.board(), use) + " end lugs 1 and 3 are swapped against the circuit: " +
                 context.nodeName(use.nodes()[static_cast<std::size_t>(one)]) + " is on " +
                 netLabel(net1) + ", " + context.nodeName(use.nodes()[static_cast<std::size_t>(three)]) +
                 " on " + netLabel(net3) + " (the control works backwards)"));
@@ -237,7 +237,7 @@ void checkPolarised2(const CheckContext& context, PartUse& use, NetCounts& count
                                     : "which carries net " +
                                           std::string(netNames[static_cast<std::size_t>(netAtFirst)]);
     errors.push_back(partFinding("reversed-part", Severity::Error, context, use,
-                                 partLabel(use) + " looks reversed: " +
+                                 partLabel(context.board(), use) + " looks reversed: " +
                                      use.pinName(0) + " is in " +
                                      context.nodeName(use.nodes()[0]) + ", " + carries));
 }
@@ -274,7 +274,7 @@ void checkPolarised3(const CheckContext& context, PartUse& use, NetCounts& count
     if (!clearlyBetter(bestScore, placed)) return;
     const std::array<int, 3> asPlaced{0, 1, 2};
     errors.push_back(partFinding("reversed-part", Severity::Error, context, use,
-                                 partLabel(use) +
+                                 partLabel(context.board(), use) +
                                      " pins look out of order: the copper fits " +
                                      pinList(context, use, best) + " (placed: " +
                                      pinList(context, use, asPlaced) + ")"));

@@ -20,9 +20,7 @@ namespace netcheck {
 struct BoardPartFacts {
     const Pin* pins = nullptr;              ///< on-board pins (null for an off-board part)
     const std::string* lugs = nullptr;      ///< off-board lug names (null for an on-board part)
-    const std::string* kind = nullptr;
-    const std::string* value = nullptr;
-    std::uint64_t valueKey = 0;             ///< ValueKey of *value
+    std::uint64_t valueKey = 0;             ///< ValueKey of the part's value
     const PartKind* known = nullptr;        ///< the kind's table row; null for unknown kinds
 };
 
@@ -44,9 +42,9 @@ struct PartUse {
     bool offboard = false;                     ///< board part is in board.offboard
     bool valueDiffers = false;                 ///< board and circuit values differ (when found)
     bool declaresPins = false;                 ///< the circuit part lists its pin names
+    bool hasUnknownPins = false;               ///< the circuit uses pins the board part lacks
     const CircuitPart* circuitPart = nullptr;  ///< null when the ref only appears in nets
     BoardPartFacts board;                      ///< valid when found()
-    std::vector<std::string> unknownPins;      ///< pins the circuit uses that the board part lacks
 
     /// Node of each board pin, in board pin order.
     std::span<int> nodes() const { return array(0); }
@@ -61,14 +59,20 @@ struct PartUse {
 
     bool found() const { return index >= 0; }
     int pinCount() const { return pins; }
-    const std::string& kind() const { return *board.kind; }
-    const std::string& value() const { return *board.value; }
+    const std::string& kind(const Board& on) const {
+        const auto at = static_cast<std::size_t>(index);
+        return offboard ? on.offboard[at].kind : on.parts[at].kind;
+    }
+    const std::string& value(const Board& on) const {
+        const auto at = static_cast<std::size_t>(index);
+        return offboard ? on.offboard[at].value : on.parts[at].value;
+    }
     /// Whether the board value is `text` as written (without reading the board when both are
     /// short).
-    bool valueIs(const std::string& text) const {
+    bool valueIs(const Board& on, const std::string& text) const {
         const std::uint64_t key = ValueKey::of(text);
         if (key != ValueKey::kLong || board.valueKey != ValueKey::kLong) return key == board.valueKey;
-        return value() == text;
+        return value(on) == text;
     }
     /// Board pin name at `pin`.
     const std::string& pinName(int pin) const {
