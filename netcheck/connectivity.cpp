@@ -102,16 +102,15 @@ Connectivity::Connectivity(const Board& board)
     }
 
     // Pass 3: dense island ids in order of first node. Segment and lug ids already rise in node
-    // order, so numbering the sets in id order gives the same ids. A node's island is then its
-    // segment's: the table per segment is far smaller than one per hole, and needs no pass over
-    // the holes.
+    // order and a set's root is its smallest member, so a set gets the next id at its root and
+    // every later member takes its root's. A node's island is then its segment's: the table per
+    // segment is far smaller than one per hole, and needs no pass over the holes.
     const int setCount = segments + lugCount;
-    std::vector<int> islandOfRoot(static_cast<std::size_t>(setCount), -1);
     islandOfSegment_.resize(static_cast<std::size_t>(setCount));
     for (int s = 0; s < setCount; ++s) {
-        int& island = islandOfRoot[static_cast<std::size_t>(sets.find(s))];
-        if (island < 0) island = islandCount_++;
-        islandOfSegment_[static_cast<std::size_t>(s)] = island;
+        const int root = sets.find(s);
+        islandOfSegment_[static_cast<std::size_t>(s)] =
+            root == s ? islandCount_++ : islandOfSegment_[static_cast<std::size_t>(root)];
     }
 }
 

@@ -115,13 +115,25 @@ void findDanglingLeads(const CheckContext& context, const std::vector<char>* onl
 void findTrim(const CheckContext& context, std::vector<Finding>& warnings) {
     const Board& board = context.board();
     if (context.leads().empty()) return;
+    // The leads' holes, read from the board where rows and columns need no dividing out.
     int top = board.rows, bottom = -1, left = board.cols, right = -1;
-    for (const Lead& lead : context.leads()) {
-        const Hole hole = context.holeAt(lead.hole);
+    auto extend = [&](Hole hole) {
+        if (!board.contains(hole)) return;
         top = std::min(top, hole.row);
         bottom = std::max(bottom, hole.row);
         left = std::min(left, hole.col);
         right = std::max(right, hole.col);
+    };
+    for (const Part& part : board.parts) {
+        for (const Pin& pin : part.pins) extend(pin.hole);
+    }
+    for (const Link& link : board.links) {
+        extend(link.from);
+        extend(link.to);
+    }
+    for (const Wire& wire : board.wires) {
+        if (wire.from.isHole()) extend(*wire.from.hole);
+        if (wire.to.isHole()) extend(*wire.to.hole);
     }
     const int spare[4] = {top, board.rows - 1 - bottom, left, board.cols - 1 - right};
     const char* const what[4] = {"row", "row", "column", "column"};
@@ -140,10 +152,13 @@ void findTrim(const CheckContext& context, std::vector<Finding>& warnings) {
     finding.type = "trim";
     finding.severity = Severity::Warning;
     finding.holes = {Hole{top, left}, Hole{bottom, right}};
-    finding.message = "the board could lose " + parts + ": " + std::to_string(rows) + "x" +
-                      std::to_string(cols) + " holes (" + holeName(Hole{top, left}) + " to " +
-                      holeName(Hole{bottom, right}) + "), " + millimetres(cols * board.pitchMm) +
-                      " x " + millimetres(rows * board.pitchMm) + " mm";
+    std::string& text = finding.message;  // one buffer: this runs on every re-check
+    text.reserve(128 + parts.size());
+    text.append("the board could lose ").append(parts).append(": ");
+    text.append(std::to_string(rows)).append("x").append(std::to_string(cols)).append(" holes (");
+    text.append(holeName(Hole{top, left})).append(" to ").append(holeName(Hole{bottom, right}));
+    text.append("), ").append(millimetres(cols * board.pitchMm)).append(" x ");
+    text.append(millimetres(rows * board.pitchMm)).append(" mm");
     warnings.push_back(std::move(finding));
 }
 

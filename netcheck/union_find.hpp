@@ -1,4 +1,5 @@
-// Disjoint sets over 0..n-1 with path halving and union by size (private to the tracer).
+// Disjoint sets over 0..n-1 with path halving; each set's root is its smallest member (private to
+// the tracer, which numbers islands in order of their first segment).
 #pragma once
 
 #include <numeric>
@@ -9,8 +10,7 @@ namespace netcheck {
 
 class UnionFind {
 public:
-    explicit UnionFind(int count) : parent_(static_cast<std::size_t>(count)),
-                                    size_(static_cast<std::size_t>(count), 1) {
+    explicit UnionFind(int count) : parent_(static_cast<std::size_t>(count)) {
         std::iota(parent_.begin(), parent_.end(), 0);
     }
 
@@ -26,15 +26,13 @@ public:
         a = find(a);
         b = find(b);
         if (a == b) return;
-        if (size_[at(a)] < size_[at(b)]) std::swap(a, b);
+        if (b < a) std::swap(a, b);
         parent_[at(b)] = a;
-        size_[at(a)] += size_[at(b)];
     }
 
 private:
     static std::size_t at(int x) { return static_cast<std::size_t>(x); }
     std::vector<int> parent_;
-    std::vector<int> size_;
 };
 
 }  // namespace netcheck
