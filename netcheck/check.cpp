@@ -105,7 +105,8 @@ void findOpens(const CheckContext& context, const std::vector<PlacedNet>& nets,
     }
     const Connectivity repairedCopper(repaired);
     for (const PlacedNet* net : open) {
-        errors.push_back(locateOpen(context, *net, RepairedBoard{&repaired, &repairedCopper, &nets}));
+        errors.push_back(
+            locateOpen(context, *net, RepairedBoard{&repaired, &repairedCopper, &nets}));
     }
 }
 

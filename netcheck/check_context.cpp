@@ -4,9 +4,7 @@
 namespace netcheck {
 
 CheckContext::CheckContext(const Board& board)
-    : board_(&board),
-      copper_(board),
-      leadCount_(static_cast<std::size_t>(board.holeCount()), 0) {
+    : board_(&board), copper_(board), leadCount_(static_cast<std::size_t>(board.holeCount()), 0) {
     auto add = [&](Lead::Kind kind, int item, int sub, Hole hole) {
         if (!board.contains(hole)) return;
         const int index = holeIndex(hole);
@@ -23,7 +21,8 @@ CheckContext::CheckContext(const Board& board)
     for (std::size_t p = 0; p < board.parts.size(); ++p) {
         if (p + kPartsAhead < board.parts.size()) {
             for (const Pin& pin : board.parts[p + kPartsAhead].pins) {
-                if (board.contains(pin.hole)) __builtin_prefetch(&leadCount_[static_cast<std::size_t>(holeIndex(pin.hole))]);
+                if (board.contains(pin.hole))
+                    __builtin_prefetch(&leadCount_[static_cast<std::size_t>(holeIndex(pin.hole))]);
             }
         }
         const auto& pins = board.parts[p].pins;
@@ -68,7 +67,8 @@ CheckContext::CheckContext(const Board& board)
 int CheckContext::islandOfPartPin(int part, int pin) const {
     const int first = firstLeadOfPart_[static_cast<std::size_t>(part)];
     if (first >= 0) return leads_[static_cast<std::size_t>(first + pin)].island;
-    const Hole hole = board_->parts[static_cast<std::size_t>(part)].pins[static_cast<std::size_t>(pin)].hole;
+    const Hole hole =
+        board_->parts[static_cast<std::size_t>(part)].pins[static_cast<std::size_t>(pin)].hole;
     return copper_.islandOfHole(hole);
 }
 
@@ -115,7 +115,8 @@ int CheckContext::endpointNode(const Endpoint& end) const {
         const OffboardPart& part = board_->offboard[p];
         if (part.ref != end.lug.ref) continue;
         for (std::size_t k = 0; k < part.pins.size(); ++k) {
-            if (part.pins[k] == end.lug.pin) return lugNode(static_cast<int>(p), static_cast<int>(k));
+            if (part.pins[k] == end.lug.pin)
+                return lugNode(static_cast<int>(p), static_cast<int>(k));
         }
     }
     const Part* part = board_->findPart(end.lug.ref);

@@ -15,9 +15,9 @@ namespace netcheck {
 struct Lead {
     enum class Kind { PartPin, LinkEnd, WireEnd };
     Kind kind = Kind::PartPin;
-    int item = 0;  ///< index into board.parts, board.links or board.wires
-    int sub = 0;   ///< pin index, or 0/1 for the from/to end
-    int hole = 0;  ///< hole index row * cols + col
+    int item = 0;         ///< index into board.parts, board.links or board.wires
+    int sub = 0;          ///< pin index, or 0/1 for the from/to end
+    int hole = 0;         ///< hole index row * cols + col
     int island = 0;       ///< island of the hole
     bool onCut = false;   ///< the hole is hole-cut (the lead touches no copper)
     bool shared = false;  ///< another lead is in the same hole

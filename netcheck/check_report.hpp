@@ -18,24 +18,24 @@ enum class Severity { Error, Warning };
 struct Finding {
     std::string type;
     Severity severity = Severity::Error;
-    std::string message;                        ///< one line, with hole names
-    std::string ref;                            ///< part concerned
-    std::string net;                            ///< open: the net
-    std::vector<std::string> nets;              ///< short: every net in the island, sorted
-    std::vector<std::vector<PinRef>> pieces;    ///< open: pins of each piece
-    std::optional<Hole> hole;                   ///< shared-hole, pin-on-cut, dangling-lead
-    std::vector<Hole> path;                     ///< short: shortest copper path between two nets
-    std::vector<Hole> holes;                    ///< every hole worth highlighting
-    std::optional<Cut> suggestedCut;            ///< short: one cut that separates without opening
-    std::vector<Link> suggestedLinks;           ///< open: links that join the pieces
-    std::string fix;                            ///< the suggested fix in words (may be empty)
+    std::string message;                      ///< one line, with hole names
+    std::string ref;                          ///< part concerned
+    std::string net;                          ///< open: the net
+    std::vector<std::string> nets;            ///< short: every net in the island, sorted
+    std::vector<std::vector<PinRef>> pieces;  ///< open: pins of each piece
+    std::optional<Hole> hole;                 ///< shared-hole, pin-on-cut, dangling-lead
+    std::vector<Hole> path;                   ///< short: shortest copper path between two nets
+    std::vector<Hole> holes;                  ///< every hole worth highlighting
+    std::optional<Cut> suggestedCut;          ///< short: one cut that separates without opening
+    std::vector<Link> suggestedLinks;         ///< open: links that join the pieces
+    std::string fix;                          ///< the suggested fix in words (may be empty)
 };
 
 struct CheckReport {
     bool hasCircuit = false;
     std::vector<Finding> errors;
     std::vector<Finding> warnings;
-    std::vector<Island> islands;   ///< without a circuit: islands that hold at least one pin
+    std::vector<Island> islands;  ///< without a circuit: islands that hold at least one pin
     bool ok() const { return errors.empty(); }
 };
 

@@ -42,8 +42,8 @@ public:
         // Circuit refs mostly name board parts: room for a few missing ones, growing past that.
         uses_.reserve(board.parts.size() + board.offboard.size() + 16);
         order_.reserve(circuit.parts.size());
-        // Each board part is placed once, so the pool never grows past this and the spans into
-        // it stay valid.
+        // Each board part is placed once, so the pool never grows past this and the pin arrays
+        // in it stay put.
         pool_.reserve(PartUse::kArraysPerPin * boardPinCount(board));
         useOfPart_.reserve(board.parts.size());
         for (std::size_t p = 0; p < board.parts.size(); ++p) {
@@ -59,8 +59,7 @@ public:
     /// Call once the circuit's declared parts are mentioned, before any ref only named in nets.
     void endOfDeclaredParts() { declared_ = order_.size(); }
 
-    /// The use of a ref the circuit names.
-    PartUse& mention(std::string_view ref) { return at(mention(ref, RefTable::keyOf(ref))); }
+    /// Index of the use of a ref the circuit names (`key` is RefTable::keyOf(ref)).
     int mention(std::string_view ref, const RefTable::Key& key) {
         const int u = refs_.insert(ref, key, static_cast<int>(uses_.size()));
         if (u == static_cast<int>(uses_.size())) uses_.emplace_back().ref = ref;
@@ -78,7 +77,7 @@ public:
     /// Every use the circuit mentions, by ref, moved in place to the front of the uses (the rest
     /// follow): every later pass goes through the parts by ref, and on a large board would
     /// otherwise jump around in memory. Call once, after every ref has been mentioned; afterwards
-    /// only mentionsPart() and mentionsOffboard() may still be asked.
+    /// use indices (mention(), at()) no longer hold.
     std::span<PartUse> mentionedByRef() {
         // Declared parts come sorted from the circuit; only refs named just in nets need sorting.
         if (order_.size() > declared_) {
@@ -98,11 +97,13 @@ public:
         std::vector<int> use(uses_.size());
         std::iota(slot.begin(), slot.end(), 0);
         std::iota(use.begin(), use.end(), 0);
+        auto slotOf = [&](int u) {
+            return static_cast<std::size_t>(slot[static_cast<std::size_t>(u)]);
+        };
         for (std::size_t i = 0; i < order_.size(); ++i) {
-            if (i + kLookAhead < order_.size()) {
-                prefetchLines(&uses_[static_cast<std::size_t>(slot[static_cast<std::size_t>(order_[i + kLookAhead])])], 2);
-            }
-            const auto from = static_cast<std::size_t>(slot[static_cast<std::size_t>(order_[i])]);
+            if (i + kLookAhead < order_.size())
+                prefetchLines(&uses_[slotOf(order_[i + kLookAhead])], 2);
+            const std::size_t from = slotOf(order_[i]);
             if (from == i) continue;
             std::swap(uses_[i], uses_[from]);
             std::swap(use[i], use[from]);
@@ -122,7 +123,8 @@ public:
     std::vector<std::string> unknownPinsOf(std::string_view ref) {
         if (!unknownSorted_) {
             std::sort(unknownPins_.begin(), unknownPins_.end());
-            unknownPins_.erase(std::unique(unknownPins_.begin(), unknownPins_.end()), unknownPins_.end());
+            unknownPins_.erase(std::unique(unknownPins_.begin(), unknownPins_.end()),
+                               unknownPins_.end());
             unknownSorted_ = true;
         }
         std::vector<std::string> pins;
@@ -194,7 +196,7 @@ private:
     std::vector<int> useOfOffboard_;
     std::vector<std::pair<std::string_view, std::string_view>> unknownPins_;  // (ref, pin)
     bool unknownSorted_ = false;
-    std::vector<char> mentionedPart_;      // filled by mentionedByRef()
+    std::vector<char> mentionedPart_;  // filled by mentionedByRef()
     std::vector<char> mentionedOffboard_;
     std::vector<int> order_;
     std::size_t declared_ = 0;
@@ -269,11 +271,10 @@ void checkValue(const CheckContext& context, const PartUse& use, std::vector<Fin
     if (kind == nullptr) kind = findPartKind(use.circuitPart->kind);
     const bool quantity = kind != nullptr && kind->quantity;
     const std::string shown = onBoard.empty() ? "no value" : "\"" + onBoard + "\"";
-    Finding finding = refFinding(
-        quantity ? "value-mismatch" : "value-differs", quantity ? Severity::Error : Severity::Warning,
-        use.ref,
-        std::string(use.ref) + " is " + shown + " on the board but \"" + intended +
-            "\" in the circuit" + placeText(context, use));
+    Finding finding = refFinding(quantity ? "value-mismatch" : "value-differs",
+                                 quantity ? Severity::Error : Severity::Warning, use.ref,
+                                 std::string(use.ref) + " is " + shown + " on the board but \"" +
+                                     intended + "\" in the circuit" + placeText(context, use));
     for (int node : use.nodes()) {
         if (context.isHoleNode(node)) finding.holes.push_back(context.holeAt(node));
     }
@@ -299,9 +300,9 @@ void reportExtraParts(const CheckContext& context, const Uses& uses, std::vector
     for (std::size_t p = 0; p < board.offboard.size(); ++p) {
         if (uses.mentionsOffboard(p)) continue;
         const OffboardPart& part = board.offboard[p];
-        extra.push_back(refFinding("extra-part", Severity::Error, part.ref,
-                                   part.ref + " (" + part.kind +
-                                       ", off the board) is wired up but not in the circuit"));
+        extra.push_back(refFinding(
+            "extra-part", Severity::Error, part.ref,
+            part.ref + " (" + part.kind + ", off the board) is wired up but not in the circuit"));
     }
     std::stable_sort(extra.begin(), extra.end(),
                      [](const Finding& a, const Finding& b) { return a.ref < b.ref; });
@@ -330,7 +331,8 @@ public:
             prefetchLines(&uses_.at(p.use), 2);
         }
         for (std::size_t i = 0; i < size_; ++i) __builtin_prefetch(uses_.at(pending_[i].use).pool);
-        for (std::size_t i = 0; i < size_; ++i) finish_(uses_.at(pending_[i].use), pending_[i].item);
+        for (std::size_t i = 0; i < size_; ++i)
+            finish_(uses_.at(pending_[i].use), pending_[i].item);
         size_ = 0;
     }
 
@@ -353,7 +355,8 @@ void declareParts(const Board& board, const Circuit& circuit, Uses& uses) {
     auto declare = [&board](PartUse& use, const CircuitPart* part) {
         use.circuitPart = part;
         use.declaresPins = !part->pins.empty();
-        use.valueDiffers = use.found() && !part->value.empty() && !use.valueIs(board, part->value) &&
+        use.valueDiffers = use.found() && !part->value.empty() &&
+                           !use.valueIs(board, part->value) &&
                            !sameValue(use.value(board), part->value);
     };
     MentionBatch<const CircuitPart*, decltype(declare)> batch(uses, declare);
@@ -423,8 +426,8 @@ void placeNets(std::span<const PartUse> uses, const std::vector<std::string_view
     match.nets.resize(names.size());
     for (std::size_t n = 0; n < names.size(); ++n) {
         match.nets[n].name = names[n];
-        match.nets[n].pins = std::span<const NetPin>(match.netPins.data() + start[n],
-                                                     start[n + 1] - start[n]);
+        match.nets[n].pins =
+            std::span<const NetPin>(match.netPins.data() + start[n], start[n + 1] - start[n]);
     }
 }
 

@@ -1,6 +1,6 @@
-// Tracing the copper. Each row is scanned once into strip segments (runs of holes joined by copper);
-// only segments, off-board lugs, links and wires go through the union-find, so the work per hole
-// is a couple of array reads and writes.
+// Tracing the copper. Each row is scanned once into strip segments (runs of holes joined by
+// copper); only segments, off-board lugs, links and wires go through the union-find, so the work
+// per hole is a couple of array reads and writes.
 #include "connectivity.hpp"
 
 #include <algorithm>
@@ -11,7 +11,7 @@ namespace netcheck {
 
 namespace {
 
-constexpr unsigned char kHoleCutFlag = 1;   // the copper ring of this hole is removed
+constexpr unsigned char kHoleCutFlag = 1;     // the copper ring of this hole is removed
 constexpr unsigned char kNoJoinNextFlag = 2;  // no copper to the next hole along the strip
 
 // Per-hole flags from the copper pattern and the cuts.
@@ -72,7 +72,8 @@ Connectivity::Connectivity(const Board& board)
         segment += (holeCut_[static_cast<std::size_t>(i)] & kNoJoinNextFlag) != 0 ? 1 : 0;
     }
     const int segments = segment;
-    for (int l = 0; l < lugCount; ++l) segmentOfNode_[static_cast<std::size_t>(holes + l)] = segment++;
+    for (int l = 0; l < lugCount; ++l)
+        segmentOfNode_[static_cast<std::size_t>(holes + l)] = segment++;
 
     // Pass 2: links and wires join segments and lugs.
     UnionFind sets(segments + lugCount);
@@ -147,8 +148,7 @@ std::vector<Island> Connectivity::islands() const {
     for (int i = 0; i < islandCount_; ++i) result[static_cast<std::size_t>(i)].id = i;
     const int cols = board_->cols;
     for (int i = 0; i < board_->holeCount(); ++i) {
-        result[static_cast<std::size_t>(islandOfNode(i))]
-            .holes.push_back(Hole{i / cols, i % cols});
+        result[static_cast<std::size_t>(islandOfNode(i))].holes.push_back(Hole{i / cols, i % cols});
     }
     for (const Part& part : board_->parts) {
         for (const Pin& pin : part.pins) {
@@ -171,7 +171,8 @@ std::vector<std::vector<PinRef>> boardNets(const Board& board) {
     for (const Part& part : board.parts) {
         for (const Pin& pin : part.pins) {
             const int island = connectivity.islandOfHole(pin.hole);
-            if (island >= 0) byIsland[static_cast<std::size_t>(island)].push_back({part.ref, pin.name});
+            if (island >= 0)
+                byIsland[static_cast<std::size_t>(island)].push_back({part.ref, pin.name});
         }
     }
     for (const OffboardPart& part : board.offboard) {

@@ -14,8 +14,8 @@ namespace netcheck {
 /// A set of holes (and off-board lugs) joined by copper, links and wires.
 struct Island {
     int id = 0;
-    std::vector<Hole> holes;     ///< sorted
-    std::vector<PinRef> pins;    ///< on-board pins and off-board lugs in this island, sorted
+    std::vector<Hole> holes;   ///< sorted
+    std::vector<PinRef> pins;  ///< on-board pins and off-board lugs in this island, sorted
 };
 
 /// Result of tracing one board. Node ids: holes first (row * cols + col), then off-board lugs in
@@ -42,15 +42,19 @@ public:
     /// Island of a node id (see the class comment); -1 when out of range.
     int islandOfNode(int node) const {
         if (node < 0 || node >= nodeCount()) return -1;
-        return islandOfSegment_[static_cast<std::size_t>(segmentOfNode_[static_cast<std::size_t>(node)])];
+        return islandOfSegment_[static_cast<std::size_t>(
+            segmentOfNode_[static_cast<std::size_t>(node)])];
     }
     /// Asks for a node's island to be brought into cache ahead of islandOfNode(), for passes that
     /// look up many nodes scattered over a large board.
     void prefetchNode(int node) const {
-        if (node >= 0 && node < nodeCount()) __builtin_prefetch(&segmentOfNode_[static_cast<std::size_t>(node)]);
+        if (node >= 0 && node < nodeCount())
+            __builtin_prefetch(&segmentOfNode_[static_cast<std::size_t>(node)]);
     }
     /// The same for isHoleCutAt().
-    void prefetchHole(int hole) const { __builtin_prefetch(&holeCut_[static_cast<std::size_t>(hole)]); }
+    void prefetchHole(int hole) const {
+        __builtin_prefetch(&holeCut_[static_cast<std::size_t>(hole)]);
+    }
 
 private:
     const Board* board_;

@@ -52,9 +52,9 @@ void findSharedHoles(const CheckContext& context, std::vector<Finding>& errors) 
             names += (names.empty() ? "" : ", ") + context.leadName(*crowded[j]);
         }
         const Hole hole = context.holeAt(crowded[i]->hole);
-        errors.push_back(holeFinding("shared-hole", Severity::Error, hole,
-                                     holeName(hole) + " holds " +
-                                         plural(static_cast<int>(j - i), "lead") + ": " + names));
+        errors.push_back(holeFinding(
+            "shared-hole", Severity::Error, hole,
+            holeName(hole) + " holds " + plural(static_cast<int>(j - i), "lead") + ": " + names));
         i = j;
     }
 }
@@ -106,9 +106,9 @@ void findDanglingLeads(const CheckContext& context, const std::vector<char>* onl
                      [](const Lead* a, const Lead* b) { return a->hole < b->hole; });
     for (const Lead* lead : lonely) {
         const Hole hole = context.holeAt(lead->hole);
-        warnings.push_back(holeFinding("dangling-lead", Severity::Warning, hole,
-                                       context.leadName(*lead) + " in " + holeName(hole) +
-                                           " touches nothing else"));
+        warnings.push_back(holeFinding(
+            "dangling-lead", Severity::Warning, hole,
+            context.leadName(*lead) + " in " + holeName(hole) + " touches nothing else"));
     }
 }
 

@@ -8,8 +8,8 @@
 #include <algorithm>
 #include <cstdlib>
 #include <limits>
-#include <optional>
 #include <map>
+#include <optional>
 
 namespace netcheck {
 
@@ -37,9 +37,8 @@ std::vector<Piece> splitIntoPieces(const CheckContext& context, const PlacedNet&
                   [](const NetPin* a, const NetPin* b) { return *a < *b; });
         pieces.push_back(std::move(piece));
     }
-    std::sort(pieces.begin(), pieces.end(), [](const Piece& a, const Piece& b) {
-        return *a.pins.front() < *b.pins.front();
-    });
+    std::sort(pieces.begin(), pieces.end(),
+              [](const Piece& a, const Piece& b) { return *a.pins.front() < *b.pins.front(); });
     return pieces;
 }
 
@@ -91,7 +90,8 @@ std::vector<std::size_t> cutsNearNet(const CheckContext& context, const Board& b
     std::stable_sort(near.begin(), near.end(),
                      [](const auto& a, const auto& b) { return a.first < b.first; });
     std::vector<std::size_t> order;
-    for (std::size_t i = 0; i < near.size() && i < kMaxCutTrials; ++i) order.push_back(near[i].second);
+    for (std::size_t i = 0; i < near.size() && i < kMaxCutTrials; ++i)
+        order.push_back(near[i].second);
     return order;
 }
 
@@ -167,7 +167,8 @@ std::string piecesText(const CheckContext& context, const std::vector<Piece>& pi
 
 }  // namespace
 
-Finding locateOpen(const CheckContext& context, const PlacedNet& net, const RepairedBoard& repaired) {
+Finding locateOpen(const CheckContext& context, const PlacedNet& net,
+                   const RepairedBoard& repaired) {
     std::vector<Piece> pieces = splitIntoPieces(context, net);
     Finding finding;
     finding.type = "open";

@@ -34,7 +34,9 @@ Freedom freedomOf(const PartUse& use) {
     return Freedom::Fixed;
 }
 
-int islandOf(const PartUse& use, int pin) { return use.islands()[static_cast<std::size_t>(pin)]; }
+int islandOf(const PartUse& use, int pin) {
+    return use.islands()[static_cast<std::size_t>(pin)];
+}
 
 // One sortable number for a (net, island) pair.
 std::uint64_t key(int net, int island) {
@@ -99,7 +101,9 @@ private:
 
 // "Clearly better": the other way round explains at least two joins and more than twice as many
 // as the placement does.
-bool clearlyBetter(int other, int placed) { return other >= 2 && other > 2 * placed; }
+bool clearlyBetter(int other, int placed) {
+    return other >= 2 && other > 2 * placed;
+}
 
 std::string partLabel(const Board& board, const PartUse& use) {
     return std::string(use.ref) + " (" + use.kind(board) + ")";
@@ -209,13 +213,18 @@ void checkPot(const CheckContext& context, PartUse& use, NetCounts& counts,
     if (swapped > placed && wiperRight) {
         const int net1 = use.net()[static_cast<std::size_t>(one)];
         const int net3 = use.net()[static_cast<std::size_t>(three)];
-        auto netLabel = [&](int net) { return net < 0 ? std::string("nothing") : "net " + std::string(netNames[static_cast<std::size_t>(net)]); };
-        warnings.push_back(partFinding(
-            "pot-reversed", Severity::Warning, context, use,
-            partLabel(context.board(), use) + " end lugs 1 and 3 are swapped against the circuit: " +
-                context.nodeName(use.nodes()[static_cast<std::size_t>(one)]) + " is on " +
-                netLabel(net1) + ", " + context.nodeName(use.nodes()[static_cast<std::size_t>(three)]) +
-                " on " + netLabel(net3) + " (the control works backwards)"));
+        auto netLabel = [&](int net) {
+            return net < 0 ? std::string("nothing")
+                           : "net " + std::string(netNames[static_cast<std::size_t>(net)]);
+        };
+        warnings.push_back(
+            partFinding("pot-reversed", Severity::Warning, context, use,
+                        partLabel(context.board(), use) +
+                            " end lugs 1 and 3 are swapped against the circuit: " +
+                            context.nodeName(use.nodes()[static_cast<std::size_t>(one)]) +
+                            " is on " + netLabel(net1) + ", " +
+                            context.nodeName(use.nodes()[static_cast<std::size_t>(three)]) +
+                            " on " + netLabel(net3) + " (the control works backwards)"));
     } else {
         use.swapPins(one, three);
     }
@@ -232,13 +241,13 @@ void checkPolarised2(const CheckContext& context, PartUse& use, NetCounts& count
     use.swapPins(0, 1);
     counts.add(use, +1);
     if (!clearlyBetter(swapped, placed)) return;
-    const std::string carries = netAtFirst < 0
-                                    ? "where the other lead belongs"
-                                    : "which carries net " +
-                                          std::string(netNames[static_cast<std::size_t>(netAtFirst)]);
+    const std::string carries =
+        netAtFirst < 0
+            ? "where the other lead belongs"
+            : "which carries net " + std::string(netNames[static_cast<std::size_t>(netAtFirst)]);
     errors.push_back(partFinding("reversed-part", Severity::Error, context, use,
-                                 partLabel(context.board(), use) + " looks reversed: " +
-                                     use.pinName(0) + " is in " +
+                                 partLabel(context.board(), use) +
+                                     " looks reversed: " + use.pinName(0) + " is in " +
                                      context.nodeName(use.nodes()[0]) + ", " + carries));
 }
 
@@ -262,7 +271,8 @@ void checkPolarised3(const CheckContext& context, PartUse& use, NetCounts& count
     std::array<int, 3> best = order;
     int bestScore = placed;
     while (std::next_permutation(order.begin(), order.end())) {
-        for (std::size_t k = 0; k < 3; ++k) use.net()[k] = placedNets[static_cast<std::size_t>(order[k])];
+        for (std::size_t k = 0; k < 3; ++k)
+            use.net()[k] = placedNets[static_cast<std::size_t>(order[k])];
         const int score = counts.score(use);
         if (score > bestScore) {
             bestScore = score;
@@ -273,11 +283,10 @@ void checkPolarised3(const CheckContext& context, PartUse& use, NetCounts& count
     counts.add(use, +1);
     if (!clearlyBetter(bestScore, placed)) return;
     const std::array<int, 3> asPlaced{0, 1, 2};
-    errors.push_back(partFinding("reversed-part", Severity::Error, context, use,
-                                 partLabel(context.board(), use) +
-                                     " pins look out of order: the copper fits " +
-                                     pinList(context, use, best) + " (placed: " +
-                                     pinList(context, use, asPlaced) + ")"));
+    errors.push_back(partFinding(
+        "reversed-part", Severity::Error, context, use,
+        partLabel(context.board(), use) + " pins look out of order: the copper fits " +
+            pinList(context, use, best) + " (placed: " + pinList(context, use, asPlaced) + ")"));
 }
 
 }  // namespace
@@ -308,10 +317,17 @@ void orientParts(const CheckContext& context, std::span<PartUse> uses,
     }
     for (std::size_t u = 0; u < uses.size(); ++u) {
         switch (freedom[u]) {
-            case Freedom::PotEnds: checkPot(context, uses[u], counts, netNames, warnings); break;
-            case Freedom::Polarised2: checkPolarised2(context, uses[u], counts, netNames, errors); break;
-            case Freedom::Polarised3: checkPolarised3(context, uses[u], counts, errors); break;
-            default: break;
+            case Freedom::PotEnds:
+                checkPot(context, uses[u], counts, netNames, warnings);
+                break;
+            case Freedom::Polarised2:
+                checkPolarised2(context, uses[u], counts, netNames, errors);
+                break;
+            case Freedom::Polarised3:
+                checkPolarised3(context, uses[u], counts, errors);
+                break;
+            default:
+                break;
         }
     }
 }

@@ -18,10 +18,10 @@ namespace netcheck {
 /// What the board says of a placed part, read once in the board's order: later passes go
 /// through the circuit's order, and reading the board again there would jump around in memory.
 struct BoardPartFacts {
-    const Pin* pins = nullptr;              ///< on-board pins (null for an off-board part)
-    const std::string* lugs = nullptr;      ///< off-board lug names (null for an on-board part)
-    std::uint64_t valueKey = 0;             ///< ValueKey of the part's value
-    const PartKind* known = nullptr;        ///< the kind's table row; null for unknown kinds
+    const Pin* pins = nullptr;          ///< on-board pins (null for an off-board part)
+    const std::string* lugs = nullptr;  ///< off-board lug names (null for an on-board part)
+    std::uint64_t valueKey = 0;         ///< ValueKey of the part's value
+    const PartKind* known = nullptr;    ///< the kind's table row; null for unknown kinds
 };
 
 using PinKey = PackedName<std::uint32_t>;
@@ -35,14 +35,14 @@ struct PartUse {
 
     // What a net pin's lookup reads comes first, in one cache line.
     std::string_view ref;
-    int* pool = nullptr;                       ///< kArraysPerPin * pins ints
-    int pins = 0;                              ///< number of board pins
-    int index = -1;                            ///< index into board.parts / board.offboard; -1 missing
-    bool mentioned = false;                    ///< the circuit names this ref
-    bool offboard = false;                     ///< board part is in board.offboard
-    bool valueDiffers = false;                 ///< board and circuit values differ (when found)
-    bool declaresPins = false;                 ///< the circuit part lists its pin names
-    bool hasUnknownPins = false;               ///< the circuit uses pins the board part lacks
+    int* pool = nullptr;          ///< kArraysPerPin * pins ints
+    int pins = 0;                 ///< number of board pins
+    int index = -1;               ///< index into board.parts / board.offboard; -1 missing
+    bool mentioned = false;       ///< the circuit names this ref
+    bool offboard = false;        ///< board part is in board.offboard
+    bool valueDiffers = false;    ///< board and circuit values differ (when found)
+    bool declaresPins = false;    ///< the circuit part lists its pin names
+    bool hasUnknownPins = false;  ///< the circuit uses pins the board part lacks
     const CircuitPart* circuitPart = nullptr;  ///< null when the ref only appears in nets
     BoardPartFacts board;                      ///< valid when found()
 
@@ -71,7 +71,8 @@ struct PartUse {
     /// short).
     bool valueIs(const Board& on, const std::string& text) const {
         const std::uint64_t key = ValueKey::of(text);
-        if (key != ValueKey::kLong || board.valueKey != ValueKey::kLong) return key == board.valueKey;
+        if (key != ValueKey::kLong || board.valueKey != ValueKey::kLong)
+            return key == board.valueKey;
         return value(on) == text;
     }
     /// Board pin name at `pin`.

@@ -45,7 +45,9 @@ public:
 
     /// Asks for the slot of `key` to be brought into cache ahead of a lookup, so that a batch of
     /// lookups waits for memory once rather than once each.
-    void prefetch(const Key& key) const { __builtin_prefetch(&slots_[key.hash & (slots_.size() - 1)]); }
+    void prefetch(const Key& key) const {
+        __builtin_prefetch(&slots_[key.hash & (slots_.size() - 1)]);
+    }
 
     /// The value stored for `ref`; when absent, stores `value` and returns it. `ref` must outlive
     /// the table.
