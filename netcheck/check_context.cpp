@@ -3,28 +3,22 @@
 
 namespace netcheck {
 
-CheckContext::CheckContext(const Board& board)
-    : board_(&board), copper_(board), leadCount_(static_cast<std::size_t>(board.holeCount()), 0) {
+CheckContext::CheckContext(const Board& board) : board_(&board), copper_(board) {
+    hasLead_.reset(board.holeCount());
+    sharedHole_.reset(board.holeCount());
     auto add = [&](Lead::Kind kind, int item, int sub, Hole hole) {
         if (!board.contains(hole)) return;
         const int index = holeIndex(hole);
         leads_.push_back(Lead{kind, item, sub, index});
-        unsigned char& count = leadCount_[static_cast<std::size_t>(index)];
-        if (count < 255) ++count;
+        if (hasLead_.test(index)) sharedHole_.set(index);
+        hasLead_.set(index);
     };
     std::size_t leadCount = 2 * (board.links.size() + board.wires.size());
     for (const Part& part : board.parts) leadCount += part.pins.size();
     leads_.reserve(leadCount);
     lugBase_.reserve(board.offboard.size());
     firstLeadOfPart_.reserve(board.parts.size());
-    constexpr std::size_t kPartsAhead = 16;  // parts lie scattered: count their holes early
     for (std::size_t p = 0; p < board.parts.size(); ++p) {
-        if (p + kPartsAhead < board.parts.size()) {
-            for (const Pin& pin : board.parts[p + kPartsAhead].pins) {
-                if (board.contains(pin.hole))
-                    __builtin_prefetch(&leadCount_[static_cast<std::size_t>(holeIndex(pin.hole))]);
-            }
-        }
         const auto& pins = board.parts[p].pins;
         const std::size_t first = leads_.size();
         for (std::size_t k = 0; k < pins.size(); ++k) {
@@ -48,14 +42,13 @@ CheckContext::CheckContext(const Board& board)
     for (std::size_t i = 0; i < leads_.size(); ++i) {
         if (i + kLookAhead < leads_.size()) {
             const int ahead = leads_[i + kLookAhead].hole;
-            copper_.prefetchNode(ahead);
             copper_.prefetchHole(ahead);
-            __builtin_prefetch(&leadCount_[static_cast<std::size_t>(ahead)]);
+            sharedHole_.prefetch(ahead);
         }
         Lead& lead = leads_[i];
         lead.island = copper_.islandOfNode(lead.hole);
         lead.onCut = copper_.isHoleCutAt(lead.hole);
-        lead.shared = leadsIn(lead.hole) > 1;
+        lead.shared = sharedHole_.test(lead.hole);
     }
     int base = board.holeCount();
     for (const OffboardPart& part : board.offboard) {
@@ -73,7 +66,7 @@ int CheckContext::islandOfPartPin(int part, int pin) const {
 }
 
 bool CheckContext::isFree(int hole) const {
-    return leadCount_[static_cast<std::size_t>(hole)] == 0 && !copper_.isHoleCut(holeAt(hole));
+    return !holdsLead(hole) && !copper_.isHoleCutAt(hole);
 }
 
 std::string CheckContext::nodeName(int node) const {

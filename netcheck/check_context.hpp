@@ -8,6 +8,7 @@
 
 #include "board.hpp"
 #include "connectivity.hpp"
+#include "hole_bits.hpp"
 
 namespace netcheck {
 
@@ -35,8 +36,8 @@ public:
     /// Island of pin `pin` of board part `part` (-1 when its hole is off the board); read from
     /// the part's leads, which lie in board order.
     int islandOfPartPin(int part, int pin) const;
-    /// Leads in a hole (saturates at 255).
-    int leadsIn(int hole) const { return leadCount_[static_cast<std::size_t>(hole)]; }
+    /// Something is soldered in the hole.
+    bool holdsLead(int hole) const { return hasLead_.test(hole); }
     /// Copper present and nothing soldered in it: a place for a new link or a hole cut.
     bool isFree(int hole) const;
 
@@ -59,7 +60,8 @@ private:
     Connectivity copper_;
     std::vector<Lead> leads_;
     std::vector<int> firstLeadOfPart_;  // index of a part's first lead; -1 if a pin has none
-    std::vector<unsigned char> leadCount_;
+    HoleBits hasLead_;
+    HoleBits sharedHole_;  // two or more leads
     std::vector<int> lugBase_;
 };
 

@@ -1,6 +1,8 @@
-// Tracing the copper. Each row is scanned once into strip segments (runs of holes joined by
-// copper); only segments, off-board lugs, links and wires go through the union-find, so the work
-// per hole is a couple of array reads and writes.
+// Tracing the copper. Strips fall into segments (runs of holes joined by copper) at breaks, kept
+// as one bit per hole; a hole's segment is the number of breaks before it, counted from the bits.
+// Only segments, off-board lugs, links and wires go through the union-find, so the tracer does no
+// work per hole at all: its cost follows the cuts, links and wires, and a word of bits per 64
+// holes.
 #include "connectivity.hpp"
 
 #include <algorithm>
@@ -10,33 +12,6 @@
 namespace netcheck {
 
 namespace {
-
-constexpr unsigned char kHoleCutFlag = 1;     // the copper ring of this hole is removed
-constexpr unsigned char kNoJoinNextFlag = 2;  // no copper to the next hole along the strip
-
-// Per-hole flags from the copper pattern and the cuts.
-std::vector<unsigned char> copperFlags(const Board& board) {
-    const int cols = board.cols;
-    std::vector<unsigned char> flags(static_cast<std::size_t>(board.holeCount()), 0);
-    if (board.copper == CopperPattern::Pads) {
-        std::fill(flags.begin(), flags.end(), kNoJoinNextFlag);
-    }
-    for (int r = 0; r < board.rows; ++r) {
-        flags[static_cast<std::size_t>(r * cols + cols - 1)] |= kNoJoinNextFlag;
-    }
-    for (const Cut& cut : board.cuts) {
-        if (!board.contains(cut.hole)) continue;
-        const std::size_t i = static_cast<std::size_t>(cut.hole.row * cols + cut.hole.col);
-        if (cut.kind == Cut::Kind::Between) {
-            flags[i] |= kNoJoinNextFlag;
-            continue;
-        }
-        // A hole without copper joins neither neighbour along the strip.
-        flags[i] |= kHoleCutFlag | kNoJoinNextFlag;
-        if (cut.hole.col > 0) flags[i - 1] |= kNoJoinNextFlag;
-    }
-    return flags;
-}
 
 // Node id of each off-board lug, keyed by its pin reference (sorted).
 std::vector<std::pair<PinRef, int>> lugNodes(const Board& board) {
@@ -59,33 +34,20 @@ int findLug(const std::vector<std::pair<PinRef, int>>& lugs, const PinRef& pin) 
 }  // namespace
 
 Connectivity::Connectivity(const Board& board)
-    : board_(&board), holeCut_(copperFlags(board)), pinNodes_(lugNodes(board)) {
-    const int holes = board.holeCount();
+    : board_(&board), holeCount_(board.holeCount()), pinNodes_(lugNodes(board)) {
+    markBreaks(board);
+    segmentCount_ = breaks_.countAll();
     const int lugCount = static_cast<int>(pinNodes_.size());
-    segmentOfNode_.resize(static_cast<std::size_t>(holes + lugCount));
 
-    // Pass 1: strip segment of every hole (a running count of the breaks before it), then one
-    // segment per lug.
-    int segment = 0;
-    for (int i = 0; i < holes; ++i) {
-        segmentOfNode_[static_cast<std::size_t>(i)] = segment;
-        segment += (holeCut_[static_cast<std::size_t>(i)] & kNoJoinNextFlag) != 0 ? 1 : 0;
-    }
-    const int segments = segment;
-    for (int l = 0; l < lugCount; ++l)
-        segmentOfNode_[static_cast<std::size_t>(holes + l)] = segment++;
-
-    // Pass 2: links and wires join segments and lugs.
-    UnionFind sets(segments + lugCount);
+    // Links and wires join segments and lugs.
+    UnionFind sets(segmentCount_ + lugCount);
     auto setOfHole = [&](Hole hole) -> int {
-        return board.contains(hole)
-                   ? segmentOfNode_[static_cast<std::size_t>(hole.row * board.cols + hole.col)]
-                   : -1;
+        return board.contains(hole) ? segmentOf(hole.row * board.cols + hole.col) : -1;
     };
     auto setOf = [&](const Endpoint& end) -> int {
         if (end.isHole()) return setOfHole(*end.hole);
         const int node = findLug(pinNodes_, end.lug);
-        if (node >= 0) return segmentOfNode_[static_cast<std::size_t>(node)];
+        if (node >= 0) return segmentOf(node);
         // A wire may also end on the lead of an on-board part: it joins that lead's hole.
         const Part* part = board.findPart(end.lug.ref);
         const Pin* pin = part ? part->findPin(end.lug.pin) : nullptr;
@@ -102,16 +64,38 @@ Connectivity::Connectivity(const Board& board)
         if (a >= 0 && b >= 0) sets.unite(a, b);
     }
 
-    // Pass 3: dense island ids in order of first node. Segment and lug ids already rise in node
-    // order and a set's root is its smallest member, so a set gets the next id at its root and
-    // every later member takes its root's. A node's island is then its segment's: the table per
-    // segment is far smaller than one per hole, and needs no pass over the holes.
-    const int setCount = segments + lugCount;
+    // Dense island ids in order of first node. Segment and lug ids already rise in node order and
+    // a set's root is its smallest member, so a set gets the next id at its root and every later
+    // member takes its root's. A node's island is then its segment's: the table per segment is far
+    // smaller than one per hole, and needs no pass over the holes.
+    const int setCount = segmentCount_ + lugCount;
     islandOfSegment_.resize(static_cast<std::size_t>(setCount));
     for (int s = 0; s < setCount; ++s) {
         const int root = sets.find(s);
         islandOfSegment_[static_cast<std::size_t>(s)] =
             root == s ? islandCount_++ : islandOfSegment_[static_cast<std::size_t>(root)];
+    }
+}
+
+// Breaks from the copper pattern and the cuts: the last hole of every strip, every hole of pad
+// board, a cut between two holes, and both sides of a hole cut (a hole without copper joins
+// neither neighbour).
+void Connectivity::markBreaks(const Board& board) {
+    const int cols = board.cols;
+    if (board.copper == CopperPattern::Pads) {
+        breaks_.resetAllSet(holeCount_);
+    } else {
+        breaks_.reset(holeCount_);
+        for (int r = 0; r < board.rows; ++r) breaks_.set(r * cols + cols - 1);
+    }
+    holeCut_.reset(holeCount_);
+    for (const Cut& cut : board.cuts) {
+        if (!board.contains(cut.hole)) continue;
+        const int i = cut.hole.row * cols + cut.hole.col;
+        breaks_.set(i);
+        if (cut.kind == Cut::Kind::Between) continue;
+        holeCut_.set(i);
+        if (cut.hole.col > 0) breaks_.set(i - 1);
     }
 }
 
@@ -129,18 +113,15 @@ int Connectivity::islandOfPin(const PinRef& pin) const {
 }
 
 bool Connectivity::isHoleCut(Hole hole) const {
-    return board_->contains(hole) &&
-           (holeCut_[static_cast<std::size_t>(hole.row * board_->cols + hole.col)] & kHoleCutFlag);
+    return board_->contains(hole) && holeCut_.test(hole.row * board_->cols + hole.col);
 }
 
 bool Connectivity::isHoleCutAt(int hole) const {
-    return (holeCut_[static_cast<std::size_t>(hole)] & kHoleCutFlag) != 0;
+    return holeCut_.test(hole);
 }
 
 bool Connectivity::joinsNext(Hole hole) const {
-    return board_->contains(hole) &&
-           !(holeCut_[static_cast<std::size_t>(hole.row * board_->cols + hole.col)] &
-             kNoJoinNextFlag);
+    return board_->contains(hole) && !breaks_.test(hole.row * board_->cols + hole.col);
 }
 
 std::vector<Island> Connectivity::islands() const {

@@ -7,7 +7,7 @@
 
 #include "board.hpp"
 #include "circuit.hpp"
-#include "default_init_allocator.hpp"
+#include "hole_bits.hpp"
 
 namespace netcheck {
 
@@ -38,29 +38,33 @@ public:
     /// True when copper joins `hole` with the next hole along its strip (column + 1).
     bool joinsNext(Hole hole) const;
     /// Number of nodes: holes, then off-board lugs.
-    int nodeCount() const { return static_cast<int>(segmentOfNode_.size()); }
+    int nodeCount() const { return holeCount_ + static_cast<int>(pinNodes_.size()); }
     /// Island of a node id (see the class comment); -1 when out of range.
     int islandOfNode(int node) const {
         if (node < 0 || node >= nodeCount()) return -1;
-        return islandOfSegment_[static_cast<std::size_t>(
-            segmentOfNode_[static_cast<std::size_t>(node)])];
+        return islandOfSegment_[static_cast<std::size_t>(segmentOf(node))];
     }
-    /// Asks for a node's island to be brought into cache ahead of islandOfNode(), for passes that
-    /// look up many nodes scattered over a large board.
-    void prefetchNode(int node) const {
-        if (node >= 0 && node < nodeCount())
-            __builtin_prefetch(&segmentOfNode_[static_cast<std::size_t>(node)]);
-    }
-    /// The same for isHoleCutAt().
+    /// Asks for what islandOfNode() and isHoleCutAt() read of a hole to be brought into cache
+    /// ahead of them, for passes that look up many holes scattered over a large board.
     void prefetchHole(int hole) const {
-        __builtin_prefetch(&holeCut_[static_cast<std::size_t>(hole)]);
+        breaks_.prefetchCount(hole);
+        holeCut_.prefetch(hole);
     }
 
 private:
+    void markBreaks(const Board& board);
+    // A hole's strip segment is the number of breaks along the strips before it (a break: no
+    // copper to the next hole); lugs follow the holes' segments, one each.
+    int segmentOf(int node) const {
+        return node < holeCount_ ? breaks_.countBefore(node) : segmentCount_ + node - holeCount_;
+    }
+
     const Board* board_;
-    std::vector<int, DefaultInitAllocator<int>> segmentOfNode_;  // every entry set while tracing
+    int holeCount_ = 0;
+    int segmentCount_ = 0;  // strip segments, lugs not counted
+    HoleBits breaks_;
+    HoleBits holeCut_;
     std::vector<int> islandOfSegment_;
-    std::vector<unsigned char> holeCut_;
     std::vector<std::pair<PinRef, int>> pinNodes_;  // sorted by PinRef, for islandOfPin
     int islandCount_ = 0;
 };

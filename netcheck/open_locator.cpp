@@ -49,7 +49,7 @@ void collectFreeHoles(const CheckContext& context, const Connectivity& copper,
     const int holes = context.board().holeCount();
     for (int hole = 0; hole < holes; ++hole) {
         auto it = byIsland.find(copper.islandOfNode(hole));
-        const bool free = context.leadsIn(hole) == 0 && !copper.isHoleCut(context.holeAt(hole));
+        const bool free = !context.holdsLead(hole) && !copper.isHoleCut(context.holeAt(hole));
         if (it != byIsland.end() && free) it->second->freeHoles.push_back(hole);
     }
 }
