@@ -3,6 +3,7 @@
 #include "lead_findings.hpp"
 
 #include <algorithm>
+#include <charconv>
 #include <cmath>
 #include <cstdio>
 
@@ -20,20 +21,32 @@ Finding holeFinding(std::string type, Severity severity, Hole hole, std::string 
     return finding;
 }
 
-std::string plural(int count, const std::string& word) {
-    return std::to_string(count) + " " + word + (count == 1 ? "" : "s");
+// The trim warning is rebuilt on every re-check, so its text is appended to one buffer, with
+// numbers written by to_chars rather than through temporary strings or printf.
+void appendNumber(std::string& text, long long number) {
+    char digits[24];
+    const auto end = std::to_chars(digits, digits + sizeof digits, number).ptr;
+    text.append(digits, end);
 }
 
-// One decimal, rounded half away from zero (the editor re-checks on every edit, and printf's
-// float formatting costs more than the rest of a small board's check).
-std::string millimetres(double value) {
+void appendPlural(std::string& text, int count, std::string_view word) {
+    appendNumber(text, count);
+    text.append(" ").append(word);
+    if (count != 1) text += 's';
+}
+
+// One decimal, rounded half away from zero.
+void appendMillimetres(std::string& text, double value) {
     if (!(value >= 0 && value < 1e15)) {  // absurd pitches still print
-        char text[32];
-        std::snprintf(text, sizeof text, "%.1f", value);
-        return text;
+        char digits[32];
+        std::snprintf(digits, sizeof digits, "%.1f", value);
+        text += digits;
+        return;
     }
     const long long tenths = std::llround(value * 10);
-    return std::to_string(tenths / 10) + "." + std::to_string(tenths % 10);
+    appendNumber(text, tenths / 10);
+    text += '.';
+    appendNumber(text, tenths % 10);
 }
 
 }  // namespace
@@ -52,9 +65,9 @@ void findSharedHoles(const CheckContext& context, std::vector<Finding>& errors) 
             names += (names.empty() ? "" : ", ") + context.leadName(*crowded[j]);
         }
         const Hole hole = context.holeAt(crowded[i]->hole);
-        errors.push_back(holeFinding(
-            "shared-hole", Severity::Error, hole,
-            holeName(hole) + " holds " + plural(static_cast<int>(j - i), "lead") + ": " + names));
+        std::string message = holeName(hole) + " holds ";
+        appendPlural(message, static_cast<int>(j - i), "lead");
+        errors.push_back(holeFinding("shared-hole", Severity::Error, hole, message + ": " + names));
         i = j;
     }
 }
@@ -138,27 +151,35 @@ void findTrim(const CheckContext& context, std::vector<Finding>& warnings) {
     const int spare[4] = {top, board.rows - 1 - bottom, left, board.cols - 1 - right};
     const char* const what[4] = {"row", "row", "column", "column"};
     const char* const where[4] = {" at the top", " at the bottom", " at the left", " at the right"};
-    std::string parts;
-    for (int i = 0; i < 4; ++i) {
-        if (spare[i] == 0) continue;
-        parts += (parts.empty() ? "" : ", ") + plural(spare[i], what[i]) + where[i];
-    }
-    if (parts.empty()) return;
-    const std::size_t lastComma = parts.rfind(", ");
-    if (lastComma != std::string::npos) parts.replace(lastComma, 2, " and ");
+    const int sides =
+        static_cast<int>(std::count_if(spare, spare + 4, [](int n) { return n > 0; }));
+    if (sides == 0) return;
     const int rows = bottom - top + 1;
     const int cols = right - left + 1;
     Finding finding;
     finding.type = "trim";
     finding.severity = Severity::Warning;
     finding.holes = {Hole{top, left}, Hole{bottom, right}};
-    std::string& text = finding.message;  // one buffer: this runs on every re-check
-    text.reserve(128 + parts.size());
-    text.append("the board could lose ").append(parts).append(": ");
-    text.append(std::to_string(rows)).append("x").append(std::to_string(cols)).append(" holes (");
-    text.append(holeName(Hole{top, left})).append(" to ").append(holeName(Hole{bottom, right}));
-    text.append("), ").append(millimetres(cols * board.pitchMm)).append(" x ");
-    text.append(millimetres(rows * board.pitchMm)).append(" mm");
+    std::string& text = finding.message;
+    text.reserve(160);
+    text.append("the board could lose ");
+    for (int i = 0, listed = 0; i < 4; ++i) {
+        if (spare[i] == 0) continue;
+        if (listed > 0) text.append(listed + 1 == sides ? " and " : ", ");
+        appendPlural(text, spare[i], what[i]);
+        text.append(where[i]);
+        ++listed;
+    }
+    text.append(": ");
+    appendNumber(text, rows);
+    text += 'x';
+    appendNumber(text, cols);
+    text.append(" holes (").append(holeName(Hole{top, left})).append(" to ");
+    text.append(holeName(Hole{bottom, right})).append("), ");
+    appendMillimetres(text, cols * board.pitchMm);
+    text.append(" x ");
+    appendMillimetres(text, rows * board.pitchMm);
+    text.append(" mm");
     warnings.push_back(std::move(finding));
 }
 
