@@ -50,6 +50,11 @@ public:
         breaks_.prefetchCount(hole);
         holeCut_.prefetch(hole);
     }
+    /// The second stage, a few lookups after prefetchHole(hole): asks for the hole's island,
+    /// which can only be found once the hole's bits have arrived.
+    void prefetchIsland(int hole) const {
+        __builtin_prefetch(&islandOfSegment_[static_cast<std::size_t>(segmentOf(hole))]);
+    }
 
 private:
     void markBreaks(const Board& board);
