@@ -45,7 +45,8 @@ CheckContext::CheckContext(const Board& board) : board_(&board), copper_(board) 
             copper_.prefetchHole(ahead);
             sharedHole_.prefetch(ahead);
         }
-        if (i + kLookAhead / 2 < leads_.size()) copper_.prefetchIsland(leads_[i + kLookAhead / 2].hole);
+        if (i + kLookAhead / 2 < leads_.size())
+            copper_.prefetchIsland(leads_[i + kLookAhead / 2].hole);
         Lead& lead = leads_[i];
         lead.island = copper_.islandOfNode(lead.hole);
         lead.onCut = copper_.isHoleCutAt(lead.hole);

@@ -40,7 +40,10 @@ public:
         : context_(context), refs_(context.board().parts.size() + context.board().offboard.size()) {
         const Board& board = context.board();
         // Circuit refs mostly name board parts: room for a few missing ones, growing past that.
-        uses_.reserve(board.parts.size() + board.offboard.size() + 16);
+        // (Kept under 1 KB on a small board, where a larger block would make malloc tidy up its
+        // free lists on every check.)
+        const std::size_t boardParts = board.parts.size() + board.offboard.size();
+        uses_.reserve(boardParts + boardParts / 8 + 1);
         order_.reserve(circuit.parts.size());
         // Each board part is placed once, so the pool never grows past this and the pin arrays
         // in it stay put.
