@@ -59,7 +59,8 @@ struct Link {
     bool operator==(const Link&) const = default;
 };
 
-/// A part off the board (pot, jack, switch, DC jack, battery snap, panel LED), joined only by wires.
+/// A part off the board (pot, jack, switch, DC jack, battery snap, panel LED), joined only by
+/// wires.
 struct OffboardPart {
     std::string ref;
     std::string kind;
@@ -81,7 +82,8 @@ struct Endpoint {
     bool operator==(const Endpoint&) const = default;
 };
 
-/// A flying lead. `color` is free text in the maker's words ("red", "black", "yellow"); may be empty.
+/// A flying lead. `color` is free text in the maker's words ("red", "black", "yellow"); may be
+/// empty.
 struct Wire {
     Endpoint from;
     Endpoint to;

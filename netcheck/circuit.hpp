@@ -34,9 +34,9 @@ struct CircuitPart {
 
 /// What the schematic says must be joined, and nothing else.
 struct Circuit {
-    std::map<std::string, CircuitPart> parts;          ///< by ref
-    std::map<std::string, std::vector<PinRef>> nets;   ///< net name -> its pins
-    nlohmann::json extra = nlohmann::json::object();   ///< unknown keys, kept for round trips
+    std::map<std::string, CircuitPart> parts;         ///< by ref
+    std::map<std::string, std::vector<PinRef>> nets;  ///< net name -> its pins
+    nlohmann::json extra = nlohmann::json::object();  ///< unknown keys, kept for round trips
     bool operator==(const Circuit&) const = default;
 
     /// Name of the net holding `pin`, if any.

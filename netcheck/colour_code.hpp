@@ -7,8 +7,22 @@
 
 namespace netcheck {
 
-enum class BandColour { Black, Brown, Red, Orange, Yellow, Green, Blue, Violet, Grey, White,
-                        Gold, Silver, Pink, None };
+enum class BandColour {
+    Black,
+    Brown,
+    Red,
+    Orange,
+    Yellow,
+    Green,
+    Blue,
+    Violet,
+    Grey,
+    White,
+    Gold,
+    Silver,
+    Pink,
+    None
+};
 
 std::string_view bandName(BandColour colour);
 

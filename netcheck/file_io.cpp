@@ -44,17 +44,28 @@ private:
 std::string reason(int error) {
     switch (error) {
         case EACCES:
-        case EPERM: return "the folder is read-only (no permission to write there)";
-        case EROFS: return "the disk is mounted read-only";
-        case ENOENT: return "the folder does not exist";
-        case ENOTDIR: return "part of the path is not a folder";
-        case EISDIR: return "it is a folder";
-        case ENOSPC: return "the disk is full";
-        case EDQUOT: return "the disk quota is used up";
-        case EFBIG: return "the file is too large for the disk";
-        case EIO: return "input/output error (the disk may be failing)";
-        case ENAMETOOLONG: return "the name is too long";
-        default: return std::generic_category().message(error);
+        case EPERM:
+            return "the folder is read-only (no permission to write there)";
+        case EROFS:
+            return "the disk is mounted read-only";
+        case ENOENT:
+            return "the folder does not exist";
+        case ENOTDIR:
+            return "part of the path is not a folder";
+        case EISDIR:
+            return "it is a folder";
+        case ENOSPC:
+            return "the disk is full";
+        case EDQUOT:
+            return "the disk quota is used up";
+        case EFBIG:
+            return "the file is too large for the disk";
+        case EIO:
+            return "input/output error (the disk may be failing)";
+        case ENAMETOOLONG:
+            return "the name is too long";
+        default:
+            return std::generic_category().message(error);
     }
 }
 
@@ -96,7 +107,8 @@ int keepBackup(const fs::path& target) {
 
 // Makes the rename itself durable; some file systems cannot sync a folder, which is harmless.
 void syncFolder(const fs::path& folder) {
-    const int fd = ::open(folder.empty() ? "." : folder.c_str(), O_RDONLY | O_DIRECTORY | O_CLOEXEC);
+    const int fd =
+        ::open(folder.empty() ? "." : folder.c_str(), O_RDONLY | O_DIRECTORY | O_CLOEXEC);
     if (fd < 0) return;
     (void)::fsync(fd);
     ::close(fd);

@@ -21,6 +21,7 @@ struct RepairedBoard {
 /// The open of `net`, whose pins lie in more than one island. The fix is the removal of one
 /// existing cut when that alone mends the net without shorting anything (a cut in the wrong
 /// place), else links through the nearest free holes.
-Finding locateOpen(const CheckContext& context, const PlacedNet& net, const RepairedBoard& repaired);
+Finding locateOpen(const CheckContext& context, const PlacedNet& net,
+                   const RepairedBoard& repaired);
 
 }  // namespace netcheck

@@ -9,13 +9,13 @@ namespace netcheck {
 
 /// One kind of part. To add a kind, add a row to the table in part_kinds.cpp.
 struct PartKind {
-    std::string_view name;            ///< file name of the kind, e.g. "electrolytic"
-    std::string_view label;           ///< for menus, e.g. "Electrolytic capacitor"
+    std::string_view name;               ///< file name of the kind, e.g. "electrolytic"
+    std::string_view label;              ///< for menus, e.g. "Electrolytic capacitor"
     std::vector<std::string_view> pins;  ///< default pin names in order; empty = numbered 1..N
-    bool polarised = false;           ///< pin names must match exactly (no end-for-end swap)
-    bool quantity = false;            ///< value is a quantity (compared numerically)
-    bool offboard = false;            ///< normally lives off the board
-    int span = 0;                     ///< default lead span in holes for two-lead parts lying flat
+    bool polarised = false;              ///< pin names must match exactly (no end-for-end swap)
+    bool quantity = false;               ///< value is a quantity (compared numerically)
+    bool offboard = false;               ///< normally lives off the board
+    int span = 0;  ///< default lead span in holes for two-lead parts lying flat
 };
 
 std::span<const PartKind> partKinds();

@@ -1,5 +1,6 @@
 // Report printing. Text is for people at the bench: one line per finding, every line naming holes,
-// then a summary. JSON is the CLI contract: stable key order, fields only where they mean something.
+// then a summary. JSON is the CLI contract: stable key order, fields only where they mean
+// something.
 #include "report_format.hpp"
 
 namespace netcheck {
@@ -11,8 +12,8 @@ std::string plural(std::size_t count, const char* word) {
 }
 
 std::string findingLine(const Finding& finding) {
-    std::string line = (finding.severity == Severity::Error ? "error " : "warning ") + finding.type +
-                       " " + finding.message;
+    std::string line = (finding.severity == Severity::Error ? "error " : "warning ") +
+                       finding.type + " " + finding.message;
     if (!finding.fix.empty()) line += "; " + finding.fix;
     return line;
 }
@@ -21,7 +22,8 @@ std::string findingLine(const Finding& finding) {
 std::string pinWithHole(const Board& board, const PinRef& pin) {
     const Part* part = board.findPart(pin.ref);
     const Pin* onBoard = part ? part->findPin(pin.pin) : nullptr;
-    return onBoard ? pin.name() + " (" + holeName(onBoard->hole) + ")" : pin.name() + " (off board)";
+    return onBoard ? pin.name() + " (" + holeName(onBoard->hole) + ")"
+                   : pin.name() + " (off board)";
 }
 
 std::string islandLine(const Board& board, const Island& island) {
@@ -92,8 +94,8 @@ std::string formatReportText(const CheckReport& report, const Board& board) {
     }
     for (const Finding& finding : report.errors) text += findingLine(finding) + "\n";
     for (const Finding& finding : report.warnings) text += findingLine(finding) + "\n";
-    text += plural(report.errors.size(), "error") + ", " + plural(report.warnings.size(), "warning") +
-            "\n";
+    text += plural(report.errors.size(), "error") + ", " +
+            plural(report.warnings.size(), "warning") + "\n";
     return text;
 }
 
@@ -105,8 +107,8 @@ nlohmann::ordered_json reportJson(const CheckReport& report) {
     if (!report.hasCircuit) {
         json["islands"] = nlohmann::ordered_json::array();
         for (const Island& island : report.islands) {
-            json["islands"].push_back({{"pins", pinNames(island.pins)},
-                                       {"holes", holeNames(island.holes)}});
+            json["islands"].push_back(
+                {{"pins", pinNames(island.pins)}, {"holes", holeNames(island.holes)}});
         }
     }
     return json;
