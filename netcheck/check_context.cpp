@@ -18,7 +18,9 @@ CheckContext::CheckContext(const Board& board) : board_(&board), copper_(board) 
     leads_.reserve(leadCount);
     lugBase_.reserve(board.offboard.size());
     firstLeadOfPart_.reserve(board.parts.size());
+    constexpr std::size_t kPartsAhead = 16;
     for (std::size_t p = 0; p < board.parts.size(); ++p) {
+        if (p + kPartsAhead < board.parts.size()) prefetchPins(board.parts[p + kPartsAhead]);
         const auto& pins = board.parts[p].pins;
         const std::size_t first = leads_.size();
         for (std::size_t k = 0; k < pins.size(); ++k) {

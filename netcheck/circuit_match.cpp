@@ -147,7 +147,10 @@ private:
     // them a few parts ahead lets the waits overlap.
     static constexpr std::size_t kLookAhead = 32;
 
-    void prefetchPart(const Part& part) const { refs_.prefetch(RefTable::keyOf(part.ref)); }
+    void prefetchPart(const Part& part) const {
+        refs_.prefetch(RefTable::keyOf(part.ref));
+        prefetchPins(part);
+    }
 
     int addBoardPart(std::string_view ref, bool offboard, std::size_t p) {
         const int u = refs_.insert(ref, static_cast<int>(uses_.size()));

@@ -128,25 +128,16 @@ void findDanglingLeads(const CheckContext& context, const std::vector<char>* onl
 void findTrim(const CheckContext& context, std::vector<Finding>& warnings) {
     const Board& board = context.board();
     if (context.leads().empty()) return;
-    // The leads' holes, read from the board where rows and columns need no dividing out.
+    // Every lead's hole (part pins, link ends, wire ends on the board), from the leads rather than
+    // the parts, whose pins lie scattered in memory.
     int top = board.rows, bottom = -1, left = board.cols, right = -1;
-    auto extend = [&](Hole hole) {
-        if (!board.contains(hole)) return;
-        top = std::min(top, hole.row);
-        bottom = std::max(bottom, hole.row);
-        left = std::min(left, hole.col);
-        right = std::max(right, hole.col);
-    };
-    for (const Part& part : board.parts) {
-        for (const Pin& pin : part.pins) extend(pin.hole);
-    }
-    for (const Link& link : board.links) {
-        extend(link.from);
-        extend(link.to);
-    }
-    for (const Wire& wire : board.wires) {
-        if (wire.from.isHole()) extend(*wire.from.hole);
-        if (wire.to.isHole()) extend(*wire.to.hole);
+    for (const Lead& lead : context.leads()) {
+        const int row = lead.hole / board.cols;
+        const int col = lead.hole - row * board.cols;
+        top = std::min(top, row);
+        bottom = std::max(bottom, row);
+        left = std::min(left, col);
+        right = std::max(right, col);
     }
     const int spare[4] = {top, board.rows - 1 - bottom, left, board.cols - 1 - right};
     const char* const what[4] = {"row", "row", "column", "column"};

@@ -10,6 +10,7 @@
 
 #include <random>
 
+#include "netcheck/board_file.hpp"
 #include "netcheck/check.hpp"
 #include "netcheck/connectivity.hpp"
 
@@ -30,9 +31,17 @@ Board generatedBoard(int rows, int cols, int parts) {
     board.cols = cols;
     const int holes = rows * cols;
     std::vector<char> taken(static_cast<std::size_t>(holes), 0);
-    auto at = [&](Hole h) -> char& { return taken[static_cast<std::size_t>(h.row * cols + h.col)]; };
+    auto at = [&](Hole h) -> char& {
+        return taken[static_cast<std::size_t>(h.row * cols + h.col)];
+    };
+    std::vector<char> cutAt(static_cast<std::size_t>(holes),
+                            0);  // a board file holds each cut once
     for (int i = 0; i < holes / 12; ++i) {
-        const Cut cut{hole(), i % 2 ? Cut::Kind::Hole : Cut::Kind::Between};
+        Cut cut{hole(), i % 2 ? Cut::Kind::Hole : Cut::Kind::Between};
+        const char kindBit = cut.kind == Cut::Kind::Hole ? 1 : 2;
+        while (cutAt[static_cast<std::size_t>(cut.hole.row * cols + cut.hole.col)] & kindBit)
+            cut.hole = hole();
+        cutAt[static_cast<std::size_t>(cut.hole.row * cols + cut.hole.col)] |= kindBit;
         if (cut.kind == Cut::Kind::Hole) at(cut.hole) = 1;
         board.cuts.push_back(cut);
     }
@@ -54,8 +63,11 @@ Board generatedBoard(int rows, int cols, int parts) {
     for (int i = 0; i < parts; ++i) {
         Hole a, b;
         freePair(a, b);
-        board.parts.push_back(Part{"P" + std::to_string(i + 1), kKinds[i % 4], "1k",
-                                   {{kPins[i % 4][0], a}, {kPins[i % 4][1], b}}, {}});
+        board.parts.push_back(Part{"P" + std::to_string(i + 1),
+                                   kKinds[i % 4],
+                                   "1k",
+                                   {{kPins[i % 4][0], a}, {kPins[i % 4][1], b}},
+                                   {}});
     }
     // The circuit is the board's own connectivity: every island with two or more pins is a net.
     Circuit circuit;
@@ -68,7 +80,9 @@ Board generatedBoard(int rows, int cols, int parts) {
     return board;
 }
 
-Board boardOfSide(int side) { return generatedBoard(side, side, side * side / 24); }
+Board boardOfSide(int side) {
+    return generatedBoard(side, side, side * side / 24);
+}
 
 void setCounters(benchmark::State& state, const Board& board) {
     state.counters["holes"] = board.holeCount();
@@ -83,6 +97,47 @@ void fullCheck(benchmark::State& state) {
         CheckReport report = check(board);
         if (!report.ok()) state.SkipWithError("the generated board should check clean");
         benchmark::DoNotOptimize(report);
+    }
+    setCounters(state, board);
+}
+
+// The same board written to a board file and read back, as the CLI and the editor hold it: the
+// reader builds the model in file order, so parts, nets and their pins lie in memory in the order
+// the check reads them (a board built in memory part by part is the harder case above).
+void loadedCheck(benchmark::State& state) {
+    const Board generated = boardOfSide(static_cast<int>(state.range(0)));
+    const ReadResult<Board> loaded = readBoard(writeBoard(generated), "generated.board.json");
+    if (!loaded.ok()) {
+        state.SkipWithError(loaded.error->message.c_str());
+        return;
+    }
+    for (auto _ : state) {
+        CheckReport report = check(*loaded.value);
+        if (!report.ok()) state.SkipWithError("the loaded board should check clean");
+        benchmark::DoNotOptimize(report);
+    }
+    setCounters(state, *loaded.value);
+}
+
+// The floor: every field of the model the check reads, read once in model order, and nothing
+// else (no tracing, no lookups, no report).
+void readModel(benchmark::State& state) {
+    const Board board = boardOfSide(static_cast<int>(state.range(0)));
+    for (auto _ : state) {
+        std::size_t sum = 0;
+        for (const Part& part : board.parts) {
+            sum += part.ref.size() + part.kind.size() + part.value.size();
+            for (const Pin& pin : part.pins)
+                sum += pin.name.size() + static_cast<std::size_t>(pin.hole.row + pin.hole.col);
+        }
+        for (const Cut& cut : board.cuts) sum += static_cast<std::size_t>(cut.hole.col);
+        for (const Link& link : board.links) sum += static_cast<std::size_t>(link.to.col);
+        for (const auto& [ref, part] : board.circuit->parts)
+            sum += ref.size() + part.kind.size() + part.value.size();
+        for (const auto& [name, pins] : board.circuit->nets) {
+            for (const PinRef& pin : pins) sum += pin.ref.size() + pin.pin.size();
+        }
+        benchmark::DoNotOptimize(sum);
     }
     setCounters(state, board);
 }
@@ -132,7 +187,10 @@ void editorBoard(benchmark::State& state) {
 
 }  // namespace
 
-BENCHMARK(fullCheck)->Arg(10)->Arg(30)->Arg(100)->Arg(300)->Arg(1000)->Unit(benchmark::kMicrosecond);
+BENCHMARK(fullCheck)->Arg(10)->Arg(30)->Arg(100)->Arg(300)->Arg(1000)->Unit(
+    benchmark::kMicrosecond);
+BENCHMARK(loadedCheck)->Arg(10)->Arg(100)->Arg(1000)->Unit(benchmark::kMicrosecond);
+BENCHMARK(readModel)->Arg(10)->Arg(100)->Arg(1000)->Unit(benchmark::kMicrosecond);
 BENCHMARK(traceOnly)->Arg(10)->Arg(100)->Arg(1000)->Unit(benchmark::kMicrosecond);
 BENCHMARK(boostComponents)->Arg(10)->Arg(100)->Arg(1000)->Unit(benchmark::kMicrosecond);
 BENCHMARK(editorBoard)->Unit(benchmark::kMicrosecond);
