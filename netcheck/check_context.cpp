@@ -6,10 +6,10 @@ namespace netcheck {
 CheckContext::CheckContext(const Board& board) : board_(&board), copper_(board) {
     hasLead_.reset(board.holeCount());
     sharedHole_.reset(board.holeCount());
-    auto add = [&](Lead::Kind kind, int item, int sub, Hole hole) {
+    auto add = [&](Lead::Kind kind, int item, int sub, Hole hole, std::uint32_t nameKey = 0) {
         if (!board.contains(hole)) return;
         const int index = holeIndex(hole);
-        leads_.push_back(Lead{kind, item, sub, index});
+        leads_.push_back(Lead{item, sub, index, 0, nameKey, kind});
         if (hasLead_.test(index)) sharedHole_.set(index);
         hasLead_.set(index);
     };
@@ -24,7 +24,8 @@ CheckContext::CheckContext(const Board& board) : board_(&board), copper_(board) 
         const auto& pins = board.parts[p].pins;
         const std::size_t first = leads_.size();
         for (std::size_t k = 0; k < pins.size(); ++k) {
-            add(Lead::Kind::PartPin, static_cast<int>(p), static_cast<int>(k), pins[k].hole);
+            add(Lead::Kind::PartPin, static_cast<int>(p), static_cast<int>(k), pins[k].hole,
+                PackedName<std::uint32_t>::of(pins[k].name));
         }
         const bool everyPin = leads_.size() - first == pins.size();
         firstLeadOfPart_.push_back(everyPin ? static_cast<int>(first) : -1);
@@ -61,12 +62,11 @@ CheckContext::CheckContext(const Board& board) : board_(&board), copper_(board) 
     }
 }
 
-int CheckContext::islandOfPartPin(int part, int pin) const {
+std::span<const Lead> CheckContext::leadsOfPart(int part) const {
     const int first = firstLeadOfPart_[static_cast<std::size_t>(part)];
-    if (first >= 0) return leads_[static_cast<std::size_t>(first + pin)].island;
-    const Hole hole =
-        board_->parts[static_cast<std::size_t>(part)].pins[static_cast<std::size_t>(pin)].hole;
-    return copper_.islandOfHole(hole);
+    if (first < 0) return {};
+    const std::size_t pins = board_->parts[static_cast<std::size_t>(part)].pins.size();
+    return std::span<const Lead>(leads_).subspan(static_cast<std::size_t>(first), pins);
 }
 
 bool CheckContext::isFree(int hole) const {

@@ -2,6 +2,8 @@
 // how nodes are named (private to the checker).
 #pragma once
 
+#include <cstdint>
+#include <span>
 #include <string>
 #include <utility>
 #include <vector>
@@ -9,17 +11,19 @@
 #include "board.hpp"
 #include "connectivity.hpp"
 #include "hole_bits.hpp"
+#include "packed_name.hpp"
 
 namespace netcheck {
 
 /// Something soldered into a hole: a part pin, one end of a link, or the board end of a wire.
 struct Lead {
-    enum class Kind { PartPin, LinkEnd, WireEnd };
+    enum class Kind : std::uint8_t { PartPin, LinkEnd, WireEnd };
+    int item = 0;               ///< index into board.parts, board.links or board.wires
+    int sub = 0;                ///< pin index, or 0/1 for the from/to end
+    int hole = 0;               ///< hole index row * cols + col
+    int island = 0;             ///< island of the hole
+    std::uint32_t nameKey = 0;  ///< a part pin's name packed (PackedName<uint32_t>)
     Kind kind = Kind::PartPin;
-    int item = 0;         ///< index into board.parts, board.links or board.wires
-    int sub = 0;          ///< pin index, or 0/1 for the from/to end
-    int hole = 0;         ///< hole index row * cols + col
-    int island = 0;       ///< island of the hole
     bool onCut = false;   ///< the hole is hole-cut (the lead touches no copper)
     bool shared = false;  ///< another lead is in the same hole
 };
@@ -41,9 +45,10 @@ public:
     const Connectivity& copper() const { return copper_; }
     /// Every lead on the board, part pins first, then link ends, then wire ends.
     const std::vector<Lead>& leads() const { return leads_; }
-    /// Island of pin `pin` of board part `part` (-1 when its hole is off the board); read from
-    /// the part's leads, which lie in board order.
-    int islandOfPartPin(int part, int pin) const;
+    /// The leads of board part `part`'s pins, in pin order; empty when a pin's hole is off the
+    /// board. The leads lie in board order, so going through parts this way reads memory in
+    /// order, where the parts' own pins lie scattered.
+    std::span<const Lead> leadsOfPart(int part) const;
     /// Something is soldered in the hole.
     bool holdsLead(int hole) const { return hasLead_.test(hole); }
     /// Copper present and nothing soldered in it: a place for a new link or a hole cut.

@@ -147,10 +147,7 @@ private:
     // them a few parts ahead lets the waits overlap.
     static constexpr std::size_t kLookAhead = 32;
 
-    void prefetchPart(const Part& part) const {
-        refs_.prefetch(RefTable::keyOf(part.ref));
-        prefetchPins(part);
-    }
+    void prefetchPart(const Part& part) const { refs_.prefetch(RefTable::keyOf(part.ref)); }
 
     int addBoardPart(std::string_view ref, bool offboard, std::size_t p) {
         const int u = refs_.insert(ref, static_cast<int>(uses_.size()));
@@ -181,15 +178,25 @@ private:
         use.pins = static_cast<int>(pins);
         use.pool = pool_.data() + pool_.size();
         pool_.resize(pool_.size() + PartUse::kArraysPerPin * pins);
-        const Connectivity& copper = context_.copper();
+        const std::span<const Lead> leads =
+            offboard ? std::span<const Lead>{} : context_.leadsOfPart(use.index);
         for (std::size_t k = 0; k < pins; ++k) {
-            const int node = offboard ? context_.lugNode(use.index, static_cast<int>(k))
-                                      : context_.holeIndex(use.board.pins[k].hole);
-            use.nodes()[k] = node;
-            use.islands()[k] = offboard ? copper.islandOfNode(node)
-                                        : context_.islandOfPartPin(use.index, static_cast<int>(k));
             use.net()[k] = -1;
             use.nameOf()[k] = static_cast<int>(k);
+            if (!leads.empty()) {  // what the leads know, without reading the part's pins
+                use.nodes()[k] = leads[k].hole;
+                use.islands()[k] = leads[k].island;
+                use.pinKeys()[k] = static_cast<int>(leads[k].nameKey);
+                continue;
+            }
+            const Connectivity& copper = context_.copper();
+            if (offboard) {
+                use.nodes()[k] = context_.lugNode(use.index, static_cast<int>(k));
+                use.islands()[k] = copper.islandOfNode(use.nodes()[k]);
+            } else {  // a pin off the board: it joins nothing
+                use.nodes()[k] = context_.holeIndex(use.board.pins[k].hole);
+                use.islands()[k] = copper.islandOfHole(use.board.pins[k].hole);
+            }
             use.pinKeys()[k] = static_cast<int>(PinKey::of(use.pinName(static_cast<int>(k))));
         }
     }
