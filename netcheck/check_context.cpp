@@ -10,7 +10,10 @@ CheckContext::CheckContext(const Board& board) : board_(&board), copper_(board) 
         if (!board.contains(hole)) return;
         const int index = holeIndex(hole);
         leads_.push_back(Lead{item, sub, index, 0, nameKey, kind});
-        if (hasLead_.test(index)) sharedHole_.set(index);
+        if (hasLead_.test(index)) {
+            sharedHole_.set(index);
+            anyShared_ = true;
+        }
         hasLead_.set(index);
     };
     std::size_t leadCount = 2 * (board.links.size() + board.wires.size());
@@ -53,7 +56,8 @@ CheckContext::CheckContext(const Board& board) : board_(&board), copper_(board) 
         Lead& lead = leads_[i];
         lead.island = copper_.islandOfNode(lead.hole);
         lead.onCut = copper_.isHoleCutAt(lead.hole);
-        lead.shared = sharedHole_.test(lead.hole);
+        lead.shared = anyShared_ && sharedHole_.test(lead.hole);
+        anyOnCut_ = anyOnCut_ || lead.onCut;
     }
     int base = board.holeCount();
     for (const OffboardPart& part : board.offboard) {

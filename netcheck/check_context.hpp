@@ -49,6 +49,10 @@ public:
     /// board. The leads lie in board order, so going through parts this way reads memory in
     /// order, where the parts' own pins lie scattered.
     std::span<const Lead> leadsOfPart(int part) const;
+    /// Whether any lead shares its hole, or sits in a hole cut (most boards: none, and the
+    /// passes that list them need not go through every lead).
+    bool anyLeadShared() const { return anyShared_; }
+    bool anyLeadOnCut() const { return anyOnCut_; }
     /// Something is soldered in the hole.
     bool holdsLead(int hole) const { return hasLead_.test(hole); }
     /// Copper present and nothing soldered in it: a place for a new link or a hole cut.
@@ -75,6 +79,8 @@ private:
     std::vector<int> firstLeadOfPart_;  // index of a part's first lead; -1 if a pin has none
     HoleBits hasLead_;
     HoleBits sharedHole_;  // two or more leads
+    bool anyShared_ = false;
+    bool anyOnCut_ = false;
     std::vector<int> lugBase_;
 };
 

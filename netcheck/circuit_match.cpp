@@ -63,9 +63,9 @@ public:
     void endOfDeclaredParts() { declared_ = order_.size(); }
 
     /// Index of the use of a ref the circuit names (`key` is RefTable::keyOf(ref)).
-    int mention(std::string_view ref, const RefTable::Key& key) {
+    int mention(const std::string& ref, const RefTable::Key& key) {
         const int u = refs_.insert(ref, key, static_cast<int>(uses_.size()));
-        if (u == static_cast<int>(uses_.size())) uses_.emplace_back().ref = ref;
+        if (u == static_cast<int>(uses_.size())) uses_.emplace_back().refName = &ref;
         PartUse& use = at(u);
         if (!use.mentioned) {
             use.mentioned = true;
@@ -85,7 +85,7 @@ public:
         // Declared parts come sorted from the circuit; only refs named just in nets need sorting.
         if (order_.size() > declared_) {
             std::stable_sort(order_.begin(), order_.end(),
-                             [&](int a, int b) { return at(a).ref < at(b).ref; });
+                             [&](int a, int b) { return at(a).ref() < at(b).ref(); });
         }
         for (int u : useOfPart_) mentionedPart_.push_back(at(u).mentioned ? 1 : 0);
         for (int u : useOfOffboard_) mentionedOffboard_.push_back(at(u).mentioned ? 1 : 0);
@@ -105,7 +105,7 @@ public:
         };
         for (std::size_t i = 0; i < order_.size(); ++i) {
             if (i + kLookAhead < order_.size())
-                prefetchLines(&uses_[slotOf(order_[i + kLookAhead])], 2);
+                __builtin_prefetch(&uses_[slotOf(order_[i + kLookAhead])]);
             const std::size_t from = slotOf(order_[i]);
             if (from == i) continue;
             std::swap(uses_[i], uses_[from]);
@@ -119,7 +119,7 @@ public:
     /// Notes a pin the circuit uses that the part lacks (for pin-mismatch).
     void noteUnknownPin(PartUse& use, std::string_view pin) {
         use.hasUnknownPins = true;
-        unknownPins_.emplace_back(use.ref, pin);
+        unknownPins_.emplace_back(use.ref(), pin);
     }
 
     /// The pins the circuit uses that the board part of `ref` lacks, sorted, each once.
@@ -149,11 +149,11 @@ private:
 
     void prefetchPart(const Part& part) const { refs_.prefetch(RefTable::keyOf(part.ref)); }
 
-    int addBoardPart(std::string_view ref, bool offboard, std::size_t p) {
+    int addBoardPart(const std::string& ref, bool offboard, std::size_t p) {
         const int u = refs_.insert(ref, static_cast<int>(uses_.size()));
         if (u == static_cast<int>(uses_.size())) {
             PartUse& use = uses_.emplace_back();
-            use.ref = ref;
+            use.refName = &ref;
             place(use, offboard, p);
         }
         return u;
@@ -166,13 +166,15 @@ private:
         std::size_t pins = 0;
         if (offboard) {
             const OffboardPart& part = board.offboard[at];
-            use.board = BoardPartFacts{nullptr, part.pins.data(), ValueKey::of(part.value),
-                                       findPartKind(part.kind)};
+            use.board.lugs = part.pins.data();
+            use.board.valueKey = ValueKey::of(part.value);
+            use.board.known = findPartKind(part.kind);
             pins = part.pins.size();
         } else {
             const Part& part = board.parts[at];
-            use.board = BoardPartFacts{part.pins.data(), nullptr, ValueKey::of(part.value),
-                                       findPartKind(part.kind)};
+            use.board.pins = part.pins.data();
+            use.board.valueKey = ValueKey::of(part.value);
+            use.board.known = findPartKind(part.kind);
             pins = part.pins.size();
         }
         use.pins = static_cast<int>(pins);
@@ -267,8 +269,8 @@ void checkPins(const CheckContext& context, const PartUse& use,
         }
     }
     if (problem.empty()) return;
-    Finding finding = refFinding("pin-mismatch", Severity::Error, use.ref,
-                                 std::string(use.ref) + ": " + problem + placeText(context, use));
+    Finding finding = refFinding("pin-mismatch", Severity::Error, use.ref(),
+                                 std::string(use.ref()) + ": " + problem + placeText(context, use));
     for (int node : use.nodes()) {
         if (context.isHoleNode(node)) finding.holes.push_back(context.holeAt(node));
     }
@@ -285,8 +287,8 @@ void checkValue(const CheckContext& context, const PartUse& use, std::vector<Fin
     const bool quantity = kind != nullptr && kind->quantity;
     const std::string shown = onBoard.empty() ? "no value" : "\"" + onBoard + "\"";
     Finding finding = refFinding(quantity ? "value-mismatch" : "value-differs",
-                                 quantity ? Severity::Error : Severity::Warning, use.ref,
-                                 std::string(use.ref) + " is " + shown + " on the board but \"" +
+                                 quantity ? Severity::Error : Severity::Warning, use.ref(),
+                                 std::string(use.ref()) + " is " + shown + " on the board but \"" +
                                      intended + "\" in the circuit" + placeText(context, use));
     for (int node : use.nodes()) {
         if (context.isHoleNode(node)) finding.holes.push_back(context.holeAt(node));
@@ -330,18 +332,18 @@ class MentionBatch {
 public:
     MentionBatch(Uses& uses, Finish finish) : uses_(uses), finish_(std::move(finish)) {}
 
-    void add(std::string_view ref, const Item& item) {
+    void add(const std::string& ref, const Item& item) {
         const RefTable::Key key = RefTable::keyOf(ref);
         uses_.refs().prefetch(key);
-        pending_[size_++] = Pending{ref, key, item, -1};
+        pending_[size_++] = Pending{&ref, key, item, -1};
         if (size_ == pending_.size()) flush();
     }
 
     void flush() {
         for (std::size_t i = 0; i < size_; ++i) {
             Pending& p = pending_[i];
-            p.use = uses_.mention(p.ref, p.key);
-            prefetchLines(&uses_.at(p.use), 2);
+            p.use = uses_.mention(*p.ref, p.key);
+            __builtin_prefetch(&uses_.at(p.use));
         }
         for (std::size_t i = 0; i < size_; ++i) __builtin_prefetch(uses_.at(pending_[i].use).pool);
         for (std::size_t i = 0; i < size_; ++i)
@@ -351,7 +353,7 @@ public:
 
 private:
     struct Pending {
-        std::string_view ref;
+        const std::string* ref;
         RefTable::Key key;
         Item item;
         int use;
@@ -430,8 +432,8 @@ void placeNets(std::span<const PartUse> uses, const std::vector<std::string_view
             const auto at = static_cast<std::size_t>(k);
             const int net = use.net()[at];
             if (net < 0) continue;
-            match.netPins[next[static_cast<std::size_t>(net)]++] =
-                NetPin{use.ref, &use.pinName(use.nameOf()[at]), use.nodes()[at], use.islands()[at]};
+            match.netPins[next[static_cast<std::size_t>(net)]++] = NetPin{
+                use.ref(), &use.pinName(use.nameOf()[at]), use.nodes()[at], use.islands()[at]};
         }
     }
     std::copy_backward(start.begin(), start.end() - 1, start.end());
@@ -454,15 +456,15 @@ CircuitMatch matchCircuit(const CheckContext& context, const Circuit& circuit) {
     const std::span<PartUse> all = uses.mentionedByRef();
     for (const PartUse& use : all) {
         if (use.found()) continue;
-        match.errors.push_back(refFinding("missing-part", Severity::Error, use.ref,
-                                          std::string(use.ref) + describeCircuitPart(use) +
+        match.errors.push_back(refFinding("missing-part", Severity::Error, use.ref(),
+                                          std::string(use.ref()) + describeCircuitPart(use) +
                                               " is in the circuit but not on the board"));
     }
     reportExtraParts(context, uses, match.errors);
     for (const PartUse& use : all) {
         if (!use.found()) continue;
         const std::vector<std::string> unknown =
-            use.hasUnknownPins ? uses.unknownPinsOf(use.ref) : std::vector<std::string>{};
+            use.hasUnknownPins ? uses.unknownPinsOf(use.ref()) : std::vector<std::string>{};
         checkPins(context, use, unknown, match.errors);
     }
     for (const PartUse& use : all) {

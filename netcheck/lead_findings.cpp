@@ -52,6 +52,7 @@ void appendMillimetres(std::string& text, double value) {
 }  // namespace
 
 void findSharedHoles(const CheckContext& context, std::vector<Finding>& errors) {
+    if (!context.anyLeadShared()) return;
     std::vector<const Lead*> crowded;
     for (const Lead& lead : context.leads()) {
         if (lead.shared) crowded.push_back(&lead);
@@ -73,6 +74,7 @@ void findSharedHoles(const CheckContext& context, std::vector<Finding>& errors) 
 }
 
 void findLeadsOnCuts(const CheckContext& context, std::vector<Finding>& errors) {
+    if (!context.anyLeadOnCut()) return;
     std::vector<const Lead*> onCuts;
     for (const Lead& lead : context.leads()) {
         if (lead.onCut) onCuts.push_back(&lead);

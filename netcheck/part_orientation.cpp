@@ -106,7 +106,7 @@ bool clearlyBetter(int other, int placed) {
 }
 
 std::string partLabel(const Board& board, const PartUse& use) {
-    return std::string(use.ref) + " (" + use.kind(board) + ")";
+    return std::string(use.ref()) + " (" + use.kind(board) + ")";
 }
 
 std::vector<Hole> partHoles(const CheckContext& context, const PartUse& use) {
@@ -122,7 +122,7 @@ Finding partFinding(std::string type, Severity severity, const CheckContext& con
     Finding finding;
     finding.type = std::move(type);
     finding.severity = severity;
-    finding.ref = std::string(use.ref);
+    finding.ref = std::string(use.ref());
     finding.message = std::move(message);
     finding.holes = partHoles(context, use);
     return finding;

@@ -18,10 +18,12 @@ namespace netcheck {
 /// What the board says of a placed part, read once in the board's order: later passes go
 /// through the circuit's order, and reading the board again there would jump around in memory.
 struct BoardPartFacts {
-    const Pin* pins = nullptr;          ///< on-board pins (null for an off-board part)
-    const std::string* lugs = nullptr;  ///< off-board lug names (null for an on-board part)
-    std::uint64_t valueKey = 0;         ///< ValueKey of the part's value
-    const PartKind* known = nullptr;    ///< the kind's table row; null for unknown kinds
+    union {
+        const Pin* pins = nullptr;  ///< on-board pins (of an on-board part)
+        const std::string* lugs;    ///< off-board lug names (of an off-board part)
+    };
+    std::uint64_t valueKey = 0;       ///< ValueKey of the part's value
+    const PartKind* known = nullptr;  ///< the kind's table row; null for unknown kinds
 };
 
 using PinKey = PackedName<std::uint32_t>;
@@ -29,20 +31,20 @@ using ValueKey = PackedName<std::uint64_t>;
 
 /// A board part, or a ref the circuit names that the board lacks. Its per-pin arrays lie side by
 /// side in one pool owned by the matcher, so placing a part allocates nothing of its own and a
-/// part's pins share a cache line or two.
-struct PartUse {
+/// part's pins share a cache line or two. A use is one cache line: the passes that look uses up
+/// by ref wait for one line each, not two.
+struct alignas(64) PartUse {
     static constexpr int kArraysPerPin = 5;
 
-    // What a net pin's lookup reads comes first, in one cache line.
-    std::string_view ref;
-    int* pool = nullptr;          ///< kArraysPerPin * pins ints
-    int pins = 0;                 ///< number of board pins
-    int index = -1;               ///< index into board.parts / board.offboard; -1 missing
-    bool mentioned = false;       ///< the circuit names this ref
-    bool offboard = false;        ///< board part is in board.offboard
-    bool valueDiffers = false;    ///< board and circuit values differ (when found)
-    bool declaresPins = false;    ///< the circuit part lists its pin names
-    bool hasUnknownPins = false;  ///< the circuit uses pins the board part lacks
+    const std::string* refName = nullptr;  ///< the board's or the circuit's copy of the ref
+    int* pool = nullptr;                   ///< kArraysPerPin * pins ints
+    int pins = 0;                          ///< number of board pins
+    int index = -1;                        ///< index into board.parts / board.offboard; -1 missing
+    bool mentioned = false;                ///< the circuit names this ref
+    bool offboard = false;                 ///< board part is in board.offboard
+    bool valueDiffers = false;             ///< board and circuit values differ (when found)
+    bool declaresPins = false;             ///< the circuit part lists its pin names
+    bool hasUnknownPins = false;           ///< the circuit uses pins the board part lacks
     const CircuitPart* circuitPart = nullptr;  ///< null when the ref only appears in nets
     BoardPartFacts board;                      ///< valid when found()
 
@@ -57,6 +59,7 @@ struct PartUse {
     /// PinKey of each board pin name.
     std::span<int> pinKeys() const { return array(4); }
 
+    std::string_view ref() const { return *refName; }
     bool found() const { return index >= 0; }
     int pinCount() const { return pins; }
     const std::string& kind(const Board& on) const {
@@ -78,7 +81,7 @@ struct PartUse {
     /// Board pin name at `pin`.
     const std::string& pinName(int pin) const {
         const auto at = static_cast<std::size_t>(pin);
-        return board.pins != nullptr ? board.pins[at].name : board.lugs[at];
+        return offboard ? board.lugs[at] : board.pins[at].name;
     }
     /// Board pin index of a pin name; -1 when the part has no such pin.
     int findPin(std::string_view name) const {
@@ -100,5 +103,6 @@ private:
         return std::span<int>(pool + which * pins, static_cast<std::size_t>(pins));
     }
 };
+static_assert(sizeof(PartUse) == 64);
 
 }  // namespace netcheck
