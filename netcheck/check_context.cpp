@@ -16,9 +16,8 @@ CheckContext::CheckContext(const Board& board) : board_(&board), copper_(board) 
         }
         hasLead_.set(index);
     };
-    std::size_t leadCount = 2 * (board.links.size() + board.wires.size());
-    for (const Part& part : board.parts) leadCount += part.pins.size();
-    leads_.reserve(leadCount);
+    for (const Part& part : board.parts) partPins_ += part.pins.size();
+    leads_.reserve(partPins_ + 2 * (board.links.size() + board.wires.size()));
     lugBase_.reserve(board.offboard.size());
     firstLeadOfPart_.reserve(board.parts.size());
     constexpr std::size_t kPartsAhead = 16;

@@ -53,6 +53,8 @@ public:
     /// passes that list them need not go through every lead).
     bool anyLeadShared() const { return anyShared_; }
     bool anyLeadOnCut() const { return anyOnCut_; }
+    /// Pins of all on-board parts (the leads of those on the board, and any off it).
+    std::size_t partPinCount() const { return partPins_; }
     /// Something is soldered in the hole.
     bool holdsLead(int hole) const { return hasLead_.test(hole); }
     /// Copper present and nothing soldered in it: a place for a new link or a hole cut.
@@ -79,6 +81,7 @@ private:
     std::vector<int> firstLeadOfPart_;  // index of a part's first lead; -1 if a pin has none
     HoleBits hasLead_;
     HoleBits sharedHole_;  // two or more leads
+    std::size_t partPins_ = 0;
     bool anyShared_ = false;
     bool anyOnCut_ = false;
     std::vector<int> lugBase_;

@@ -18,13 +18,6 @@ namespace netcheck {
 
 namespace {
 
-std::size_t boardPinCount(const Board& board) {
-    std::size_t count = 0;
-    for (const Part& part : board.parts) count += part.pins.size();
-    for (const OffboardPart& part : board.offboard) count += part.pins.size();
-    return count;
-}
-
 // Asks for `lines` cache lines from `at` on to be brought in ahead of use.
 void prefetchLines(const void* at, int lines) {
     const auto* line = static_cast<const char*>(at);
@@ -47,7 +40,9 @@ public:
         order_.reserve(circuit.parts.size());
         // Each board part is placed once, so the pool never grows past this and the pin arrays
         // in it stay put.
-        pool_.reserve(PartUse::kArraysPerPin * boardPinCount(board));
+        std::size_t lugs = 0;
+        for (const OffboardPart& part : board.offboard) lugs += part.pins.size();
+        pool_.reserve(PartUse::kArraysPerPin * (context.partPinCount() + lugs));
         useOfPart_.reserve(board.parts.size());
         for (std::size_t p = 0; p < board.parts.size(); ++p) {
             if (p + kLookAhead < board.parts.size()) prefetchPart(board.parts[p + kLookAhead]);
