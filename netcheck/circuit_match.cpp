@@ -9,6 +9,7 @@
 #include <numeric>
 #include <span>
 
+#include "cache_line_allocator.hpp"
 #include "part_kinds.hpp"
 #include "part_orientation.hpp"
 #include "ref_table.hpp"
@@ -200,7 +201,7 @@ private:
 
     const CheckContext& context_;
     RefTable refs_;
-    std::vector<PartUse> uses_;
+    std::vector<PartUse, CacheLineAllocator<PartUse>> uses_;
     std::vector<int> pool_;
     std::vector<int> useOfPart_;
     std::vector<int> useOfOffboard_;

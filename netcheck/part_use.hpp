@@ -31,9 +31,9 @@ using ValueKey = PackedName<std::uint64_t>;
 
 /// A board part, or a ref the circuit names that the board lacks. Its per-pin arrays lie side by
 /// side in one pool owned by the matcher, so placing a part allocates nothing of its own and a
-/// part's pins share a cache line or two. A use is one cache line: the passes that look uses up
-/// by ref wait for one line each, not two.
-struct alignas(64) PartUse {
+/// part's pins share a cache line or two. A use is the size of one cache line (and the matcher
+/// keeps its uses line-aligned), so the passes that look uses up by ref wait for one line each.
+struct PartUse {
     static constexpr int kArraysPerPin = 5;
 
     const std::string* refName = nullptr;  ///< the board's or the circuit's copy of the ref
