@@ -2,6 +2,8 @@
 // there are no findings to locate) on generated boards from 10x10 to 1000x1000 holes, with parts,
 // cuts and links in proportion to the holes (the 60x40 board with 100 parts sets the density), and
 // Boost.Graph's connected_components over the same hole graph as a baseline, in the same run.
+// The same boards are also checked after a round trip through the board file (as the CLI and the
+// editor hold them), and read field by field with no check at all (the floor).
 //   build-release/bin/bench_check --benchmark_counters_tabular=true
 #include <benchmark/benchmark.h>
 
