@@ -44,6 +44,7 @@
 
 #include <algorithm>
 #include <map>
+#include <optional>
 
 #include "check_context.hpp"
 #include "circuit_match.hpp"
@@ -58,9 +59,10 @@ namespace {
 // Shorts, and (for the dangling-lead rule) the islands holding a pin meant to join another pin: a
 // pin the circuit leaves unconnected, or the only pin of its net, is meant to be alone.
 void findShorts(const CheckContext& context, const std::vector<PlacedNet>& nets,
-                std::vector<Finding>& errors, std::vector<char>& islandsWithNetPins) {
+                std::vector<Finding>& errors, std::vector<char>& islandsWithNetPins,
+                std::vector<int>& firstNet) {
     const Connectivity& copper = context.copper();
-    std::vector<int> firstNet(static_cast<std::size_t>(copper.islandCount()), -1);
+    firstNet.assign(static_cast<std::size_t>(copper.islandCount()), -1);
     islandsWithNetPins.assign(firstNet.size(), 0);
     std::vector<int> shortedIslands;
     for (std::size_t n = 0; n < nets.size(); ++n) {
@@ -166,28 +168,53 @@ std::vector<Island> pinIslands(const CheckContext& context) {
 
 }  // namespace
 
-CheckReport check(const Board& board, const Circuit* circuit) {
+// What a Checker keeps between checks.
+struct Checker::Workspace {
+    std::optional<CheckContext> context;
+    MatchMemory matchMemory;
+    CircuitMatch match;
+    std::vector<char> danglingIslands;
+    std::vector<int> firstNetOfIsland;
+};
+
+Checker::Checker() = default;
+Checker::~Checker() = default;
+Checker::Checker(Checker&&) noexcept = default;
+Checker& Checker::operator=(Checker&&) noexcept = default;
+
+CheckReport Checker::check(const Board& board, const Circuit* circuit) {
     if (circuit == nullptr && board.circuit) circuit = &*board.circuit;
-    const CheckContext context(board);
+    if (!workspace_) workspace_ = std::make_unique<Workspace>();
+    Workspace& work = *workspace_;
+    if (work.context) {
+        work.context->reset(board);
+    } else {
+        work.context.emplace(board);
+    }
+    const CheckContext& context = *work.context;
     CheckReport report;
     report.hasCircuit = circuit != nullptr;
-    std::vector<char> danglingIslands;
     if (circuit != nullptr) {
-        CircuitMatch match = matchCircuit(context, *circuit);
+        CircuitMatch& match = work.match;
+        matchCircuit(context, *circuit, work.matchMemory, match);
         report.errors = std::move(match.errors);
         report.warnings = std::move(match.warnings);
         std::vector<Finding> shorts;
-        findShorts(context, match.nets, shorts, danglingIslands);
+        findShorts(context, match.nets, shorts, work.danglingIslands, work.firstNetOfIsland);
         report.errors.insert(report.errors.end(), shorts.begin(), shorts.end());
         findOpens(context, match.nets, shorts, report.errors);
     }
     findSharedHoles(context, report.errors);
     findLeadsOnCuts(context, report.errors);
-    findDanglingLeads(context, circuit ? &danglingIslands : nullptr, report.warnings);
+    findDanglingLeads(context, circuit ? &work.danglingIslands : nullptr, report.warnings);
     findTrim(context, report.warnings);
     // With a circuit the findings say everything; the island list is the report of a board alone.
     if (circuit == nullptr) report.islands = pinIslands(context);
     return report;
+}
+
+CheckReport check(const Board& board, const Circuit* circuit) {
+    return Checker().check(board, circuit);
 }
 
 }  // namespace netcheck

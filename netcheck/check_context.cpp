@@ -4,6 +4,22 @@
 namespace netcheck {
 
 CheckContext::CheckContext(const Board& board) : board_(&board), copper_(board) {
+    collectLeads(board);
+}
+
+void CheckContext::reset(const Board& board) {
+    board_ = &board;
+    copper_.retrace(board);
+    leads_.clear();
+    firstLeadOfPart_.clear();
+    lugBase_.clear();
+    partPins_ = 0;
+    anyShared_ = false;
+    anyOnCut_ = false;
+    collectLeads(board);
+}
+
+void CheckContext::collectLeads(const Board& board) {
     hasLead_.reset(board.holeCount());
     sharedHole_.reset(board.holeCount());
     auto add = [&](Lead::Kind kind, int item, int sub, Hole hole, std::uint32_t nameKey = 0) {

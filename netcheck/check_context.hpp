@@ -40,6 +40,8 @@ inline void prefetchPins(const Part& part) {
 class CheckContext {
 public:
     explicit CheckContext(const Board& board);
+    /// The same for another board (or the same one edited), in this object's memory.
+    void reset(const Board& board);
 
     const Board& board() const { return *board_; }
     const Connectivity& copper() const { return copper_; }
@@ -75,6 +77,8 @@ public:
     std::vector<std::pair<int, int>> jumpers() const;
 
 private:
+    void collectLeads(const Board& board);
+
     const Board* board_;
     Connectivity copper_;
     std::vector<Lead> leads_;

@@ -9,10 +9,8 @@
 #include <numeric>
 #include <span>
 
-#include "cache_line_allocator.hpp"
 #include "part_kinds.hpp"
 #include "part_orientation.hpp"
-#include "ref_table.hpp"
 #include "value.hpp"
 
 namespace netcheck {
@@ -30,9 +28,26 @@ void prefetchLines(const void* at, int lines) {
 // board part of a ref wins, on-board parts before off-board ones.
 class Uses {
 public:
-    Uses(const CheckContext& context, const Circuit& circuit)
-        : context_(context), refs_(context.board().parts.size() + context.board().offboard.size()) {
+    Uses(const CheckContext& context, const Circuit& circuit, MatchMemory& memory)
+        : context_(context),
+          refs_(memory.refs),
+          uses_(memory.uses),
+          pool_(memory.pool),
+          useOfPart_(memory.useOfPart),
+          useOfOffboard_(memory.useOfOffboard),
+          unknownPins_(memory.unknownPins),
+          mentionedPart_(memory.mentionedPart),
+          mentionedOffboard_(memory.mentionedOffboard),
+          order_(memory.order),
+          slotOfUse_(memory.slotOfUse),
+          useInSlot_(memory.useInSlot) {
         const Board& board = context.board();
+        refs_.reset(board.parts.size() + board.offboard.size());
+        for (auto* list : {&pool_, &useOfPart_, &useOfOffboard_, &order_}) list->clear();
+        uses_.clear();
+        unknownPins_.clear();
+        mentionedPart_.clear();
+        mentionedOffboard_.clear();
         // Circuit refs mostly name board parts: room for a few missing ones, growing past that.
         // (Kept under 1 KB on a small board, where a larger block would make malloc tidy up its
         // free lists on every check.)
@@ -92,8 +107,10 @@ public:
         }
         if (inPlace) return std::span<PartUse>(uses_.data(), order_.size());
         // Swaps each use into its place; `slot` and `use` track which use sits where.
-        std::vector<int> slot(uses_.size());
-        std::vector<int> use(uses_.size());
+        std::vector<int>& slot = slotOfUse_;
+        std::vector<int>& use = useInSlot_;
+        slot.resize(uses_.size());
+        use.resize(uses_.size());
         std::iota(slot.begin(), slot.end(), 0);
         std::iota(use.begin(), use.end(), 0);
         auto slotOf = [&](int u) {
@@ -199,17 +216,20 @@ private:
         }
     }
 
+    // The lists live in the check's MatchMemory, so a re-check reuses them.
     const CheckContext& context_;
-    RefTable refs_;
-    std::vector<PartUse, CacheLineAllocator<PartUse>> uses_;
-    std::vector<int> pool_;
-    std::vector<int> useOfPart_;
-    std::vector<int> useOfOffboard_;
-    std::vector<std::pair<std::string_view, std::string_view>> unknownPins_;  // (ref, pin)
+    RefTable& refs_;
+    std::vector<PartUse, CacheLineAllocator<PartUse>>& uses_;
+    std::vector<int>& pool_;
+    std::vector<int>& useOfPart_;
+    std::vector<int>& useOfOffboard_;
+    std::vector<std::pair<std::string_view, std::string_view>>& unknownPins_;  // (ref, pin)
     bool unknownSorted_ = false;
-    std::vector<char> mentionedPart_;  // filled by mentionedByRef()
-    std::vector<char> mentionedOffboard_;
-    std::vector<int> order_;
+    std::vector<char>& mentionedPart_;  // filled by mentionedByRef()
+    std::vector<char>& mentionedOffboard_;
+    std::vector<int>& order_;
+    std::vector<int>& slotOfUse_;  // mentionedByRef()'s permutation
+    std::vector<int>& useInSlot_;
     std::size_t declared_ = 0;
 };
 
@@ -377,8 +397,8 @@ void declareParts(const Board& board, const Circuit& circuit, Uses& uses) {
 }
 
 // Puts every net pin on its board pin; unknown pins are noted for pin-mismatch.
-std::vector<std::string_view> assignNets(const Circuit& circuit, Uses& uses) {
-    std::vector<std::string_view> names;
+void assignNets(const Circuit& circuit, Uses& uses, std::vector<std::string_view>& names) {
+    names.clear();
     names.reserve(circuit.nets.size());
     struct PinOfNet {
         const std::string* pin;
@@ -404,14 +424,13 @@ std::vector<std::string_view> assignNets(const Circuit& circuit, Uses& uses) {
         for (const PinRef& pin : pins) batch.add(pin.ref, PinOfNet{&pin.pin, net});
     }
     batch.flush();
-    return names;
 }
 
 // The pins of every net, net after net in one array (a counting sort by net), each net's pins in
 // the order of the parts' refs.
 void placeNets(std::span<const PartUse> uses, const std::vector<std::string_view>& names,
-               CircuitMatch& match) {
-    std::vector<std::size_t> start(names.size() + 1, 0);
+               std::vector<std::size_t>& start, CircuitMatch& match) {
+    start.assign(names.size() + 1, 0);
     for (const PartUse& use : uses) {
         if (!use.found() || use.hasUnknownPins) continue;
         for (int net : use.net()) {
@@ -444,11 +463,14 @@ void placeNets(std::span<const PartUse> uses, const std::vector<std::string_view
 
 }  // namespace
 
-CircuitMatch matchCircuit(const CheckContext& context, const Circuit& circuit) {
-    CircuitMatch match;
-    Uses uses(context, circuit);
+void matchCircuit(const CheckContext& context, const Circuit& circuit, MatchMemory& memory,
+                  CircuitMatch& match) {
+    match.errors.clear();
+    match.warnings.clear();
+    Uses uses(context, circuit, memory);
     declareParts(context.board(), circuit, uses);
-    const std::vector<std::string_view> names = assignNets(circuit, uses);
+    const std::vector<std::string_view>& names = memory.netNames;
+    assignNets(circuit, uses, memory.netNames);
     const std::span<PartUse> all = uses.mentionedByRef();
     for (const PartUse& use : all) {
         if (use.found()) continue;
@@ -467,8 +489,7 @@ CircuitMatch matchCircuit(const CheckContext& context, const Circuit& circuit) {
         if (use.found()) checkValue(context, use, match.errors, match.warnings);
     }
     orientParts(context, all, names, match.errors, match.warnings);
-    placeNets(all, names, match);
-    return match;
+    placeNets(all, names, memory.netStart, match);
 }
 
 }  // namespace netcheck

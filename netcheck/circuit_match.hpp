@@ -6,11 +6,15 @@
 #include <span>
 #include <string>
 #include <string_view>
+#include <utility>
 #include <vector>
 
+#include "cache_line_allocator.hpp"
 #include "check_context.hpp"
 #include "check_report.hpp"
 #include "circuit.hpp"
+#include "part_use.hpp"
+#include "ref_table.hpp"
 
 namespace netcheck {
 
@@ -50,7 +54,26 @@ struct CircuitMatch {
     CircuitMatch& operator=(const CircuitMatch&) = delete;
 };
 
-/// Matches the board's parts and pins to `circuit`.
-CircuitMatch matchCircuit(const CheckContext& context, const Circuit& circuit);
+/// The matcher's working lists, kept by the caller between checks so that a re-check reuses
+/// their memory (what is in them between calls means nothing).
+struct MatchMemory {
+    RefTable refs;
+    std::vector<PartUse, CacheLineAllocator<PartUse>> uses;
+    std::vector<int> pool;
+    std::vector<int> useOfPart;
+    std::vector<int> useOfOffboard;
+    std::vector<int> order;
+    std::vector<int> slotOfUse;
+    std::vector<int> useInSlot;
+    std::vector<std::pair<std::string_view, std::string_view>> unknownPins;
+    std::vector<char> mentionedPart;
+    std::vector<char> mentionedOffboard;
+    std::vector<std::string_view> netNames;
+    std::vector<std::size_t> netStart;
+};
+
+/// Matches the board's parts and pins to `circuit`, into `match` (whatever it held is replaced).
+void matchCircuit(const CheckContext& context, const Circuit& circuit, MatchMemory& memory,
+                  CircuitMatch& match);
 
 }  // namespace netcheck

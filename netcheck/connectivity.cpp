@@ -14,15 +14,14 @@ namespace netcheck {
 namespace {
 
 // Node id of each off-board lug, keyed by its pin reference (sorted).
-std::vector<std::pair<PinRef, int>> lugNodes(const Board& board) {
-    std::vector<std::pair<PinRef, int>> lugs;
+void collectLugNodes(const Board& board, std::vector<std::pair<PinRef, int>>& lugs) {
+    lugs.clear();
     int node = board.holeCount();
     for (const OffboardPart& part : board.offboard) {
         for (const std::string& pin : part.pins) lugs.push_back({PinRef{part.ref, pin}, node++});
     }
     std::stable_sort(lugs.begin(), lugs.end(),
                      [](const auto& a, const auto& b) { return a.first < b.first; });
-    return lugs;
 }
 
 int findLug(const std::vector<std::pair<PinRef, int>>& lugs, const PinRef& pin) {
@@ -33,14 +32,22 @@ int findLug(const std::vector<std::pair<PinRef, int>>& lugs, const PinRef& pin) 
 
 }  // namespace
 
-Connectivity::Connectivity(const Board& board)
-    : board_(&board), holeCount_(board.holeCount()), pinNodes_(lugNodes(board)) {
+Connectivity::Connectivity(const Board& board) {
+    retrace(board);
+}
+
+void Connectivity::retrace(const Board& board) {
+    board_ = &board;
+    holeCount_ = board.holeCount();
+    islandCount_ = 0;
+    collectLugNodes(board, pinNodes_);
     markBreaks(board);
     segmentCount_ = breaks_.countAll();
     const int lugCount = static_cast<int>(pinNodes_.size());
 
     // Links and wires join segments and lugs.
-    UnionFind sets(segmentCount_ + lugCount);
+    UnionFind& sets = sets_;
+    sets.reset(segmentCount_ + lugCount);
     auto setOfHole = [&](Hole hole) -> int {
         return board.contains(hole) ? segmentOf(hole.row * board.cols + hole.col) : -1;
     };

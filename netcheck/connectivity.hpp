@@ -8,6 +8,7 @@
 #include "board.hpp"
 #include "circuit.hpp"
 #include "hole_bits.hpp"
+#include "union_find.hpp"
 
 namespace netcheck {
 
@@ -23,6 +24,8 @@ struct Island {
 class Connectivity {
 public:
     explicit Connectivity(const Board& board);
+    /// Traces `board` afresh in this object's memory (for checks repeated on every edit).
+    void retrace(const Board& board);
 
     int islandCount() const { return islandCount_; }
     /// Island of a hole; -1 outside the board.
@@ -64,13 +67,14 @@ private:
         return node < holeCount_ ? breaks_.countBefore(node) : segmentCount_ + node - holeCount_;
     }
 
-    const Board* board_;
+    const Board* board_ = nullptr;
     int holeCount_ = 0;
     int segmentCount_ = 0;  // strip segments, lugs not counted
     HoleBits breaks_;
     HoleBits holeCut_;
     std::vector<int> islandOfSegment_;
     std::vector<std::pair<PinRef, int>> pinNodes_;  // sorted by PinRef, for islandOfPin
+    UnionFind sets_;                                // kept only for its memory
     int islandCount_ = 0;
 };
 

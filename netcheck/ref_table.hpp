@@ -19,10 +19,16 @@ class RefTable {
     using Packed = PackedName<std::uint64_t>;
 
 public:
-    explicit RefTable(std::size_t expected) {
+    RefTable() = default;
+    explicit RefTable(std::size_t expected) { reset(expected); }
+
+    /// Empties the table, sized for `expected` names, reusing its memory.
+    void reset(std::size_t expected) {
         std::size_t size = 16;
         while (size < 2 * expected) size *= 2;
         slots_.assign(size, Slot{});
+        longKeys_.clear();
+        used_ = 0;
     }
 
     /// What a lookup of one name computes before it touches the table.

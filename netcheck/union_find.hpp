@@ -10,7 +10,12 @@ namespace netcheck {
 
 class UnionFind {
 public:
-    explicit UnionFind(int count) : parent_(static_cast<std::size_t>(count)) {
+    UnionFind() = default;
+    explicit UnionFind(int count) { reset(count); }
+
+    /// `count` sets of one member each, reusing the memory.
+    void reset(int count) {
+        parent_.resize(static_cast<std::size_t>(count));
         std::iota(parent_.begin(), parent_.end(), 0);
     }
 

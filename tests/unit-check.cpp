@@ -290,6 +290,28 @@ TEST_CASE("check") {
         }
     }
 
+    SUBCASE("a checker kept between checks reports exactly what a fresh check reports") {
+        // One Checker over boards of changing size, copper and circuit, as the editor re-checks:
+        // nothing left in its memory from one board may show in the next one's report.
+        std::mt19937 rng(2718);
+        Checker checker;
+        for (int i = 0; i < 240; ++i) {
+            test_support::RandomBoardOptions options;
+            if (i % 8 == 0) {  // now and then a larger board between the small ones
+                options.minRows = 30;
+                options.maxRows = 50;
+                options.minCols = 40;
+                options.maxCols = 70;
+            }
+            const Board board = test_support::randomBoard(rng, options);
+            CAPTURE(i);
+            const CheckReport kept = checker.check(board);
+            const CheckReport fresh = check(board);
+            CHECK(reportJson(kept).dump() == reportJson(fresh).dump());
+            CHECK(formatReportText(kept, board) == formatReportText(fresh, board));
+        }
+    }
+
     SUBCASE("every suggested cut on random boards parts its two nets without a new open") {
         std::mt19937 rng(4242);
         int tried = 0;

@@ -46,7 +46,7 @@ void Document::recheck() {
     // Connectivity keeps a pointer to the board it traced; board_ never moves.
     connectivity_ = std::make_unique<netcheck::Connectivity>(board_);
     islands_ = connectivity_->islands();
-    report_ = netcheck::check(board_);
+    report_ = checker_.check(board_);
     ++revision_;
 }
 

@@ -7,6 +7,7 @@
 #include <vector>
 
 #include "netcheck/board.hpp"
+#include "netcheck/check.hpp"
 #include "netcheck/check_report.hpp"
 #include "netcheck/connectivity.hpp"
 #include "netcheck/edit/history.hpp"
@@ -54,6 +55,7 @@ private:
     bool readOnly_ = false;
     bool unsavedImport_ = false;
     netcheck::edit::History history_;
+    netcheck::Checker checker_;  // re-checks on every edit in the same memory
     netcheck::CheckReport report_;
     std::unique_ptr<netcheck::Connectivity> connectivity_;
     std::vector<netcheck::Island> islands_;

@@ -2,8 +2,9 @@
 // there are no findings to locate) on generated boards from 10x10 to 1000x1000 holes, with parts,
 // cuts and links in proportion to the holes (the 60x40 board with 100 parts sets the density), and
 // Boost.Graph's connected_components over the same hole graph as a baseline, in the same run.
-// The same boards are also checked after a round trip through the board file (as the CLI and the
-// editor hold them), and read field by field with no check at all (the floor).
+// The same boards are also re-checked by one Checker kept between checks (as the editor does),
+// checked after a round trip through the board file (as the CLI and the editor hold them), and
+// read field by field with no check at all (the floor).
 //   build-release/bin/bench_check --benchmark_counters_tabular=true
 #include <benchmark/benchmark.h>
 
@@ -144,6 +145,18 @@ void readModel(benchmark::State& state) {
     setCounters(state, board);
 }
 
+// The editor's case: one Checker re-checks the board after every edit, reusing its memory.
+void recheck(benchmark::State& state) {
+    const Board board = boardOfSide(static_cast<int>(state.range(0)));
+    Checker checker;
+    for (auto _ : state) {
+        CheckReport report = checker.check(board);
+        if (!report.ok()) state.SkipWithError("the generated board should check clean");
+        benchmark::DoNotOptimize(report);
+    }
+    setCounters(state, board);
+}
+
 void traceOnly(benchmark::State& state) {
     const Board board = boardOfSide(static_cast<int>(state.range(0)));
     for (auto _ : state) {
@@ -180,8 +193,9 @@ void boostComponents(benchmark::State& state) {
 
 void editorBoard(benchmark::State& state) {
     const Board board = generatedBoard(40, 60, 100);
+    Checker checker;  // as the editor holds one
     for (auto _ : state) {
-        CheckReport report = check(board);
+        CheckReport report = checker.check(board);
         benchmark::DoNotOptimize(report);
     }
     setCounters(state, board);
@@ -191,6 +205,7 @@ void editorBoard(benchmark::State& state) {
 
 BENCHMARK(fullCheck)->Arg(10)->Arg(30)->Arg(100)->Arg(300)->Arg(1000)->Unit(
     benchmark::kMicrosecond);
+BENCHMARK(recheck)->Arg(10)->Arg(30)->Arg(100)->Arg(300)->Arg(1000)->Unit(benchmark::kMicrosecond);
 BENCHMARK(loadedCheck)->Arg(10)->Arg(100)->Arg(1000)->Unit(benchmark::kMicrosecond);
 BENCHMARK(readModel)->Arg(10)->Arg(100)->Arg(1000)->Unit(benchmark::kMicrosecond);
 BENCHMARK(traceOnly)->Arg(10)->Arg(100)->Arg(1000)->Unit(benchmark::kMicrosecond);
