@@ -21,14 +21,14 @@ struct CacheLineAllocator {
     T* allocate(std::size_t n) {
         const std::size_t bytes = n * sizeof(T);
         if (bytes < kLarge) return static_cast<T*>(::operator new(bytes));
-        return static_cast<T*>(::operator new (bytes, std::align_val_t{kLine}));
+        return static_cast<T*>(::operator new(bytes, std::align_val_t{kLine}));
     }
+    // Unsized deletes: some compilers leave sized deallocation off by default.
     void deallocate(T* at, std::size_t n) noexcept {
-        const std::size_t bytes = n * sizeof(T);
-        if (bytes < kLarge) {
-            ::operator delete(at, bytes);
+        if (n * sizeof(T) < kLarge) {
+            ::operator delete(at);
         } else {
-            ::operator delete (at, bytes, std::align_val_t{kLine});
+            ::operator delete(at, std::align_val_t{kLine});
         }
     }
     template <typename U>
