@@ -28,14 +28,6 @@ struct Lead {
     bool shared = false;  ///< another lead is in the same hole
 };
 
-/// Asks for a part's pins ahead of use: they are a block of their own on the heap, often across
-/// two cache lines.
-inline void prefetchPins(const Part& part) {
-    if (part.pins.empty()) return;
-    __builtin_prefetch(part.pins.data());
-    __builtin_prefetch(reinterpret_cast<const char*>(part.pins.data() + part.pins.size()) - 1);
-}
-
 /// One check run's shared facts. Node ids follow Connectivity: holes, then off-board lugs.
 class CheckContext {
 public:
