@@ -55,7 +55,7 @@ void CheckContext::collectLeads(const Board& board) {
         const std::size_t first = leads_.size();
         for (std::size_t k = 0; k < pins.size(); ++k) {
             add(Lead::Kind::PartPin, static_cast<int>(p), static_cast<int>(k), pins[k].hole,
-                PackedName<std::uint32_t>::of(pins[k].name));
+                PinKey::of(pins[k].name));
         }
         const bool everyPin = leads_.size() - first == pins.size();
         firstLeadOfPart_.push_back(everyPin ? static_cast<int>(first) : -1);

@@ -22,7 +22,7 @@ struct Lead {
     int sub = 0;                ///< pin index, or 0/1 for the from/to end
     int hole = 0;               ///< hole index row * cols + col
     int island = 0;             ///< island of the hole
-    std::uint32_t nameKey = 0;  ///< a part pin's name packed (PackedName<uint32_t>)
+    std::uint32_t nameKey = 0;  ///< a part pin's name packed (PinKey)
     Kind kind = Kind::PartPin;
     bool onCut = false;   ///< the hole is hole-cut (the lead touches no copper)
     bool shared = false;  ///< another lead is in the same hole

@@ -29,64 +29,55 @@ void prefetchLines(const void* at, int lines) {
 class Uses {
 public:
     Uses(const CheckContext& context, const Circuit& circuit, MatchMemory& memory)
-        : context_(context),
-          refs_(memory.refs),
-          uses_(memory.uses),
-          pool_(memory.pool),
-          useOfPart_(memory.useOfPart),
-          useOfOffboard_(memory.useOfOffboard),
-          unknownPins_(memory.unknownPins),
-          mentionedPart_(memory.mentionedPart),
-          mentionedOffboard_(memory.mentionedOffboard),
-          order_(memory.order),
-          slotOfUse_(memory.slotOfUse),
-          useInSlot_(memory.useInSlot) {
+        : context_(context), memory_(memory) {
         const Board& board = context.board();
-        refs_.reset(board.parts.size() + board.offboard.size());
-        for (auto* list : {&pool_, &useOfPart_, &useOfOffboard_, &order_}) list->clear();
-        uses_.clear();
-        unknownPins_.clear();
-        mentionedPart_.clear();
-        mentionedOffboard_.clear();
+        memory_.refs.reset(board.parts.size() + board.offboard.size());
+        for (auto* list :
+             {&memory_.pool, &memory_.useOfPart, &memory_.useOfOffboard, &memory_.order})
+            list->clear();
+        memory_.uses.clear();
+        memory_.unknownPins.clear();
+        memory_.mentionedPart.clear();
+        memory_.mentionedOffboard.clear();
         // Circuit refs mostly name board parts: room for a few missing ones, growing past that.
         // (Kept under 1 KB on a small board, where a larger block would make malloc tidy up its
         // free lists on every check.)
         const std::size_t boardParts = board.parts.size() + board.offboard.size();
-        uses_.reserve(boardParts + boardParts / 8 + 1);
-        order_.reserve(circuit.parts.size());
+        memory_.uses.reserve(boardParts + boardParts / 8 + 1);
+        memory_.order.reserve(circuit.parts.size());
         // Each board part is placed once, so the pool never grows past this and the pin arrays
         // in it stay put.
         std::size_t lugs = 0;
         for (const OffboardPart& part : board.offboard) lugs += part.pins.size();
-        pool_.reserve(PartUse::kArraysPerPin * (context.partPinCount() + lugs));
-        useOfPart_.reserve(board.parts.size());
+        memory_.pool.reserve(PartUse::kArraysPerPin * (context.partPinCount() + lugs));
+        memory_.useOfPart.reserve(board.parts.size());
         for (std::size_t p = 0; p < board.parts.size(); ++p) {
             if (p + kLookAhead < board.parts.size()) prefetchPart(board.parts[p + kLookAhead]);
-            useOfPart_.push_back(addBoardPart(board.parts[p].ref, false, p));
+            memory_.useOfPart.push_back(addBoardPart(board.parts[p].ref, false, p));
         }
-        useOfOffboard_.reserve(board.offboard.size());
+        memory_.useOfOffboard.reserve(board.offboard.size());
         for (std::size_t p = 0; p < board.offboard.size(); ++p) {
-            useOfOffboard_.push_back(addBoardPart(board.offboard[p].ref, true, p));
+            memory_.useOfOffboard.push_back(addBoardPart(board.offboard[p].ref, true, p));
         }
     }
 
     /// Call once the circuit's declared parts are mentioned, before any ref only named in nets.
-    void endOfDeclaredParts() { declared_ = order_.size(); }
+    void endOfDeclaredParts() { declared_ = memory_.order.size(); }
 
     /// Index of the use of a ref the circuit names (`key` is RefTable::keyOf(ref)).
     int mention(const std::string& ref, const RefTable::Key& key) {
-        const int u = refs_.insert(ref, key, static_cast<int>(uses_.size()));
-        if (u == static_cast<int>(uses_.size())) uses_.emplace_back().refName = &ref;
+        const int u = memory_.refs.insert(ref, key, static_cast<int>(memory_.uses.size()));
+        if (u == static_cast<int>(memory_.uses.size())) memory_.uses.emplace_back().refName = &ref;
         PartUse& use = at(u);
         if (!use.mentioned) {
             use.mentioned = true;
-            order_.push_back(u);
+            memory_.order.push_back(u);
         }
         return u;
     }
 
-    PartUse& at(int u) { return uses_[static_cast<std::size_t>(u)]; }
-    const RefTable& refs() const { return refs_; }
+    PartUse& at(int u) { return memory_.uses[static_cast<std::size_t>(u)]; }
+    const RefTable& refs() const { return memory_.refs; }
 
     /// Every use the circuit mentions, by ref, moved in place to the front of the uses (the rest
     /// follow): every later pass goes through the parts by ref, and on a large board would
@@ -94,78 +85,81 @@ public:
     /// use indices (mention(), at()) no longer hold.
     std::span<PartUse> mentionedByRef() {
         // Declared parts come sorted from the circuit; only refs named just in nets need sorting.
-        if (order_.size() > declared_) {
-            std::stable_sort(order_.begin(), order_.end(),
+        if (memory_.order.size() > declared_) {
+            std::stable_sort(memory_.order.begin(), memory_.order.end(),
                              [&](int a, int b) { return at(a).ref() < at(b).ref(); });
         }
-        for (int u : useOfPart_) mentionedPart_.push_back(at(u).mentioned ? 1 : 0);
-        for (int u : useOfOffboard_) mentionedOffboard_.push_back(at(u).mentioned ? 1 : 0);
+        for (int u : memory_.useOfPart) memory_.mentionedPart.push_back(at(u).mentioned ? 1 : 0);
+        for (int u : memory_.useOfOffboard)
+            memory_.mentionedOffboard.push_back(at(u).mentioned ? 1 : 0);
         // Boards numbered in placement order are often in ref order already.
         bool inPlace = true;
-        for (std::size_t i = 0; i < order_.size() && inPlace; ++i) {
-            inPlace = order_[i] == static_cast<int>(i);
+        for (std::size_t i = 0; i < memory_.order.size() && inPlace; ++i) {
+            inPlace = memory_.order[i] == static_cast<int>(i);
         }
-        if (inPlace) return std::span<PartUse>(uses_.data(), order_.size());
+        if (inPlace) return std::span<PartUse>(memory_.uses.data(), memory_.order.size());
         // Swaps each use into its place; `slot` and `use` track which use sits where.
-        std::vector<int>& slot = slotOfUse_;
-        std::vector<int>& use = useInSlot_;
-        slot.resize(uses_.size());
-        use.resize(uses_.size());
+        std::vector<int>& slot = memory_.slotOfUse;
+        std::vector<int>& use = memory_.useInSlot;
+        slot.resize(memory_.uses.size());
+        use.resize(memory_.uses.size());
         std::iota(slot.begin(), slot.end(), 0);
         std::iota(use.begin(), use.end(), 0);
         auto slotOf = [&](int u) {
             return static_cast<std::size_t>(slot[static_cast<std::size_t>(u)]);
         };
-        for (std::size_t i = 0; i < order_.size(); ++i) {
-            if (i + kLookAhead < order_.size())
-                __builtin_prefetch(&uses_[slotOf(order_[i + kLookAhead])]);
-            const std::size_t from = slotOf(order_[i]);
+        for (std::size_t i = 0; i < memory_.order.size(); ++i) {
+            if (i + kLookAhead < memory_.order.size())
+                __builtin_prefetch(&memory_.uses[slotOf(memory_.order[i + kLookAhead])]);
+            const std::size_t from = slotOf(memory_.order[i]);
             if (from == i) continue;
-            std::swap(uses_[i], uses_[from]);
+            std::swap(memory_.uses[i], memory_.uses[from]);
             std::swap(use[i], use[from]);
             slot[static_cast<std::size_t>(use[i])] = static_cast<int>(i);
             slot[static_cast<std::size_t>(use[from])] = static_cast<int>(from);
         }
-        return std::span<PartUse>(uses_.data(), order_.size());
+        return std::span<PartUse>(memory_.uses.data(), memory_.order.size());
     }
 
     /// Notes a pin the circuit uses that the part lacks (for pin-mismatch).
     void noteUnknownPin(PartUse& use, std::string_view pin) {
         use.hasUnknownPins = true;
-        unknownPins_.emplace_back(use.ref(), pin);
+        memory_.unknownPins.emplace_back(use.ref(), pin);
     }
 
     /// The pins the circuit uses that the board part of `ref` lacks, sorted, each once.
     std::vector<std::string> unknownPinsOf(std::string_view ref) {
         if (!unknownSorted_) {
-            std::sort(unknownPins_.begin(), unknownPins_.end());
-            unknownPins_.erase(std::unique(unknownPins_.begin(), unknownPins_.end()),
-                               unknownPins_.end());
+            std::sort(memory_.unknownPins.begin(), memory_.unknownPins.end());
+            memory_.unknownPins.erase(
+                std::unique(memory_.unknownPins.begin(), memory_.unknownPins.end()),
+                memory_.unknownPins.end());
             unknownSorted_ = true;
         }
         std::vector<std::string> pins;
-        auto it = std::lower_bound(unknownPins_.begin(), unknownPins_.end(),
+        auto it = std::lower_bound(memory_.unknownPins.begin(), memory_.unknownPins.end(),
                                    std::pair<std::string_view, std::string_view>{ref, {}});
-        for (; it != unknownPins_.end() && it->first == ref; ++it) pins.emplace_back(it->second);
+        for (; it != memory_.unknownPins.end() && it->first == ref; ++it)
+            pins.emplace_back(it->second);
         return pins;
     }
 
     /// Whether the circuit names board part `p` (of board.parts, or of board.offboard); asked
     /// after mentionedByRef().
-    bool mentionsPart(std::size_t p) const { return mentionedPart_[p] != 0; }
-    bool mentionsOffboard(std::size_t p) const { return mentionedOffboard_[p] != 0; }
+    bool mentionsPart(std::size_t p) const { return memory_.mentionedPart[p] != 0; }
+    bool mentionsOffboard(std::size_t p) const { return memory_.mentionedOffboard[p] != 0; }
 
 private:
     // On a large board the table slots of consecutive parts are far apart in memory; asking for
     // them a few parts ahead lets the waits overlap.
     static constexpr std::size_t kLookAhead = 32;
 
-    void prefetchPart(const Part& part) const { refs_.prefetch(RefTable::keyOf(part.ref)); }
+    void prefetchPart(const Part& part) const { memory_.refs.prefetch(RefTable::keyOf(part.ref)); }
 
     int addBoardPart(const std::string& ref, bool offboard, std::size_t p) {
-        const int u = refs_.insert(ref, static_cast<int>(uses_.size()));
-        if (u == static_cast<int>(uses_.size())) {
-            PartUse& use = uses_.emplace_back();
+        const int u = memory_.refs.insert(ref, static_cast<int>(memory_.uses.size()));
+        if (u == static_cast<int>(memory_.uses.size())) {
+            PartUse& use = memory_.uses.emplace_back();
             use.refName = &ref;
             place(use, offboard, p);
         }
@@ -191,8 +185,8 @@ private:
             pins = part.pins.size();
         }
         use.pins = static_cast<int>(pins);
-        use.pool = pool_.data() + pool_.size();
-        pool_.resize(pool_.size() + PartUse::kArraysPerPin * pins);
+        use.pool = memory_.pool.data() + memory_.pool.size();
+        memory_.pool.resize(memory_.pool.size() + PartUse::kArraysPerPin * pins);
         const std::span<const Lead> leads =
             offboard ? std::span<const Lead>{} : context_.leadsOfPart(use.index);
         for (std::size_t k = 0; k < pins; ++k) {
@@ -216,20 +210,9 @@ private:
         }
     }
 
-    // The lists live in the check's MatchMemory, so a re-check reuses them.
     const CheckContext& context_;
-    RefTable& refs_;
-    std::vector<PartUse, CacheLineAllocator<PartUse>>& uses_;
-    std::vector<int>& pool_;
-    std::vector<int>& useOfPart_;
-    std::vector<int>& useOfOffboard_;
-    std::vector<std::pair<std::string_view, std::string_view>>& unknownPins_;  // (ref, pin)
+    MatchMemory& memory_;  // the lists live there, so a re-check reuses them
     bool unknownSorted_ = false;
-    std::vector<char>& mentionedPart_;  // filled by mentionedByRef()
-    std::vector<char>& mentionedOffboard_;
-    std::vector<int>& order_;
-    std::vector<int>& slotOfUse_;  // mentionedByRef()'s permutation
-    std::vector<int>& useInSlot_;
     std::size_t declared_ = 0;
 };
 

@@ -45,4 +45,8 @@ private:
     }
 };
 
+/// A pin name packed (pin names are short: "1", "+", "VCC"), and a part value ("4k7", "100n").
+using PinKey = PackedName<std::uint32_t>;
+using ValueKey = PackedName<std::uint64_t>;
+
 }  // namespace netcheck

@@ -26,9 +26,6 @@ struct BoardPartFacts {
     const PartKind* known = nullptr;  ///< the kind's table row; null for unknown kinds
 };
 
-using PinKey = PackedName<std::uint32_t>;
-using ValueKey = PackedName<std::uint64_t>;
-
 /// A board part, or a ref the circuit names that the board lacks. Its per-pin arrays lie side by
 /// side in one pool owned by the matcher, so placing a part allocates nothing of its own and a
 /// part's pins share a cache line or two. A use is the size of one cache line (and the matcher
