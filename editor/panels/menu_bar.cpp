@@ -94,8 +94,11 @@ void drawMenuBar(EditorApp& app) {
     ImGui::SameLine(ImGui::GetWindowWidth() * 0.35f);
     ImGui::TextDisabled("%s", title.c_str());
     ImGui::SameLine(ImGui::GetWindowWidth() - 220);
-    if (report.ok()) ImGui::TextColored({0.45f, 0.9f, 0.55f, 1.0f}, "Check: OK (%zu warnings)", report.warnings.size());
-    else ImGui::TextColored({1.0f, 0.5f, 0.45f, 1.0f}, "Check: %zu errors", report.errors.size());
+    const std::size_t warnings = report.warnings.size();
+    const std::size_t errors = report.errors.size();
+    if (report.ok())
+        ImGui::TextColored({0.45f, 0.9f, 0.55f, 1.0f}, "Check: OK (%zu warning%s)", warnings, warnings == 1 ? "" : "s");
+    else ImGui::TextColored({1.0f, 0.5f, 0.45f, 1.0f}, "Check: %zu error%s", errors, errors == 1 ? "" : "s");
     ImGui::EndMainMenuBar();
 }
 
