@@ -182,6 +182,8 @@ Checker::~Checker() = default;
 Checker::Checker(Checker&&) noexcept = default;
 Checker& Checker::operator=(Checker&&) noexcept = default;
 
+const Connectivity& Checker::copper() const { return workspace_->context->copper(); }
+
 CheckReport Checker::check(const Board& board, const Circuit* circuit) {
     if (circuit == nullptr && board.circuit) circuit = &*board.circuit;
     if (!workspace_) workspace_ = std::make_unique<Workspace>();

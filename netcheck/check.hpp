@@ -9,6 +9,8 @@
 
 namespace netcheck {
 
+class Connectivity;
+
 /// Checks the board against `circuit` (or against board.circuit when null; with neither, only the
 /// board's own faults are reported). Deterministic: the same board gives the same report.
 CheckReport check(const Board& board, const Circuit* circuit = nullptr);
@@ -24,6 +26,10 @@ public:
     Checker& operator=(Checker&&) noexcept;
 
     CheckReport check(const Board& board, const Circuit* circuit = nullptr);
+    /// The copper of the board the last check traced, valid while that board stays as it was
+    /// and until the next check (a viewer checking on every edit then traces each board once).
+    /// Call only after a check.
+    const Connectivity& copper() const;
 
 private:
     struct Workspace;

@@ -131,25 +131,23 @@ bool Connectivity::joinsNext(Hole hole) const {
     return board_->contains(hole) && !breaks_.test(hole.row * board_->cols + hole.col);
 }
 
-std::vector<Island> Connectivity::islands() const {
-    std::vector<Island> result(static_cast<std::size_t>(islandCount_));
-    for (int i = 0; i < islandCount_; ++i) result[static_cast<std::size_t>(i)].id = i;
+Island Connectivity::island(int id) const {
+    Island result;
+    result.id = id;
+    if (id < 0 || id >= islandCount_) return result;
     const int cols = board_->cols;
-    for (int i = 0; i < board_->holeCount(); ++i) {
-        result[static_cast<std::size_t>(islandOfNode(i))].holes.push_back(Hole{i / cols, i % cols});
+    for (int i = 0; i < holeCount_; ++i) {
+        if (islandOfNode(i) == id) result.holes.push_back(Hole{i / cols, i % cols});
     }
     for (const Part& part : board_->parts) {
         for (const Pin& pin : part.pins) {
-            const int island = islandOfHole(pin.hole);
-            if (island >= 0) {
-                result[static_cast<std::size_t>(island)].pins.push_back(PinRef{part.ref, pin.name});
-            }
+            if (islandOfHole(pin.hole) == id) result.pins.push_back(PinRef{part.ref, pin.name});
         }
     }
     for (const auto& [lug, node] : pinNodes_) {
-        result[static_cast<std::size_t>(islandOfNode(node))].pins.push_back(lug);
+        if (islandOfNode(node) == id) result.pins.push_back(lug);
     }
-    for (Island& island : result) std::sort(island.pins.begin(), island.pins.end());
+    std::sort(result.pins.begin(), result.pins.end());
     return result;
 }
 

@@ -32,8 +32,9 @@ public:
     int islandOfHole(Hole hole) const;
     /// Island of an on-board pin or off-board lug; -1 if the board has no such pin.
     int islandOfPin(const PinRef& pin) const;
-    /// Holes and pins of every island, in id order. Built on demand (costs O(holes)).
-    std::vector<Island> islands() const;
+    /// Holes and pins of island `id` (empty when out of range). Built on demand, in O(holes):
+    /// a viewer asks for the one island under the pointer, not for every island on each edit.
+    Island island(int id) const;
     /// True when a hole cut removed this hole's copper.
     bool isHoleCut(Hole hole) const;
     /// The same for a hole index (row * cols + col) known to be on the board.

@@ -5,6 +5,7 @@
 #include <boost/graph/adjacency_list.hpp>
 #include <boost/graph/connected_components.hpp>
 
+#include <algorithm>
 #include <map>
 #include <random>
 #include <set>
@@ -130,6 +131,43 @@ TEST_CASE("connectivity") {
             CAPTURE(i);
             CHECK(partition(tracedIslands(board)) == partition(boostComponents(board)));
         }
+    }
+
+    SUBCASE("one island's holes and pins are those of its Boost.Graph component") {
+        std::mt19937 rng(20261202);  // fixed seed
+        for (int i = 0; i < 500; ++i) {
+            const Board board = test_support::randomBoard(rng);
+            if (board.parts.empty()) continue;
+            CAPTURE(i);
+            const std::vector<int> reference = boostComponents(board);
+            const Connectivity copper(board);
+            const Hole probe = board.parts.front().pins.front().hole;
+            const int component = reference[static_cast<std::size_t>(holeNode(board, probe))];
+            std::vector<Hole> holes;
+            for (int node = 0; node < board.holeCount(); ++node) {
+                if (reference[static_cast<std::size_t>(node)] == component)
+                    holes.push_back(Hole{node / board.cols, node % board.cols});
+            }
+            std::vector<PinRef> pins;
+            for (const Part& part : board.parts) {
+                for (const Pin& pin : part.pins) {
+                    if (reference[static_cast<std::size_t>(holeNode(board, pin.hole))] == component)
+                        pins.push_back(PinRef{part.ref, pin.name});
+                }
+            }
+            for (const OffboardPart& part : board.offboard) {
+                for (const std::string& lug : part.pins) {
+                    const int node = endNode(board, Endpoint::atLug({part.ref, lug}));
+                    if (reference[static_cast<std::size_t>(node)] == component)
+                        pins.push_back(PinRef{part.ref, lug});
+                }
+            }
+            std::sort(pins.begin(), pins.end());
+            const Island island = copper.island(copper.islandOfHole(probe));
+            CHECK(island.holes == holes);
+            CHECK(island.pins == pins);
+        }
+        CHECK(Connectivity(stripBoard(2, 2)).island(2).holes.empty());  // ids run 0..1
     }
 
     SUBCASE("a strip is one island until cut") {

@@ -43,18 +43,33 @@ void Document::markSaved(std::string path) {
 }
 
 void Document::recheck() {
-    // Connectivity keeps a pointer to the board it traced; board_ never moves.
-    connectivity_ = std::make_unique<netcheck::Connectivity>(board_);
-    islands_ = connectivity_->islands();
+    // The checker keeps a pointer to the board it traced; board_ never moves.
     report_ = checker_.check(board_);
     ++revision_;
 }
 
-std::optional<std::string> Document::netOfIsland(int island) const {
-    if (island < 0 || island >= static_cast<int>(islands_.size()) || !board_.circuit) return std::nullopt;
-    for (const netcheck::PinRef& pin : islands_[static_cast<std::size_t>(island)].pins)
-        if (auto net = board_.circuit->netOf(pin)) return net;
-    return std::nullopt;
+const Document::IslandDetails* Document::details(int id) const {
+    if (id < 0 || id >= connectivity().islandCount()) return nullptr;
+    if (details_.revision == revision_ && details_.island.id == id) return &details_;
+    details_.revision = revision_;
+    details_.island = connectivity().island(id);
+    details_.net.reset();
+    if (board_.circuit) {
+        for (const netcheck::PinRef& pin : details_.island.pins) {
+            if ((details_.net = board_.circuit->netOf(pin))) break;
+        }
+    }
+    return &details_;
+}
+
+const netcheck::Island* Document::island(int id) const {
+    const IslandDetails* found = details(id);
+    return found ? &found->island : nullptr;
+}
+
+std::optional<std::string> Document::netOfIsland(int id) const {
+    const IslandDetails* found = details(id);
+    return found ? found->net : std::nullopt;
 }
 
 }  // namespace stripsmith

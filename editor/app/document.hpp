@@ -38,9 +38,9 @@ public:
 
     /// Check result and traced copper for the present board.
     const netcheck::CheckReport& report() const { return report_; }
-    const netcheck::Connectivity& connectivity() const { return *connectivity_; }
-    /// Every island's holes and pins, indexed by island id.
-    const std::vector<netcheck::Island>& islands() const { return islands_; }
+    const netcheck::Connectivity& connectivity() const { return checker_.copper(); }
+    /// Holes and pins of island `id`; null when there is no such island.
+    const netcheck::Island* island(int id) const;
     /// Bumped on every change, so views can cache derived data.
     unsigned revision() const { return revision_; }
 
@@ -49,6 +49,15 @@ public:
 
 private:
     void recheck();
+    // Island details are worked out for the island asked for (the one under the pointer, asked
+    // every frame) and kept until it or the board changes: listing every island on each edit
+    // would cost a large board more than its check.
+    struct IslandDetails {
+        unsigned revision = 0;
+        netcheck::Island island{-1, {}, {}};
+        std::optional<std::string> net;
+    };
+    const IslandDetails* details(int id) const;
 
     netcheck::Board board_;
     std::string path_;
@@ -57,9 +66,8 @@ private:
     netcheck::edit::History history_;
     netcheck::Checker checker_;  // re-checks on every edit in the same memory
     netcheck::CheckReport report_;
-    std::unique_ptr<netcheck::Connectivity> connectivity_;
-    std::vector<netcheck::Island> islands_;
     unsigned revision_ = 0;
+    mutable IslandDetails details_;
 };
 
 }  // namespace stripsmith

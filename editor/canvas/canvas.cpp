@@ -159,8 +159,7 @@ void drawCanvas(EditorApp& app, ImVec2 pos, ImVec2 size) {
     drawSubstrate(f, board);
     drawCopper(f, board);
     drawEdgeLabels(f, board);
-    if (app.hoverIsland >= 0 && app.hoverIsland < static_cast<int>(app.doc.islands().size()))
-        drawIslandHighlight(f, board, app.doc.islands()[static_cast<std::size_t>(app.hoverIsland)]);
+    if (const netcheck::Island* island = app.doc.island(app.hoverIsland)) drawIslandHighlight(f, board, *island);
     drawLinks(f, board, app.selection);
     drawParts(f, board, app.selection, app.hoverPart);
     // Cuts above the parts: a cut hidden under an IC is still a cut to make.

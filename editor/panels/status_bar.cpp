@@ -17,12 +17,12 @@ std::string hoverText(const EditorApp& app) {
     if (app.hoverHole && app.doc.connectivity().isHoleCut(*app.hoverHole)) return text + "  (hole cut: no copper)";
     if (app.hoverIsland < 0) return text;
     if (auto net = app.doc.netOfIsland(app.hoverIsland)) return text + "  net " + *net;
-    const auto& islands = app.doc.islands();
-    const auto& island = islands[static_cast<std::size_t>(app.hoverIsland)];
-    if (island.pins.empty()) return text + "  (no pins joined)";
+    const netcheck::Island* island = app.doc.island(app.hoverIsland);
+    if (!island) return text;
+    if (island->pins.empty()) return text + "  (no pins joined)";
     std::string pins;
-    for (std::size_t i = 0; i < island.pins.size() && i < 4; ++i) pins += (i ? ", " : "") + island.pins[i].name();
-    if (island.pins.size() > 4) pins += ", ...";
+    for (std::size_t i = 0; i < island->pins.size() && i < 4; ++i) pins += (i ? ", " : "") + island->pins[i].name();
+    if (island->pins.size() > 4) pins += ", ...";
     return text + "  joins " + pins;
 }
 

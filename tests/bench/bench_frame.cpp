@@ -1,6 +1,7 @@
 // CPU time to build one editor frame (board model -> ImGui draw lists, no GL) for boards of 100,
 // 1,000 and 10,000 parts, fitted to the view and at an editing zoom. Target: under 4 ms for
 // 1,000 parts (60 frames per second with room to spare on a laptop without a GPU).
+// And the cost of one edit as the document makes it: the command, then the re-check.
 #include <benchmark/benchmark.h>
 
 #include <imgui.h>
@@ -10,6 +11,7 @@
 #include "editor/app/look.hpp"
 #include "editor/platform/draw_data_split.hpp"
 #include "editor/tools/part_factory.hpp"
+#include "netcheck/edit/cut_commands.hpp"
 
 namespace {
 
@@ -81,6 +83,18 @@ void runFrames(benchmark::State& state, bool fitted) {
     state.counters["vertices"] = static_cast<double>(ImGui::GetDrawData()->TotalVtxCount);
 }
 
+// Toggles a hole cut in the free top-left corner hole on every edit (added, then removed).
+void BM_Edit(benchmark::State& state) {
+    Document doc;
+    doc.reset(makeBoard(static_cast<int>(state.range(0))), {});
+    const netcheck::Cut cut{{0, 0}, netcheck::Cut::Kind::Hole};
+    for (auto _ : state) {
+        doc.perform(netcheck::edit::toggleCut(doc.board(), cut));
+        benchmark::DoNotOptimize(doc.report().errors.size());
+    }
+    state.counters["holes"] = doc.board().holeCount();
+}
+
 void BM_FrameFitted(benchmark::State& state) { runFrames(state, true); }
 void BM_FrameEditingZoom(benchmark::State& state) { runFrames(state, false); }
 
@@ -88,4 +102,5 @@ void BM_FrameEditingZoom(benchmark::State& state) { runFrames(state, false); }
 
 BENCHMARK(BM_FrameFitted)->Arg(100)->Arg(1000)->Arg(10000)->Unit(benchmark::kMillisecond);
 BENCHMARK(BM_FrameEditingZoom)->Arg(100)->Arg(1000)->Arg(10000)->Unit(benchmark::kMillisecond);
+BENCHMARK(BM_Edit)->Arg(100)->Arg(1000)->Arg(10000)->Unit(benchmark::kMillisecond);
 BENCHMARK_MAIN();
