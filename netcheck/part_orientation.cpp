@@ -6,7 +6,6 @@
 #include <algorithm>
 #include <array>
 #include <cstdint>
-#include <optional>
 #include <unordered_map>
 
 #include "part_kinds.hpp"
@@ -133,7 +132,7 @@ Finding partFinding(std::string type, Severity severity, const CheckContext& con
 // are kept sorted, so a count is the length of a run of equal keys.
 class FlexibleCounts {
 public:
-    FlexibleCounts(std::span<const PartUse> uses, const std::vector<Freedom>& freedom) {
+    void build(std::span<const PartUse> uses, const std::vector<Freedom>& freedom) {
         for (std::size_t u = 0; u < uses.size(); ++u) {
             if (freedom[u] != Freedom::EndForEnd) continue;
             for (int k = 0; k < 2; ++k) {
@@ -171,14 +170,16 @@ public:
     LazyFlexibleCounts(std::span<const PartUse> uses, const std::vector<Freedom>& freedom)
         : uses_(uses), freedom_(freedom) {}
     const FlexibleCounts& get() {
-        if (!counts_) counts_.emplace(uses_, freedom_);
-        return *counts_;
+        if (!built_) counts_.build(uses_, freedom_);
+        built_ = true;
+        return counts_;
     }
 
 private:
     std::span<const PartUse> uses_;
     const std::vector<Freedom>& freedom_;
-    std::optional<FlexibleCounts> counts_;
+    FlexibleCounts counts_;
+    bool built_ = false;
 };
 
 // Returns whether the part was turned round.
