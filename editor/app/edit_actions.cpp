@@ -3,6 +3,7 @@
 #include <algorithm>
 #include <climits>
 
+#include "editor/canvas/offboard_layout.hpp"
 #include "editor/tools/hit_test.hpp"
 #include "editor/tools/part_factory.hpp"
 #include "editor/tools/ref_names.hpp"
@@ -54,8 +55,33 @@ void nudgeSelection(EditorApp& app, int rows, int cols) {
     for (const ElementRef& ref : app.selection)
         for (const Hole& h : holesOf(board, ref))
             if (!board.contains({h.row + rows, h.col + cols})) return;
-    std::vector<ElementRef> refs(app.selection.begin(), app.selection.end());
-    app.perform(netcheck::edit::moveElements(board, refs, rows, cols), kMergeArrowMove);
+    app.perform(moveCommand(board, app.selection, rows, cols), kMergeArrowMove);
+}
+
+std::unique_ptr<netcheck::edit::Command> moveCommand(const netcheck::Board& board, const Selected& selection,
+                                                     int rows, int cols) {
+    if (rows == 0 && cols == 0) return nullptr;
+    std::vector<ElementRef> inHoles;
+    std::vector<std::size_t> offboard;
+    for (const ElementRef& ref : selection) {
+        if (ref.kind != ElementRef::Kind::Offboard) inHoles.push_back(ref);
+        else if (ref.index < board.offboard.size()) offboard.push_back(ref.index);
+    }
+    std::vector<std::unique_ptr<netcheck::edit::Command>> members;
+    if (auto moved = netcheck::edit::moveElements(board, inHoles, rows, cols)) members.push_back(std::move(moved));
+    if (!offboard.empty()) {
+        const std::vector<OffboardSpot> spots = layoutOffboard(board);
+        for (std::size_t index : offboard) {
+            const netcheck::OffboardPart& part = board.offboard[index];
+            const ImVec2 corner{spots[index].min.x + static_cast<float>(cols), spots[index].min.y + static_cast<float>(rows)};
+            members.push_back(std::make_unique<netcheck::edit::ReplaceOffboard>(board, index, placedAt(part, corner),
+                                                                                "Move " + part.ref));
+        }
+    }
+    if (members.empty()) return nullptr;
+    if (members.size() == 1) return std::move(members.front());
+    return std::make_unique<netcheck::edit::CompoundCommand>("Move " + std::to_string(selection.size()) + " items",
+                                                             std::move(members));
 }
 
 ClipboardContent copyOf(const netcheck::Board& board, const Selected& selection) {

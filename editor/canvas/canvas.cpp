@@ -120,12 +120,16 @@ void logHolePositions(EditorApp& app, const CanvasFrame& f) {
     std::fprintf(stderr, "STRIPSMITH_E2E view A1 %.1f %.1f pitch %.3f mirrored %d rows %d cols %d\n", a1.x, a1.y,
                  static_cast<double>(f.t.mirrored ? -f.t.holePx : f.t.holePx), f.t.mirrored ? 1 : 0,
                  app.doc.board().rows, app.doc.board().cols);
-    for (const OffboardSpot& s : f.spots)
+    for (const OffboardSpot& s : f.spots) {
+        const ImVec2 body = f.at({(s.min.x + s.max.x) / 2, (s.min.y + s.max.y) / 2});
+        std::fprintf(stderr, "STRIPSMITH_E2E offboard %s %.1f %.1f\n", app.doc.board().offboard[s.index].ref.c_str(),
+                     body.x, body.y);
         for (std::size_t j = 0; j < s.lugs.size(); ++j) {
             const ImVec2 p = f.at(s.lugs[j]);
             std::fprintf(stderr, "STRIPSMITH_E2E lug %s.%s %.1f %.1f\n", app.doc.board().offboard[s.index].ref.c_str(),
                          app.doc.board().offboard[s.index].pins[j].c_str(), p.x, p.y);
         }
+    }
 }
 
 }  // namespace

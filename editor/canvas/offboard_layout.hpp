@@ -20,8 +20,16 @@ struct OffboardSpot {
     std::vector<ImVec2> lugs;   ///< one per pin, in pin order
 };
 
-/// Parts stacked in a column to the right of the board (component side), in board order.
+/// Each part where the maker put it (its `place`), else in a column to the right of the board
+/// (component side), stacked by its position in the board's list.
 std::vector<OffboardSpot> layoutOffboard(const netcheck::Board& board);
+
+/// Where the maker put a part: the top-left corner of its body in board units (hole pitches
+/// from the board's top-left corner, component side), kept in the part's extra key `place` as
+/// {"x": .., "y": ..}. None when unset or unusable (not two finite numbers within reach).
+std::optional<ImVec2> placeOf(const netcheck::OffboardPart& part);
+/// The part with its body's top-left corner at `corner` (board units, to 0.01 pitch).
+netcheck::OffboardPart placedAt(netcheck::OffboardPart part, ImVec2 corner);
 
 /// Board-unit position of a wire end: a hole centre or a lug.
 std::optional<ImVec2> endpointPosition(const netcheck::Board& board,

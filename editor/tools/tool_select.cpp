@@ -1,6 +1,8 @@
 // Select tool: click, shift-click, box select, drag to move, drag a lead end to stretch.
 #include <algorithm>
+#include <cmath>
 
+#include "editor/app/edit_actions.hpp"
 #include "editor/canvas/palette.hpp"
 #include "editor/tools/hit_test.hpp"
 #include "editor/tools/tools.hpp"
@@ -20,14 +22,18 @@ bool selectionStaysOnBoard(const EditorApp& app, int rows, int cols) {
     return true;
 }
 
+// The hole cell under a board point, on the board or beside it (off-board parts move there too).
+netcheck::Hole cellAt(ImVec2 board) {
+    return {static_cast<int>(std::floor(board.y)), static_cast<int>(std::floor(board.x))};
+}
+
 void continueMove(EditorApp& app, const CanvasInput& in) {
-    if (!in.hole) return;
-    const int rows = in.hole->row - app.tool.gestureStart.row;
-    const int cols = in.hole->col - app.tool.gestureStart.col;
+    const netcheck::Hole cell = cellAt(in.board);
+    const int rows = cell.row - app.tool.gestureStart.row;
+    const int cols = cell.col - app.tool.gestureStart.col;
     const int dr = rows - app.tool.movedRows, dc = cols - app.tool.movedCols;
     if ((dr == 0 && dc == 0) || !selectionStaysOnBoard(app, dr, dc)) return;
-    std::vector<ElementRef> refs(app.selection.begin(), app.selection.end());
-    if (app.perform(netcheck::edit::moveElements(app.doc.board(), refs, dr, dc), kMergeMove)) {
+    if (app.perform(moveCommand(app.doc.board(), app.selection, dr, dc), kMergeMove)) {
         app.tool.movedRows = rows;
         app.tool.movedCols = cols;
     }
@@ -65,11 +71,9 @@ void beginGesture(EditorApp& app, const CanvasInput& in, const CanvasFrame& f) {
             return;
         }
         if (!app.selection.count(*hit)) app.selection = {*hit};
-        if (in.hole) {
-            app.tool.gesture = ToolState::Gesture::Move;
-            app.tool.gestureStart = *in.hole;
-            app.tool.movedRows = app.tool.movedCols = 0;
-        }
+        app.tool.gesture = ToolState::Gesture::Move;
+        app.tool.gestureStart = cellAt(in.board);
+        app.tool.movedRows = app.tool.movedCols = 0;
         return;
     }
     if (!in.shift) app.selection.clear();

@@ -31,7 +31,7 @@ struct ToolState {
     // Select tool gestures.
     enum class Gesture { None, Move, Stretch, Box };
     Gesture gesture = Gesture::None;
-    netcheck::Hole gestureStart;        ///< hole under the mouse when the gesture began
+    netcheck::Hole gestureStart;        ///< hole cell under the mouse (on or off the board) at the start
     int movedRows = 0;                  ///< already applied by the move gesture
     int movedCols = 0;
     std::size_t stretchPart = 0;
