@@ -352,6 +352,18 @@ void drawBody(const CanvasFrame& f, const Part& part) {
     drawGeneric(f, part);
 }
 
+// Seen through, a body lets the strips, joints and cuts under it show: every vertex drawn since
+// `firstVertex` keeps this share of its opacity.
+constexpr float kSeeThroughBody = 0.5f;
+
+void fadeSince(ImDrawList* draw, int firstVertex, float opacity) {
+    for (int v = firstVertex; v < draw->VtxBuffer.Size; ++v) {
+        ImU32& col = draw->VtxBuffer[v].col;
+        const float alpha = static_cast<float>((col & IM_COL32_A_MASK) >> IM_COL32_A_SHIFT) * opacity;
+        col = (col & ~IM_COL32_A_MASK) | (static_cast<ImU32>(alpha) << IM_COL32_A_SHIFT);
+    }
+}
+
 void drawSolderJoints(const CanvasFrame& f, const Part& part) {
     for (const netcheck::Pin& pin : part.pins)
         f.draw->AddCircleFilled(f.hole(pin.hole), f.t.len(0.26f), palette::rgba(205, 210, 215), 12);
@@ -380,7 +392,9 @@ void drawParts(const CanvasFrame& f, const netcheck::Board& board, const Selecte
         const float pad = f.t.len(1.5f);
         if (!f.visible({box.min.x - pad, box.min.y - pad}, {box.max.x + pad, box.max.y + pad})) continue;
         if (f.showsBodies()) {
+            const int firstVertex = f.draw->VtxBuffer.Size;
             drawBody(f, part);
+            if (f.side == Side::SeeThrough) fadeSince(f.draw, firstVertex, kSeeThroughBody);
             if (detailed) drawLabel(f, part, bodyStyleOf(part));
         } else {
             drawSolderJoints(f, part);
