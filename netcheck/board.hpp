@@ -56,6 +56,9 @@ struct Link {
     Hole to;
     bool copperSide = false;
     nlohmann::json extra = nlohmann::json::object();
+    /// Sleeved (or otherwise covered) wire: it may lie across leads and other links. Last, so
+    /// that brace-initialised links written before it keep their meaning.
+    bool insulated = false;
     bool operator==(const Link&) const = default;
 };
 

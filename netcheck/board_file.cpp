@@ -208,7 +208,12 @@ private:
             r_.fail("side must be \"component\" or \"copper\", not " + inQuotes(side));
         }
         link.copperSide = side == "copper";
-        link.extra = JsonReader::extras(object, {"from", "to", "side"});
+        if (auto it = object.find("insulated"); it != object.end()) {
+            const auto step = r_.enter("insulated");
+            if (!it->is_boolean()) r_.fail("insulated must be true or false");
+            link.insulated = it->get<bool>();
+        }
+        link.extra = JsonReader::extras(object, {"from", "to", "side", "insulated"});
         board_.links.push_back(std::move(link));
     }
 
@@ -317,6 +322,7 @@ Json linkToJson(const Link& link) {
     out["from"] = holeName(link.from);
     out["to"] = holeName(link.to);
     if (link.copperSide) out["side"] = "copper";
+    if (link.insulated) out["insulated"] = true;
     appendExtras(out, link.extra);
     return out;
 }

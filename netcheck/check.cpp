@@ -34,8 +34,10 @@
 // - shared-hole (two or more leads in one hole: part pins, link ends and wire ends all count) and
 //   pin-on-cut (a lead in a hole-cut hole) are errors with or without a circuit.
 // - Warnings: value-differs, pot-reversed, dangling-lead (an island with exactly one pin and no
-//   link or wire end; with a circuit only when the circuit joins that pin to another), and trim
-//   (rows and columns at the edges holding no pin, link end or wire end).
+//   link or wire end; with a circuit only when the circuit joins that pin to another),
+//   link-over-lead and links-touch (a bare component-side link lying across a lead or another
+//   bare link: a contact the copper cannot show), and trim (rows and columns at the edges
+//   holding no pin, link end or wire end).
 // - Without a circuit the report lists the islands that hold pins, with the lead findings and
 //   warnings above.
 // Findings are ordered: part findings by ref, shorts by island, opens by net, hole findings by
@@ -49,6 +51,7 @@
 #include "check_context.hpp"
 #include "circuit_match.hpp"
 #include "lead_findings.hpp"
+#include "link_findings.hpp"
 #include "open_locator.hpp"
 #include "short_locator.hpp"
 
@@ -209,6 +212,7 @@ CheckReport Checker::check(const Board& board, const Circuit* circuit) {
     findSharedHoles(context, report.errors);
     findLeadsOnCuts(context, report.errors);
     findDanglingLeads(context, circuit ? &work.danglingIslands : nullptr, report.warnings);
+    findBareLinkContacts(context, report.warnings);
     findTrim(context, report.warnings);
     // With a circuit the findings say everything; the island list is the report of a board alone.
     if (circuit == nullptr) report.islands = pinIslands(context);

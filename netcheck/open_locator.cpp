@@ -2,7 +2,8 @@
 // mends the net without a new short is looked for (a cut made in the wrong hole). Otherwise links
 // are chosen Prim-style: start from the first piece and repeatedly join the nearest piece not yet
 // joined, through the nearest pair of free holes (copper present, nothing soldered in) of the two
-// islands, on the board with the shorts' suggested cuts applied.
+// islands whose link would not lie across a lead or a bare link (the nearest pair at all when no
+// pair is clear), on the board with the shorts' suggested cuts applied.
 #include "open_locator.hpp"
 
 #include <algorithm>
@@ -10,6 +11,8 @@
 #include <limits>
 #include <map>
 #include <optional>
+
+#include "link_findings.hpp"
 
 namespace netcheck {
 
@@ -116,9 +119,12 @@ struct Joint {
     std::size_t piece = 0;
 };
 
+// The nearest pair of free holes, preferring a pair whose link would lie clear of leads and bare
+// links (see liesClear) to any nearer one that would not.
 Joint nearestJoint(const CheckContext& context, const std::vector<Piece>& pieces,
                    const std::vector<bool>& joined) {
     Joint best;
+    Joint bestClear;
     for (std::size_t a = 0; a < pieces.size(); ++a) {
         if (!joined[a]) continue;
         for (std::size_t b = 0; b < pieces.size(); ++b) {
@@ -130,12 +136,18 @@ Joint nearestJoint(const CheckContext& context, const std::vector<Piece>& pieces
                     const long dr = hx.row - hy.row;
                     const long dc = hx.col - hy.col;
                     const long distance = dr * dr + dc * dc;
-                    if (distance < best.distance) best = Joint{distance, x, y, b};
+                    if (distance >= bestClear.distance) continue;
+                    const Joint joint{distance, x, y, b};
+                    if (liesClear(context, Link{hx, hy})) {
+                        bestClear = joint;
+                    } else if (distance < best.distance) {
+                        best = joint;
+                    }
                 }
             }
         }
     }
-    return best;
+    return bestClear.from >= 0 ? bestClear : best;
 }
 
 std::vector<Link> suggestLinks(const CheckContext& context, const std::vector<Piece>& pieces) {

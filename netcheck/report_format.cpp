@@ -89,7 +89,7 @@ std::string formatReportText(const CheckReport& report, const Board& board) {
     std::string text;
     if (!report.hasCircuit) {
         text += "no circuit to compare with; " + plural(report.islands.size(), "island") +
-                " hold pins:\n";
+                (report.islands.size() == 1 ? " holds" : " hold") + " pins:\n";
         for (const Island& island : report.islands) text += islandLine(board, island) + "\n";
     }
     for (const Finding& finding : report.errors) text += findingLine(finding) + "\n";

@@ -128,7 +128,7 @@ TEST_CASE("board file") {
           "board": {"rows": 3, "cols": 5, "finish": "tinned"},
           "parts": [{"ref": "R1", "kind": "resistor", "value": "1k", "pins": {"1": "A1", "2": "A5"},
                      "body": "flat", "rotation": 90, "pinout": "EBC"}],
-          "links": [{"from": "A1", "to": "C1", "insulated": true}],
+          "links": [{"from": "A1", "to": "C1", "sleeve": "green"}],
           "offboard": [{"ref": "S1", "kind": "switch", "pins": ["1", "2"], "panel": "top"}],
           "wires": [{"from": "S1.1", "to": "B2", "length_mm": 80}],
           "circuit": {"parts": {"R1": {"kind": "resistor", "value": "1k", "tolerance": "1%"}},
@@ -139,7 +139,7 @@ TEST_CASE("board file") {
         CHECK(board.boardExtra == nlohmann::json{{"finish", "tinned"}});
         CHECK(board.parts[0].extra ==
               nlohmann::json{{"body", "flat"}, {"rotation", 90}, {"pinout", "EBC"}});
-        CHECK(board.links[0].extra == nlohmann::json{{"insulated", true}});
+        CHECK(board.links[0].extra == nlohmann::json{{"sleeve", "green"}});
         CHECK(board.offboard[0].extra == nlohmann::json{{"panel", "top"}});
         CHECK(board.wires[0].extra == nlohmann::json{{"length_mm", 80}});
         CHECK(board.circuit->extra == nlohmann::json{{"source", "hand-drawn"}});

@@ -10,6 +10,8 @@ using netcheck::edit::ElementRef;
 
 namespace {
 
+ImVec2 lerp(ImVec2 a, ImVec2 b, float t) { return {a.x + (b.x - a.x) * t, a.y + (b.y - a.y) * t}; }
+
 bool isSelected(const Selected& selected, ElementRef::Kind kind, std::size_t index) {
     return selected.count(ElementRef{kind, index}) > 0;
 }
@@ -67,6 +69,8 @@ void drawLinks(const CanvasFrame& f, const netcheck::Board& board, const Selecte
         if (sel) f.draw->AddLine(a, b, palette::kSelection, w + 6.0f);
         f.draw->AddLine(a, b, palette::kLinkWireEdge, w + 2.0f);
         f.draw->AddLine(a, b, palette::kLinkWire, w);
+        // A sleeve over the wire, short of its ends, where the bare wire goes into the holes.
+        if (link.insulated) f.draw->AddLine(lerp(a, b, 0.12f), lerp(a, b, 0.88f), palette::kLinkSleeve, w + 3.0f);
         f.draw->AddCircleFilled(a, f.t.len(0.2f), palette::kLinkWire, 10);
         f.draw->AddCircleFilled(b, f.t.len(0.2f), palette::kLinkWire, 10);
     }

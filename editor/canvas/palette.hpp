@@ -24,6 +24,7 @@ inline constexpr ImU32 kCutHole = rgba(245, 245, 245);
 inline constexpr ImU32 kCutMark = rgba(214, 40, 40);
 inline constexpr ImU32 kLinkWire = rgba(178, 186, 194);
 inline constexpr ImU32 kLinkWireEdge = rgba(70, 76, 84);
+inline constexpr ImU32 kLinkSleeve = rgba(46, 140, 92, 235);  // green sleeving over an insulated link
 inline constexpr ImU32 kLead = rgba(160, 166, 172);
 inline constexpr ImU32 kSelection = rgba(60, 170, 255);
 inline constexpr ImU32 kHover = rgba(255, 236, 90, 110);

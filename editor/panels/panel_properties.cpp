@@ -119,6 +119,14 @@ void linkProperties(EditorApp& app, std::size_t index) {
         changed.copperSide = copper;
         app.perform(std::make_unique<netcheck::edit::ReplaceLink>(app.doc.board(), index, changed));
     }
+    bool insulated = link.insulated;
+    const bool toggled = ImGui::Checkbox("insulated (sleeved: may cross leads and links)", &insulated);
+    app.logItem("link-insulated");
+    if (toggled) {
+        netcheck::Link changed = link;
+        changed.insulated = insulated;
+        app.perform(std::make_unique<netcheck::edit::ReplaceLink>(app.doc.board(), index, changed));
+    }
 }
 
 void wireProperties(EditorApp& app, std::size_t index) {

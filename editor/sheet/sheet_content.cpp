@@ -199,7 +199,7 @@ std::vector<LinkLine> linkList(const Board& board) {
         double dr = link.to.row - link.from.row;
         double dc = link.to.col - link.from.col;
         lines.push_back({netcheck::holeName(link.from), netcheck::holeName(link.to),
-                         std::hypot(dr, dc) * board.pitchMm, link.copperSide});
+                         std::hypot(dr, dc) * board.pitchMm, link.copperSide, link.insulated});
     }
     return lines;
 }
@@ -215,11 +215,16 @@ std::vector<AssemblyStep> assemblyOrder(const Board& board) {
                              "print (hole 1 at the right) and check every cut with a magnifier.",
                          {}});
     }
-    std::size_t components = 0, bridges = 0;
-    for (const auto& link : board.links) (link.copperSide ? bridges : components) += 1;
+    std::size_t components = 0, bridges = 0, sleeved = 0;
+    for (const auto& link : board.links) {
+        (link.copperSide ? bridges : components) += 1;
+        if (link.insulated && !link.copperSide) ++sleeved;
+    }
     if (components > 0) {
+        const std::string which = sleeved == 1 ? "the one" : "the " + std::to_string(sleeved);
+        const std::string sleeves = sleeved == 0 ? "" : " Sleeve " + which + " marked sleeved in the link list.";
         steps.push_back({"Fit the " + countText(components, "wire link", "wire links") +
-                             " on the component side.",
+                             " on the component side." + sleeves,
                          {}});
     }
     static const char* kRankText[] = {"Fit the lowest parts (lying flat)",

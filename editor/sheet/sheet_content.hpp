@@ -51,6 +51,7 @@ struct LinkLine {
     std::string to;
     double lengthMm = 0;  ///< centre to centre
     bool copperSide = false;
+    bool insulated = false;  ///< sleeve it: it lies across leads or other links
 };
 std::vector<LinkLine> linkList(const netcheck::Board& board);
 

@@ -143,9 +143,9 @@ void drawLinkList(PageFlow& flow, const Board& board) {
         true};
     int number = 1;
     for (const LinkLine& link : linkList(board)) {
+        const std::string side = link.copperSide ? "copper side (bridge)" : "component side";
         table.rows.push_back({std::to_string(number++), link.from, link.to,
-                              millimetres(link.lengthMm),
-                              link.copperSide ? "copper side (bridge)" : "component side"});
+                              millimetres(link.lengthMm), link.insulated ? side + ", sleeved" : side});
     }
     drawTable(flow, table);
 }

@@ -52,7 +52,7 @@ Board generatedBoard(int rows, int cols, int parts) {
     auto freePair = [&](Hole& a, Hole& b) {
         do {
             a = hole();
-            b = Hole{(a.row + 1) % rows, a.col};
+            b = Hole{a.row + 1 < rows ? a.row + 1 : a.row - 1, a.col};  // the bottom row pairs upwards
         } while (at(a) || at(b) || rows < 2);
         at(a) = at(b) = 1;
     };

@@ -134,6 +134,9 @@ TEST_CASE("sheet content") {
         CHECK(links[0].from == "A11");
         CHECK(links[0].to == "D11");
         CHECK(links[0].lengthMm == doctest::Approx(3 * 2.54));
+        CHECK_FALSE(links[0].insulated);
+        board.links[0].insulated = true;
+        CHECK(linkList(board)[0].insulated);  // the sheet says to sleeve it
     }
 
     SUBCASE("assembly order (common practice: cuts, links, low to tall, wiring last)") {
@@ -149,6 +152,9 @@ TEST_CASE("sheet content") {
         CHECK(resistors < transistor);
         CHECK(transistor < electrolytic);
         CHECK(electrolytic < wiring);
+        CHECK(steps[links].text.find("Sleeve") == std::string::npos);
+        board.links[0].insulated = true;
+        CHECK(assemblyOrder(board)[links].text.find("Sleeve the one marked sleeved") != std::string::npos);
     }
 
     SUBCASE("board size in holes and millimetres") {
