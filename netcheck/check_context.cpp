@@ -1,6 +1,8 @@
 // Collecting the leads of a board and naming nodes for messages.
 #include "check_context.hpp"
 
+#include <algorithm>
+
 namespace netcheck {
 
 namespace {
@@ -34,8 +36,13 @@ void CheckContext::reset(const Board& board) {
 void CheckContext::collectLeads(const Board& board) {
     hasLead_.reset(board.holeCount());
     sharedHole_.reset(board.holeCount());
+    leadArea_ = Area{board.rows, -1, board.cols, -1};
     auto add = [&](Lead::Kind kind, int item, int sub, Hole hole, std::uint32_t nameKey = 0) {
         if (!board.contains(hole)) return;
+        leadArea_.top = std::min(leadArea_.top, hole.row);
+        leadArea_.bottom = std::max(leadArea_.bottom, hole.row);
+        leadArea_.left = std::min(leadArea_.left, hole.col);
+        leadArea_.right = std::max(leadArea_.right, hole.col);
         const int index = holeIndex(hole);
         leads_.push_back(Lead{item, sub, index, 0, nameKey, kind});
         if (hasLead_.test(index)) {

@@ -49,6 +49,14 @@ public:
     bool anyLeadOnCut() const { return anyOnCut_; }
     /// Pins of all on-board parts (the leads of those on the board, and any off it).
     std::size_t partPinCount() const { return partPins_; }
+    /// The rows and columns holding leads: top..bottom, left..right (top > bottom: no leads).
+    struct Area {
+        int top = 0;
+        int bottom = -1;
+        int left = 0;
+        int right = -1;
+    };
+    const Area& leadArea() const { return leadArea_; }
     /// Something is soldered in the hole.
     bool holdsLead(int hole) const { return hasLead_.test(hole); }
     /// Copper present and nothing soldered in it: a place for a new link or a hole cut.
@@ -78,6 +86,7 @@ private:
     HoleBits hasLead_;
     HoleBits sharedHole_;  // two or more leads
     std::size_t partPins_ = 0;
+    Area leadArea_;
     bool anyShared_ = false;
     bool anyOnCut_ = false;
     std::vector<int> lugBase_;

@@ -129,18 +129,9 @@ void findDanglingLeads(const CheckContext& context, const std::vector<char>* onl
 
 void findTrim(const CheckContext& context, std::vector<Finding>& warnings) {
     const Board& board = context.board();
-    if (context.leads().empty()) return;
-    // Every lead's hole (part pins, link ends, wire ends on the board), from the leads rather than
-    // the parts, whose pins lie scattered in memory.
-    int top = board.rows, bottom = -1, left = board.cols, right = -1;
-    for (const Lead& lead : context.leads()) {
-        const int row = lead.hole / board.cols;
-        const int col = lead.hole - row * board.cols;
-        top = std::min(top, row);
-        bottom = std::max(bottom, row);
-        left = std::min(left, col);
-        right = std::max(right, col);
-    }
+    // Every lead's hole: part pins, link ends, wire ends on the board.
+    const auto [top, bottom, left, right] = context.leadArea();
+    if (top > bottom) return;
     const int spare[4] = {top, board.rows - 1 - bottom, left, board.cols - 1 - right};
     const char* const what[4] = {"row", "row", "column", "column"};
     const char* const where[4] = {" at the top", " at the bottom", " at the left", " at the right"};
