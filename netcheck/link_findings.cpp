@@ -31,7 +31,9 @@ std::int64_t cross(Hole a, Hole b, Hole p) {
 // How near (in pitches) a lead must come to a wire to touch it on this board. At most half a
 // pitch: further out a lead is nearer the next hole's line, and boards finer than 1.2 mm are not
 // stripboard.
-double contactReach(const Board& board) { return std::min(kLinkContactMm / board.pitchMm, 0.5); }
+double contactReach(const Board& board) {
+    return std::min(kLinkContactMm / board.pitchMm, 0.5);
+}
 
 // Calls visit(hole) for every hole strictly between the link's ends whose centre lies within
 // `reach` (at most half a pitch) of the wire. Walks the longer axis: in each of its columns (or
@@ -48,7 +50,8 @@ void forEachHoleUnder(const Link& link, double reach, Visit visit) {
     const int minorSpan = alongCols ? dr : dc;
     if (minorSpan == 0) {  // along a strip or straight across: every hole between is under it
         for (int s = 1; s < steps; ++s) {
-            visit(alongCols ? Hole{a.row, a.col + (dc > 0 ? s : -s)} : Hole{a.row + (dr > 0 ? s : -s), a.col});
+            visit(alongCols ? Hole{a.row, a.col + (dc > 0 ? s : -s)}
+                            : Hole{a.row + (dr > 0 ? s : -s), a.col});
         }
         return;
     }
@@ -72,7 +75,9 @@ bool crossInside(const Link& first, const Link& second) {
     const std::int64_t c2 = cross(first.from, first.to, second.to);
     const std::int64_t c3 = cross(second.from, second.to, first.from);
     const std::int64_t c4 = cross(second.from, second.to, first.to);
-    auto opposite = [](std::int64_t x, std::int64_t y) { return (x > 0 && y < 0) || (x < 0 && y > 0); };
+    auto opposite = [](std::int64_t x, std::int64_t y) {
+        return (x > 0 && y < 0) || (x < 0 && y > 0);
+    };
     return opposite(c1, c2) && opposite(c3, c4);
 }
 
@@ -90,7 +95,9 @@ std::string crossingPlace(const Link& first, const Link& second) {
     return (onHole ? "at " : "near ") + holeName(nearest);
 }
 
-std::string linkName(const Link& link) { return holeName(link.from) + "-" + holeName(link.to); }
+std::string linkName(const Link& link) {
+    return holeName(link.from) + "-" + holeName(link.to);
+}
 
 // Pairs of links that may cross, each pair once, first < second. Without diagonal links every
 // crossing is on a hole both wires pass over; with them, wires are listed by the cells of the
@@ -108,7 +115,8 @@ std::vector<std::pair<int, int>> crossingCandidates(const Board& board,
         if (!anyDiagonal) {
             forEachHoleUnder(link, reach, [&](Hole h) {
                 const int index = h.row * board.cols + h.col;
-                if (std::binary_search(twice.begin(), twice.end(), index)) marks.emplace_back(index, l);
+                if (std::binary_search(twice.begin(), twice.end(), index))
+                    marks.emplace_back(index, l);
             });
             continue;
         }
@@ -176,7 +184,8 @@ std::string leadsPassedOver(const std::vector<Hole>& under, const std::vector<Ho
         const auto at = std::lower_bound(named.begin(), named.end(), under[i]) - named.begin();
         text += holeName(under[i]) + " (" + names[static_cast<std::size_t>(at)] + ")";
     }
-    if (shown < under.size()) text += " and " + std::to_string(under.size() - shown) + " more holes";
+    if (shown < under.size())
+        text += " and " + std::to_string(under.size() - shown) + " more holes";
     return text;
 }
 
@@ -194,12 +203,11 @@ Finding linkFinding(std::string type, std::string message, std::vector<Hole> hol
 bool liesClear(const CheckContext& context, const Link& link) {
     const Board& board = context.board();
     bool clear = true;
-    forEachHoleUnder(link, contactReach(board), [&](Hole h) {
-        clear = clear && !context.holdsLead(context.holeIndex(h));
-    });
+    forEachHoleUnder(link, contactReach(board),
+                     [&](Hole h) { clear = clear && !context.holdsLead(context.holeIndex(h)); });
     return clear && std::none_of(board.links.begin(), board.links.end(), [&](const Link& other) {
-        return isBare(board, other) && crossInside(link, other);
-    });
+               return isBare(board, other) && crossInside(link, other);
+           });
 }
 
 void findBareLinkContacts(const CheckContext& context, std::vector<Finding>& warnings) {
@@ -259,11 +267,11 @@ void findBareLinkContacts(const CheckContext& context, std::vector<Finding>& war
         const Link& first = board.links[static_cast<std::size_t>(i)];
         const Link& second = board.links[static_cast<std::size_t>(j)];
         if (!crossInside(first, second)) continue;
-        warnings.push_back(linkFinding(
-            "links-touch",
-            "Bare links " + linkName(first) + " and " + linkName(second) + " cross " +
-                crossingPlace(first, second) + ": the wires would touch",
-            {first.from, first.to, second.from, second.to}));
+        warnings.push_back(linkFinding("links-touch",
+                                       "Bare links " + linkName(first) + " and " +
+                                           linkName(second) + " cross " +
+                                           crossingPlace(first, second) + ": the wires would touch",
+                                       {first.from, first.to, second.from, second.to}));
         warnings.back().fix = "sleeve one of them or route it round";
     }
 }

@@ -117,14 +117,24 @@ struct Joint {
     int from = -1;  // hole index in the joined part
     int to = -1;    // hole index in the new piece
     std::size_t piece = 0;
+    long found = 0;  // order in which the pair was met, so equal distances keep the first
+
+    bool operator<(const Joint& other) const {
+        return distance != other.distance ? distance < other.distance : found < other.found;
+    }
 };
 
-// The nearest pair of free holes, preferring a pair whose link would lie clear of leads and bare
-// links (see liesClear) to any nearer one that would not.
+// Pairs of free holes tried, nearest first, for one that a link would join without lying across
+// a lead or a bare link; when none of them is clear the nearest is taken all the same. Bounded,
+// so two large pieces with every near pair blocked cost no more than a few dozen trials.
+constexpr std::size_t kClearTrials = 32;
+
+// The nearest pair of free holes joining a joined piece to one not yet joined, preferring among
+// the nearest few a pair whose link would lie clear (see liesClear).
 Joint nearestJoint(const CheckContext& context, const std::vector<Piece>& pieces,
                    const std::vector<bool>& joined) {
-    Joint best;
-    Joint bestClear;
+    std::vector<Joint> nearest;  // a max-heap of the kClearTrials nearest pairs met so far
+    long found = 0;
     for (std::size_t a = 0; a < pieces.size(); ++a) {
         if (!joined[a]) continue;
         for (std::size_t b = 0; b < pieces.size(); ++b) {
@@ -135,19 +145,24 @@ Joint nearestJoint(const CheckContext& context, const std::vector<Piece>& pieces
                     const Hole hy = context.holeAt(y);
                     const long dr = hx.row - hy.row;
                     const long dc = hx.col - hy.col;
-                    const long distance = dr * dr + dc * dc;
-                    if (distance >= bestClear.distance) continue;
-                    const Joint joint{distance, x, y, b};
-                    if (liesClear(context, Link{hx, hy})) {
-                        bestClear = joint;
-                    } else if (distance < best.distance) {
-                        best = joint;
+                    const Joint joint{dr * dr + dc * dc, x, y, b, found++};
+                    if (nearest.size() == kClearTrials && !(joint < nearest.front())) continue;
+                    nearest.push_back(joint);
+                    std::push_heap(nearest.begin(), nearest.end());
+                    if (nearest.size() > kClearTrials) {
+                        std::pop_heap(nearest.begin(), nearest.end());
+                        nearest.pop_back();
                     }
                 }
             }
         }
     }
-    return bestClear.from >= 0 ? bestClear : best;
+    std::sort_heap(nearest.begin(), nearest.end());
+    for (const Joint& joint : nearest) {
+        if (liesClear(context, Link{context.holeAt(joint.from), context.holeAt(joint.to)}))
+            return joint;
+    }
+    return nearest.empty() ? Joint{} : nearest.front();
 }
 
 std::vector<Link> suggestLinks(const CheckContext& context, const std::vector<Piece>& pieces) {
