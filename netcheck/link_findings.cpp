@@ -95,6 +95,14 @@ std::string crossingPlace(const Link& first, const Link& second) {
     return (onHole ? "at " : "near ") + holeName(nearest);
 }
 
+// A board file may hold millions of links a board long, crossing at the same holes. Past these
+// bounds the contacts are left unchecked, with a warning that says so, rather than taking minutes
+// and gigabytes: holes passed over by all the bare links together, per hole of the board (plus a
+// floor for small boards), and pairs of wires that may cross.
+constexpr long kPassesPerHole = 4;
+constexpr long kPassesFloor = 4096;
+constexpr std::size_t kMaxPairs = std::size_t{1} << 22;
+
 std::string linkName(const Link& link) {
     return holeName(link.from) + "-" + holeName(link.to);
 }
@@ -104,9 +112,11 @@ std::string linkName(const Link& link) {
 // hole grid they pass through (a one-cell margin on each side), and two crossing wires share a
 // cell.
 // `twice`: the holes (indices, sorted) that two or more of the wires pass over.
+// `complete` is cleared when the pairs passed kMaxPairs (those found so far are returned).
 std::vector<std::pair<int, int>> crossingCandidates(const Board& board,
                                                     const std::vector<int>& bare, bool anyDiagonal,
-                                                    const std::vector<int>& twice, double reach) {
+                                                    const std::vector<int>& twice, double reach,
+                                                    bool& complete) {
     std::vector<std::pair<std::int64_t, int>> marks;  // (place, link)
     const std::int64_t width = std::int64_t{board.cols} + 2;
     auto cellKey = [&](std::int64_t row, std::int64_t col) { return (row + 1) * width + col + 1; };
@@ -139,14 +149,15 @@ std::vector<std::pair<int, int>> crossingCandidates(const Board& board,
     }
     std::sort(marks.begin(), marks.end());
     std::vector<std::pair<int, int>> pairs;
-    for (std::size_t i = 0; i < marks.size();) {
+    for (std::size_t i = 0; i < marks.size() && complete;) {
         std::size_t end = i;
         while (end < marks.size() && marks[end].first == marks[i].first) ++end;
-        for (std::size_t x = i; x < end; ++x) {
+        for (std::size_t x = i; x < end && complete; ++x) {
             for (std::size_t y = x + 1; y < end; ++y) {
                 if (marks[x].second != marks[y].second)
                     pairs.emplace_back(marks[x].second, marks[y].second);
             }
+            complete = pairs.size() <= kMaxPairs;
         }
         i = end;
     }
@@ -221,6 +232,23 @@ void findBareLinkContacts(const CheckContext& context, std::vector<Finding>& war
     HoleBits passed;
     bool anyPassed = false;
     bool anyDiagonal = false;
+    long passes = 0;
+    for (const Link& link : board.links) {
+        if (isBare(board, link))
+            passes += std::max(std::abs(link.to.row - link.from.row),
+                               std::abs(link.to.col - link.from.col)) -
+                      1;
+    }
+    const long budget = kPassesPerHole * board.holeCount() + kPassesFloor;
+    if (passes > budget) {
+        warnings.push_back(linkFinding(
+            "links-unchecked",
+            "Bare links pass over " + std::to_string(passes) +
+                " holes in all, too many to check for leads under them or links crossing: check "
+                "the links by eye",
+            {}));
+        return;
+    }
     for (int l = 0; l < static_cast<int>(board.links.size()); ++l) {
         const Link& link = board.links[static_cast<std::size_t>(l)];
         if (!isBare(board, link)) continue;
@@ -263,7 +291,9 @@ void findBareLinkContacts(const CheckContext& context, std::vector<Finding>& war
     for (std::size_t l = 0; l < board.links.size(); ++l) {
         if (isBare(board, board.links[l])) bare.push_back(static_cast<int>(l));
     }
-    for (const auto& [i, j] : crossingCandidates(board, bare, anyDiagonal, twice, reach)) {
+    bool complete = true;
+    for (const auto& [i, j] :
+         crossingCandidates(board, bare, anyDiagonal, twice, reach, complete)) {
         const Link& first = board.links[static_cast<std::size_t>(i)];
         const Link& second = board.links[static_cast<std::size_t>(j)];
         if (!crossInside(first, second)) continue;
@@ -273,6 +303,12 @@ void findBareLinkContacts(const CheckContext& context, std::vector<Finding>& war
                                            crossingPlace(first, second) + ": the wires would touch",
                                        {first.from, first.to, second.from, second.to}));
         warnings.back().fix = "sleeve one of them or route it round";
+    }
+    if (!complete) {
+        warnings.push_back(linkFinding("links-unchecked",
+                                       "Too many bare links cross the same places to check every "
+                                       "pair: check by eye where links cross",
+                                       {}));
     }
 }
 

@@ -123,6 +123,21 @@ TEST_CASE("bare links") {
         CHECK(report.errors[0].suggestedLinks[0].to == h("C3"));
     }
 
+    SUBCASE("past a bound on the holes passed over, one warning says the links went unchecked") {
+        // 300 bare links the height of a 30 x 30 board pass over 300 x 28 = 8,400 holes: more
+        // than the 4 per hole plus 4,096 (7,696) that a check spends on link contacts.
+        Board board = emptyBoard(30, 30);
+        for (int i = 0; i < 300; ++i) board.links.push_back(Link{{0, i % 30}, {29, i % 30}});
+        addPin(board, "TP1", h("P1"));  // under the links of column 1
+        CHECK(linkWarnings(board).empty());
+        const auto warnings = check(board).warnings;
+        const auto unchecked = std::count_if(warnings.begin(), warnings.end(),
+                                             [](const Finding& f) { return f.type == "links-unchecked"; });
+        CHECK(unchecked == 1);
+        board.links.resize(250);  // 7,000 holes: within the bound, so TP1 is found under them
+        CHECK_FALSE(linkWarnings(board).empty());
+    }
+
     SUBCASE("random boards agree with Boost.Geometry") {
         std::mt19937 rng(20261202);  // fixed seed: the same 2000 boards every run
         int overLeads = 0;
