@@ -6,7 +6,26 @@
 
 namespace stripsmith {
 
+namespace {
+
+// A bare link lying across leads, or the first of two crossing: the fix is a sleeve on it.
+std::unique_ptr<netcheck::edit::Command> sleeveCommand(const netcheck::Board& board, const netcheck::Finding& finding) {
+    if (finding.holes.size() < 2) return nullptr;
+    for (std::size_t i = 0; i < board.links.size(); ++i) {
+        const netcheck::Link& link = board.links[i];
+        if (link.from != finding.holes[0] || link.to != finding.holes[1] || link.insulated || link.copperSide) continue;
+        netcheck::Link sleeved = link;
+        sleeved.insulated = true;
+        const std::string name = netcheck::holeName(link.from) + "-" + netcheck::holeName(link.to);
+        return std::make_unique<netcheck::edit::ReplaceLink>(board, i, sleeved, "Sleeve link " + name);
+    }
+    return nullptr;
+}
+
+}  // namespace
+
 std::unique_ptr<netcheck::edit::Command> fixCommand(const netcheck::Board& board, const netcheck::Finding& finding) {
+    if (finding.type == "link-over-lead" || finding.type == "links-touch") return sleeveCommand(board, finding);
     if (finding.suggestedCut) {
         const netcheck::Cut& cut = *finding.suggestedCut;
         if (std::find(board.cuts.begin(), board.cuts.end(), cut) != board.cuts.end()) return nullptr;

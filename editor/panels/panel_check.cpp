@@ -33,9 +33,10 @@ bool findingRow(EditorApp& app, const netcheck::Finding& finding, int index) {
     ImGui::TextUnformatted(finding.message.c_str());
     if (!finding.fix.empty()) ImGui::TextDisabled("%s", finding.fix.c_str());
     ImGui::PopTextWrapPos();
-    if (fixCommand(app.doc.board(), finding)) {
-        const std::string label = finding.suggestedCut ? "Apply cut " + netcheck::cutName(*finding.suggestedCut)
-                                                       : std::string(finding.suggestedLinks.size() > 1 ? "Add the links" : "Add the link");
+    if (const auto fix = fixCommand(app.doc.board(), finding)) {
+        const std::string label = finding.suggestedCut          ? "Apply cut " + netcheck::cutName(*finding.suggestedCut)
+                                  : finding.suggestedLinks.empty() ? fix->label()
+                                                                   : std::string(finding.suggestedLinks.size() > 1 ? "Add the links" : "Add the link");
         fixPressed = ImGui::Button(label.c_str());
         app.logItem("apply-fix-" + std::to_string(index));
     }

@@ -29,4 +29,20 @@ links = json.load(open(sys.argv[1]))["links"]
 sys.exit(0 if links == [{"from": "A3", "to": "E3", "insulated": True}] else 1)
 PY
 check "netcheck no longer warns" bash -c "! '$STRIPSMITH_BIN/netcheck' '$board' | grep -q link-over-lead"
+
+# The other way: undo brings the warning back, and its button in the Check panel sleeves the link.
+shortcut ctrl+z "Undid: Edit link A3"
+shortcut ctrl+s Saved
+check "after undo the saved link is bare again" python3 - "$board" <<'PY'
+import json, sys
+sys.exit(0 if "insulated" not in json.load(open(sys.argv[1]))["links"][0] else 1)
+PY
+click_at $(item_xy apply-fix-0)
+check "the Check panel's button sleeves the link" eventually grep -q "STRIPSMITH_E2E status Sleeve link A3-E3" "$LOG"
+shortcut ctrl+s Saved
+screenshot sleeve-2-fixed-from-panel
+check "saved again with the link insulated" python3 - "$board" <<'PY'
+import json, sys
+sys.exit(0 if json.load(open(sys.argv[1]))["links"][0].get("insulated") is True else 1)
+PY
 finish

@@ -164,6 +164,25 @@ TEST_CASE("finding fixes") {
         command->apply(after);
         CHECK(after.links.size() == 2);
     }
+    SUBCASE("a bare link across a lead gets a sleeve") {
+        board.links.push_back({{0, 2}, {4, 2}, false, nlohmann::json::object()});
+        netcheck::Finding overLead;
+        overLead.type = "link-over-lead";
+        overLead.holes = {{0, 2}, {4, 2}, {2, 2}};
+        auto command = fixCommand(board, overLead);
+        REQUIRE(command);
+        CHECK(command->label() == "Sleeve link A3-E3");
+        netcheck::Board after = board;
+        command->apply(after);
+        CHECK(after.links[0].insulated);
+        command->revert(after);
+        CHECK(after == board);
+        netcheck::Finding noHoles;
+        noHoles.type = "links-touch";
+        CHECK_FALSE(fixCommand(board, noHoles));
+        board.links[0].insulated = true;  // sleeved already: nothing left to apply
+        CHECK_FALSE(fixCommand(board, overLead));
+    }
 }
 
 TEST_CASE("capture circuit") {
