@@ -52,11 +52,22 @@ void drawCutHints(cairo_t* cr, const ViewContext& context) {
     cairo_stroke(cr);
 }
 
+constexpr Rgb kSleeve{0.62, 0.85, 0.68};  // prints as a pale band in grey too
+
 void drawLinks(cairo_t* cr, const ViewContext& context) {
     cairo_set_line_cap(cr, CAIRO_LINE_CAP_ROUND);
     for (const auto& link : context.board.links) {
         if (link.copperSide) continue;
         Point a = context.at(link.from), b = context.at(link.to);
+        if (link.insulated) {  // a wide pale band short of the ends: slide a sleeve on this one
+            auto along = [&](double t) { return Point{a.x + (b.x - a.x) * t, a.y + (b.y - a.y) * t}; };
+            const Point from = along(0.15), to = along(0.85);
+            cairo_move_to(cr, from.x, from.y);
+            cairo_line_to(cr, to.x, to.y);
+            cairo_set_source_rgb(cr, kSleeve.r, kSleeve.g, kSleeve.b);
+            cairo_set_line_width(cr, 1.3);
+            cairo_stroke(cr);
+        }
         cairo_move_to(cr, a.x, a.y);
         cairo_line_to(cr, b.x, b.y);
         cairo_set_source_rgb(cr, 0.25, 0.45, 0.25);

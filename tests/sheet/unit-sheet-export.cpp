@@ -65,6 +65,19 @@ TEST_CASE("sheet export") {
         CHECK(rootAttribute(svg, "viewBox") == "0 0 210 " + height.substr(0, height.size() - 2));
     }
 
+    SUBCASE("a sleeved link is drawn with its sleeve") {
+        REQUIRE_FALSE(board.links.empty());
+        fs::path bare = scratch("bare-link.svg");
+        fs::path sleeved = scratch("sleeved-link.svg");
+        REQUIRE_FALSE(sheet::exportSheet(board, {}, bare.string()).has_value());
+        board.links[0].insulated = true;
+        REQUIRE_FALSE(sheet::exportSheet(board, {}, sleeved.string()).has_value());
+        // The sleeve's pale green, as cairo writes a stroke colour (0.62, 0.85, 0.68).
+        const std::regex sleeve(R"(stroke:rgb\(62%,85%,68%\))");
+        CHECK_FALSE(std::regex_search(test_support::readTextFile(bare.string()), sleeve));
+        CHECK(std::regex_search(test_support::readTextFile(sleeved.string()), sleeve));
+    }
+
     SUBCASE("letter paper") {
         fs::path out = scratch("booster-letter.svg");
         sheet::SheetOptions options;
