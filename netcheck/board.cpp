@@ -8,6 +8,10 @@ std::string cutName(const Cut& cut) {
     return holeName(cut.hole) + "|" + holeName(Hole{cut.hole.row, cut.hole.col + 1});
 }
 
+std::string linkName(const Link& link) {
+    return holeName(link.from) + "-" + holeName(link.to);
+}
+
 const Pin* Part::findPin(std::string_view name) const {
     for (const Pin& pin : pins) {
         if (pin.name == name) return &pin;

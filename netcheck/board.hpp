@@ -62,6 +62,9 @@ struct Link {
     bool operator==(const Link&) const = default;
 };
 
+/// "A1-C1": the link's two holes, as reports name it.
+std::string linkName(const Link& link);
+
 /// A part off the board (pot, jack, switch, DC jack, battery snap, panel LED), joined only by
 /// wires.
 struct OffboardPart {

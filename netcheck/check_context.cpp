@@ -132,7 +132,7 @@ std::string CheckContext::leadName(const Lead& lead) const {
         }
         case Lead::Kind::LinkEnd: {
             const Link& link = board_->links[item];
-            return "link " + holeName(link.from) + "-" + holeName(link.to);
+            return "link " + linkName(link);
         }
         case Lead::Kind::WireEnd: {
             const Wire& wire = board_->wires[item];

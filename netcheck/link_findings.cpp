@@ -103,16 +103,11 @@ constexpr long kPassesPerHole = 4;
 constexpr long kPassesFloor = 4096;
 constexpr std::size_t kMaxPairs = std::size_t{1} << 22;
 
-std::string linkName(const Link& link) {
-    return holeName(link.from) + "-" + holeName(link.to);
-}
-
 // Pairs of links that may cross, each pair once, first < second. Without diagonal links every
 // crossing is on a hole both wires pass over; with them, wires are listed by the cells of the
 // hole grid they pass through (a one-cell margin on each side), and two crossing wires share a
-// cell.
-// `twice`: the holes (indices, sorted) that two or more of the wires pass over.
-// `complete` is cleared when the pairs passed kMaxPairs (those found so far are returned).
+// cell. `twice`: the holes (indices, sorted) that two or more of the wires pass over. `complete`
+// is cleared when the pairs pass kMaxPairs (those found so far are returned).
 std::vector<std::pair<int, int>> crossingCandidates(const Board& board,
                                                     const std::vector<int>& bare, bool anyDiagonal,
                                                     const std::vector<int>& twice, double reach,
@@ -209,50 +204,19 @@ Finding linkFinding(std::string type, std::string message, std::vector<Hole> hol
     return finding;
 }
 
-}  // namespace
-
-bool liesClear(const CheckContext& context, const Link& link) {
+// link-over-lead warnings, in link order. One walk along each wire finds the leads under it and
+// the holes two wires pass over (returned sorted, for findCrossings). Most links join
+// neighbouring holes and pass over nothing.
+std::vector<int> findLinksOverLeads(const CheckContext& context, const std::vector<int>& bare,
+                                    double reach, std::vector<Finding>& warnings) {
     const Board& board = context.board();
-    bool clear = true;
-    forEachHoleUnder(link, contactReach(board),
-                     [&](Hole h) { clear = clear && !context.holdsLead(context.holeIndex(h)); });
-    return clear && std::none_of(board.links.begin(), board.links.end(), [&](const Link& other) {
-               return isBare(board, other) && crossInside(link, other);
-           });
-}
-
-void findBareLinkContacts(const CheckContext& context, std::vector<Finding>& warnings) {
-    const Board& board = context.board();
-    const double reach = contactReach(board);
-    // One walk along each wire finds the leads under it and the holes two wires pass over. Most
-    // links join neighbouring holes and pass over nothing.
     std::vector<std::pair<int, std::vector<Hole>>> crossed;  // (link, holes with leads under it)
     std::vector<Hole> named;
     std::vector<int> twice;
     HoleBits passed;
     bool anyPassed = false;
-    bool anyDiagonal = false;
-    long passes = 0;
-    for (const Link& link : board.links) {
-        if (isBare(board, link))
-            passes += std::max(std::abs(link.to.row - link.from.row),
-                               std::abs(link.to.col - link.from.col)) -
-                      1;
-    }
-    const long budget = kPassesPerHole * board.holeCount() + kPassesFloor;
-    if (passes > budget) {
-        warnings.push_back(linkFinding(
-            "links-unchecked",
-            "Bare links pass over " + std::to_string(passes) +
-                " holes in all, too many to check for leads under them or links crossing: check "
-                "the links by eye",
-            {}));
-        return;
-    }
-    for (int l = 0; l < static_cast<int>(board.links.size()); ++l) {
+    for (int l : bare) {
         const Link& link = board.links[static_cast<std::size_t>(l)];
-        if (!isBare(board, link)) continue;
-        anyDiagonal = anyDiagonal || isDiagonal(link);
         if (std::abs(link.to.row - link.from.row) < 2 && std::abs(link.to.col - link.from.col) < 2)
             continue;
         if (!anyPassed) passed.reset(board.holeCount());
@@ -283,14 +247,14 @@ void findBareLinkContacts(const CheckContext& context, std::vector<Finding>& war
         warnings.push_back(linkFinding("link-over-lead", std::move(message), std::move(holes)));
         warnings.back().fix = "sleeve the link or route it round";
     }
-    // Axis-parallel wires can only cross on a hole both pass over.
-    if (!anyDiagonal && twice.empty()) return;
     std::sort(twice.begin(), twice.end());
     twice.erase(std::unique(twice.begin(), twice.end()), twice.end());
-    std::vector<int> bare;
-    for (std::size_t l = 0; l < board.links.size(); ++l) {
-        if (isBare(board, board.links[l])) bare.push_back(static_cast<int>(l));
-    }
+    return twice;
+}
+
+// links-touch warnings, in link order (and links-unchecked past kMaxPairs).
+void findCrossings(const Board& board, const std::vector<int>& bare, bool anyDiagonal,
+                   const std::vector<int>& twice, double reach, std::vector<Finding>& warnings) {
     bool complete = true;
     for (const auto& [i, j] :
          crossingCandidates(board, bare, anyDiagonal, twice, reach, complete)) {
@@ -310,6 +274,49 @@ void findBareLinkContacts(const CheckContext& context, std::vector<Finding>& war
                                        "pair: check by eye where links cross",
                                        {}));
     }
+}
+
+}  // namespace
+
+bool liesClear(const CheckContext& context, const Link& link) {
+    const Board& board = context.board();
+    bool clear = true;
+    forEachHoleUnder(link, contactReach(board),
+                     [&](Hole h) { clear = clear && !context.holdsLead(context.holeIndex(h)); });
+    return clear && std::none_of(board.links.begin(), board.links.end(), [&](const Link& other) {
+               return isBare(board, other) && crossInside(link, other);
+           });
+}
+
+void findBareLinkContacts(const CheckContext& context, std::vector<Finding>& warnings) {
+    const Board& board = context.board();
+    const double reach = contactReach(board);
+    std::vector<int> bare;
+    bare.reserve(board.links.size());
+    long passes = 0;  // holes passed over, by all the bare links together
+    bool anyDiagonal = false;
+    for (std::size_t l = 0; l < board.links.size(); ++l) {
+        const Link& link = board.links[l];
+        if (!isBare(board, link)) continue;
+        bare.push_back(static_cast<int>(l));
+        passes +=
+            std::max(std::abs(link.to.row - link.from.row), std::abs(link.to.col - link.from.col)) -
+            1;
+        anyDiagonal = anyDiagonal || isDiagonal(link);
+    }
+    if (passes > kPassesPerHole * board.holeCount() + kPassesFloor) {
+        warnings.push_back(linkFinding(
+            "links-unchecked",
+            "Bare links pass over " + std::to_string(passes) +
+                " holes in all, too many to check for leads under them or links crossing: check "
+                "the links by eye",
+            {}));
+        return;
+    }
+    const std::vector<int> twice = findLinksOverLeads(context, bare, reach, warnings);
+    // Axis-parallel wires can only cross on a hole both pass over.
+    if (anyDiagonal || !twice.empty())
+        findCrossings(board, bare, anyDiagonal, twice, reach, warnings);
 }
 
 }  // namespace netcheck

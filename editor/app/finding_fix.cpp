@@ -16,8 +16,7 @@ std::unique_ptr<netcheck::edit::Command> sleeveCommand(const netcheck::Board& bo
         if (link.from != finding.holes[0] || link.to != finding.holes[1] || link.insulated || link.copperSide) continue;
         netcheck::Link sleeved = link;
         sleeved.insulated = true;
-        const std::string name = netcheck::holeName(link.from) + "-" + netcheck::holeName(link.to);
-        return std::make_unique<netcheck::edit::ReplaceLink>(board, i, sleeved, "Sleeve link " + name);
+        return std::make_unique<netcheck::edit::ReplaceLink>(board, i, sleeved, "Sleeve link " + netcheck::linkName(link));
     }
     return nullptr;
 }
