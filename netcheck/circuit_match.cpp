@@ -64,16 +64,22 @@ public:
     /// Call once the circuit's declared parts are mentioned, before any ref only named in nets.
     void endOfDeclaredParts() { declared_ = memory_.order.size(); }
 
-    /// Index of the use of a ref the circuit names (`key` is RefTable::keyOf(ref)).
-    int mention(const std::string& ref, const RefTable::Key& key) {
+    /// Index of the use of a ref the circuit names (`key` is RefTable::keyOf(ref)); a ref the
+    /// board lacks gets a use here. Reads the table, not the use, so a batch can ask for its uses
+    /// before it reads any.
+    int find(const std::string& ref, const RefTable::Key& key) {
         const int u = memory_.refs.insert(ref, key, static_cast<int>(memory_.uses.size()));
         if (u == static_cast<int>(memory_.uses.size())) memory_.uses.emplace_back().refName = &ref;
+        return u;
+    }
+
+    /// Notes that the circuit names use `u` (kept in the order of first mention).
+    void mention(int u) {
         PartUse& use = at(u);
         if (!use.mentioned) {
             use.mentioned = true;
             memory_.order.push_back(u);
         }
-        return u;
     }
 
     PartUse& at(int u) { return memory_.uses[static_cast<std::size_t>(u)]; }
@@ -341,10 +347,13 @@ public:
     void flush() {
         for (std::size_t i = 0; i < size_; ++i) {
             Pending& p = pending_[i];
-            p.use = uses_.mention(*p.ref, p.key);
+            p.use = uses_.find(*p.ref, p.key);
             __builtin_prefetch(&uses_.at(p.use));
         }
-        for (std::size_t i = 0; i < size_; ++i) __builtin_prefetch(uses_.at(pending_[i].use).pool);
+        for (std::size_t i = 0; i < size_; ++i) {
+            uses_.mention(pending_[i].use);
+            __builtin_prefetch(uses_.at(pending_[i].use).pool);
+        }
         for (std::size_t i = 0; i < size_; ++i)
             finish_(uses_.at(pending_[i].use), pending_[i].item);
         size_ = 0;
@@ -386,10 +395,11 @@ void assignNets(const Circuit& circuit, Uses& uses, std::vector<std::string_view
     struct PinOfNet {
         const std::string* pin;
         int net;
+        std::uint32_t key;  // PinKey of the name, read with the net rather than with the part
     };
     auto assign = [&uses](PartUse& use, const PinOfNet& at) {
         if (!use.found()) return;
-        const int k = use.findPin(*at.pin);
+        const int k = use.findPin(at.key, *at.pin);
         if (k < 0) {
             uses.noteUnknownPin(use, *at.pin);
         } else if (use.net()[static_cast<std::size_t>(k)] < 0) {
@@ -404,7 +414,8 @@ void assignNets(const Circuit& circuit, Uses& uses, std::vector<std::string_view
         if (ahead != circuit.nets.end()) prefetchLines((ahead++)->second.data(), 2);
         const int net = static_cast<int>(names.size());
         names.push_back(name);
-        for (const PinRef& pin : pins) batch.add(pin.ref, PinOfNet{&pin.pin, net});
+        for (const PinRef& pin : pins)
+            batch.add(pin.ref, PinOfNet{&pin.pin, net, PinKey::of(pin.pin)});
     }
     batch.flush();
 }
@@ -431,7 +442,7 @@ void placeNets(std::span<const PartUse> uses, const std::vector<std::string_view
             const int net = use.net()[at];
             if (net < 0) continue;
             match.netPins[next[static_cast<std::size_t>(net)]++] = NetPin{
-                use.ref(), &use.pinName(use.nameOf()[at]), use.nodes()[at], use.islands()[at]};
+                use.refName, &use.pinName(use.nameOf()[at]), use.nodes()[at], use.islands()[at]};
         }
     }
     std::copy_backward(start.begin(), start.end() - 1, start.end());

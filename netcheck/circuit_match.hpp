@@ -21,16 +21,16 @@ namespace netcheck {
 /// A pin of an intended net as placed on the board: the circuit's name for it, its node and its
 /// island. The names point into the circuit and the board, which outlive the check.
 struct NetPin {
-    std::string_view ref;
+    const std::string* ref = nullptr;  // pointers, so making one reads neither name
     const std::string* pin = nullptr;
     int node = 0;
     int island = 0;
 
-    PinRef pinRef() const { return PinRef{std::string(ref), *pin}; }
-    std::string name() const { return std::string(ref) + "." + *pin; }
+    PinRef pinRef() const { return PinRef{*ref, *pin}; }
+    std::string name() const { return *ref + "." + *pin; }
     /// The order of PinRef: by ref, then by pin name.
     bool operator<(const NetPin& other) const {
-        return ref != other.ref ? ref < other.ref : *pin < *other.pin;
+        return *ref != *other.ref ? *ref < *other.ref : *pin < *other.pin;
     }
 };
 

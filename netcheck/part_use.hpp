@@ -81,8 +81,12 @@ struct PartUse {
         return offboard ? board.lugs[at] : board.pins[at].name;
     }
     /// Board pin index of a pin name; -1 when the part has no such pin.
-    int findPin(std::string_view name) const {
-        const auto key = static_cast<int>(PinKey::of(name));
+    int findPin(std::string_view name) const { return findPin(PinKey::of(name), name); }
+    /// The same with the name's PinKey known: a std::string `name` is then read only when it is
+    /// too long to pack (on a large board the circuit's pin names lie far apart in memory).
+    template <typename Name>
+    int findPin(std::uint32_t nameKey, const Name& name) const {
+        const auto key = static_cast<int>(nameKey);
         for (int k = 0; k < pinCount(); ++k) {
             if (pinKeys()[static_cast<std::size_t>(k)] != key) continue;
             if (key != static_cast<int>(PinKey::kLong) || pinName(k) == name) return k;
