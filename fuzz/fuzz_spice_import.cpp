@@ -5,7 +5,7 @@
 #include <string_view>
 
 #include "fuzz_check.hpp"
-#include "netcheck/board_file.hpp"
+#include "netcheck/file/board_file.hpp"
 #include "netcheck/spice/spice_import.hpp"
 
 extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size) {

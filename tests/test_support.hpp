@@ -13,8 +13,8 @@
 #include <string>
 #include <vector>
 
-#include "netcheck/board.hpp"
-#include "netcheck/part_kinds.hpp"
+#include "netcheck/model/board.hpp"
+#include "netcheck/model/part_kinds.hpp"
 
 namespace test_support {
 

@@ -6,7 +6,7 @@
 #include <random>
 #include <sstream>
 
-#include "netcheck/board_file.hpp"
+#include "netcheck/file/board_file.hpp"
 #include "test_support.hpp"
 
 using namespace netcheck;

@@ -3,7 +3,7 @@
 
 #include <random>
 
-#include "netcheck/board_file.hpp"
+#include "netcheck/file/board_file.hpp"
 #include "test_support.hpp"
 
 using namespace netcheck;

@@ -5,8 +5,8 @@
 #include <algorithm>
 #include <random>
 
-#include "netcheck/check.hpp"
-#include "netcheck/report_format.hpp"
+#include "netcheck/check/check.hpp"
+#include "netcheck/check/report_format.hpp"
 #include "test_support.hpp"
 
 using namespace netcheck;

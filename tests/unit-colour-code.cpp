@@ -1,7 +1,7 @@
 // Resistor colour bands against the worked examples of the IEC 60062 colour code.
 #include <doctest/doctest.h>
 
-#include "netcheck/colour_code.hpp"
+#include "netcheck/model/colour_code.hpp"
 
 using namespace netcheck;
 using enum BandColour;

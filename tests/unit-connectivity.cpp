@@ -10,7 +10,7 @@
 #include <random>
 #include <set>
 
-#include "netcheck/connectivity.hpp"
+#include "netcheck/check/connectivity.hpp"
 #include "test_support.hpp"
 
 using namespace netcheck;

@@ -15,7 +15,7 @@
 
 #include <doctest/doctest.h>
 
-#include "netcheck/file_io.hpp"
+#include "netcheck/file/file_io.hpp"
 
 using namespace netcheck;
 namespace fs = std::filesystem;

@@ -5,9 +5,9 @@
 
 #include <doctest/doctest.h>
 
-#include "netcheck/board_file.hpp"
+#include "netcheck/file/board_file.hpp"
 #include "netcheck/spice/spice_import.hpp"
-#include "netcheck/value.hpp"
+#include "netcheck/model/value.hpp"
 #include "test_support.hpp"
 
 using namespace netcheck;

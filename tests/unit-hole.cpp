@@ -1,7 +1,7 @@
 // Hole names: row letters in spreadsheet style (A..Z, AA..AZ, BA..), hole numbers from 1.
 #include <doctest/doctest.h>
 
-#include "netcheck/hole.hpp"
+#include "netcheck/model/hole.hpp"
 
 using namespace netcheck;
 

@@ -8,8 +8,8 @@
 
 #include <doctest/doctest.h>
 
-#include "netcheck/board_file.hpp"
-#include "netcheck/file_io.hpp"
+#include "netcheck/file/board_file.hpp"
+#include "netcheck/file/file_io.hpp"
 
 using namespace netcheck;
 

@@ -11,8 +11,8 @@
 #include <algorithm>
 #include <random>
 
-#include "netcheck/check.hpp"
-#include "netcheck/link_findings.hpp"
+#include "netcheck/check/check.hpp"
+#include "netcheck/check/detail/link_findings.hpp"
 
 using namespace netcheck;
 

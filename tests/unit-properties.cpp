@@ -9,7 +9,7 @@
 
 #include <doctest/doctest.h>
 
-#include "netcheck/board_file.hpp"
+#include "netcheck/file/board_file.hpp"
 #include "netcheck/edit/edit.hpp"
 #include "test_support.hpp"
 

@@ -4,8 +4,8 @@
 
 #include <algorithm>
 
-#include "netcheck/board_file.hpp"
-#include "netcheck/check.hpp"
+#include "netcheck/file/board_file.hpp"
+#include "netcheck/check/check.hpp"
 #include "test_support.hpp"
 
 using namespace netcheck;

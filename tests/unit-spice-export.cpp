@@ -8,8 +8,8 @@
 #include <string>
 #include <vector>
 
-#include "netcheck/board_file.hpp"
-#include "netcheck/part_kinds.hpp"
+#include "netcheck/file/board_file.hpp"
+#include "netcheck/model/part_kinds.hpp"
 #include "netcheck/spice/spice_export.hpp"
 #include "netcheck/spice/spice_import.hpp"
 #include "test_support.hpp"

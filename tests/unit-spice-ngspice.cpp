@@ -15,11 +15,11 @@
 
 #include <unistd.h>
 
-#include "netcheck/board_file.hpp"
+#include "netcheck/file/board_file.hpp"
 #include "netcheck/spice/spice_export.hpp"
 #include "netcheck/spice/spice_import.hpp"
 #include "netcheck/spice/spice_number.hpp"
-#include "netcheck/value.hpp"
+#include "netcheck/model/value.hpp"
 #include "test_support.hpp"
 
 namespace fs = std::filesystem;

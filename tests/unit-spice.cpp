@@ -11,7 +11,7 @@
 
 #include "netcheck/spice/spice_import.hpp"
 #include "netcheck/spice/spice_number.hpp"
-#include "netcheck/value.hpp"
+#include "netcheck/model/value.hpp"
 #include "test_support.hpp"
 
 using netcheck::Circuit;

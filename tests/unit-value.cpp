@@ -4,7 +4,7 @@
 #include <algorithm>
 #include <cmath>
 
-#include "netcheck/value.hpp"
+#include "netcheck/model/value.hpp"
 
 using namespace netcheck;
 

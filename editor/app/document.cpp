@@ -1,6 +1,6 @@
 #include "editor/app/document.hpp"
 
-#include "netcheck/check.hpp"
+#include "netcheck/check/check.hpp"
 
 namespace stripsmith {
 

@@ -6,10 +6,10 @@
 #include <string>
 #include <vector>
 
-#include "netcheck/board.hpp"
-#include "netcheck/check.hpp"
-#include "netcheck/check_report.hpp"
-#include "netcheck/connectivity.hpp"
+#include "netcheck/model/board.hpp"
+#include "netcheck/check/check.hpp"
+#include "netcheck/check/check_report.hpp"
+#include "netcheck/check/connectivity.hpp"
 #include "netcheck/edit/history.hpp"
 
 namespace stripsmith {

@@ -6,7 +6,7 @@
 
 #include <imgui.h>
 
-#include "netcheck/check_report.hpp"
+#include "netcheck/check/check_report.hpp"
 #include "netcheck/edit/command.hpp"
 
 namespace stripsmith {

@@ -8,7 +8,7 @@
 
 #include "editor/canvas/board_transform.hpp"
 #include "editor/canvas/offboard_layout.hpp"
-#include "netcheck/board.hpp"
+#include "netcheck/model/board.hpp"
 
 namespace stripsmith {
 

@@ -8,8 +8,8 @@
 #include "editor/canvas/layers.hpp"
 #include "editor/canvas/palette.hpp"
 #include "editor/canvas/part_style.hpp"
-#include "netcheck/colour_code.hpp"
-#include "netcheck/value.hpp"
+#include "netcheck/model/colour_code.hpp"
+#include "netcheck/model/value.hpp"
 
 namespace stripsmith {
 

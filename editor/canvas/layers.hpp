@@ -7,8 +7,8 @@
 #include <vector>
 
 #include "editor/canvas/canvas_frame.hpp"
-#include "netcheck/check_report.hpp"
-#include "netcheck/connectivity.hpp"
+#include "netcheck/check/check_report.hpp"
+#include "netcheck/check/connectivity.hpp"
 #include "netcheck/edit/selection_commands.hpp"
 
 namespace stripsmith {

@@ -8,7 +8,7 @@
 #include <imgui.h>
 
 #include "editor/canvas/board_transform.hpp"
-#include "netcheck/board.hpp"
+#include "netcheck/model/board.hpp"
 
 namespace stripsmith {
 

@@ -3,7 +3,7 @@
 
 #include <string>
 
-#include "netcheck/board.hpp"
+#include "netcheck/model/board.hpp"
 
 namespace stripsmith {
 

@@ -9,8 +9,8 @@
 #include <nlohmann/json.hpp>
 
 #include "editor/sheet/sheet.hpp"
-#include "netcheck/board_file.hpp"
-#include "netcheck/file_io.hpp"
+#include "netcheck/file/board_file.hpp"
+#include "netcheck/file/file_io.hpp"
 
 namespace stripsmith {
 

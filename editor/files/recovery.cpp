@@ -8,7 +8,7 @@
 
 #include <nlohmann/json.hpp>
 
-#include "netcheck/file_io.hpp"
+#include "netcheck/file/file_io.hpp"
 
 namespace stripsmith {
 

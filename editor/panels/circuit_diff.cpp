@@ -4,8 +4,8 @@
 #include <map>
 #include <set>
 
-#include "netcheck/connectivity.hpp"
-#include "netcheck/value.hpp"
+#include "netcheck/check/connectivity.hpp"
+#include "netcheck/model/value.hpp"
 
 namespace stripsmith {
 namespace {

@@ -5,7 +5,7 @@
 #include <string>
 #include <vector>
 
-#include "netcheck/board.hpp"
+#include "netcheck/model/board.hpp"
 
 namespace stripsmith {
 

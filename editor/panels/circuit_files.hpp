@@ -5,7 +5,7 @@
 #include <string>
 #include <string_view>
 
-#include "netcheck/board_file.hpp"
+#include "netcheck/file/board_file.hpp"
 #include "netcheck/spice/spice_import.hpp"
 
 namespace stripsmith {

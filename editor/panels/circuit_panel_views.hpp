@@ -5,12 +5,12 @@
 #include <string>
 
 #include "editor/app/editor_app.hpp"
-#include "editor/panels/circuit_edits.hpp"
+#include "netcheck/edit/circuit_edits.hpp"
 
 namespace stripsmith {
 
 /// Performs an edit as one SetCircuit command labelled `label`, or shows why it was refused.
-void applyCircuitEdit(EditorApp& app, const CircuitEdit& edit, const std::string& label);
+void applyCircuitEdit(EditorApp& app, const netcheck::CircuitEdit& edit, const std::string& label);
 
 /// Parts with kind, value and pins; add, edit, remove; a net name for every pin.
 void drawCircuitParts(EditorApp& app, const netcheck::Circuit& circuit);

@@ -6,12 +6,12 @@
 
 #include <cstdio>
 
-#include "editor/panels/circuit_capture.hpp"
+#include "netcheck/check/circuit_capture.hpp"
 #include "editor/panels/circuit_files.hpp"
 #include "editor/panels/circuit_panel_views.hpp"
 #include "editor/panels/panels.hpp"
 #include "netcheck/edit/edit.hpp"
-#include "netcheck/file_io.hpp"
+#include "netcheck/file/file_io.hpp"
 
 namespace stripsmith {
 namespace {
@@ -154,7 +154,7 @@ void toolbar(EditorApp& app) {
 
 }  // namespace
 
-void applyCircuitEdit(EditorApp& app, const CircuitEdit& edit, const std::string& label) {
+void applyCircuitEdit(EditorApp& app, const netcheck::CircuitEdit& edit, const std::string& label) {
     if (const auto* problem = std::get_if<std::string>(&edit)) {
         app.say(*problem);
         return;

@@ -5,7 +5,7 @@
 #include <sstream>
 
 #include "editor/panels/circuit_panel_views.hpp"
-#include "netcheck/part_kinds.hpp"
+#include "netcheck/model/part_kinds.hpp"
 
 namespace stripsmith {
 namespace {

@@ -9,7 +9,7 @@
 #include "editor/panels/panels.hpp"
 #include "editor/tools/part_factory.hpp"
 #include "editor/tools/tools.hpp"
-#include "netcheck/part_kinds.hpp"
+#include "netcheck/model/part_kinds.hpp"
 
 namespace stripsmith {
 namespace {

@@ -5,7 +5,7 @@
 
 #include <cairo.h>
 
-#include "netcheck/board.hpp"
+#include "netcheck/model/board.hpp"
 #include "page_layout.hpp"
 
 namespace sheet {

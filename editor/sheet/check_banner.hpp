@@ -5,7 +5,7 @@
 
 #include <cairo.h>
 
-#include "netcheck/check_report.hpp"
+#include "netcheck/check/check_report.hpp"
 #include "page_layout.hpp"
 
 namespace sheet {

@@ -6,7 +6,7 @@
 #include <vector>
 
 #include "board_view.hpp"
-#include "netcheck/part_kinds.hpp"
+#include "netcheck/model/part_kinds.hpp"
 #include "sheet_text.hpp"
 #include "wire_colours.hpp"
 

@@ -4,7 +4,7 @@
 
 #include <vector>
 
-#include "netcheck/board.hpp"
+#include "netcheck/model/board.hpp"
 #include "paper.hpp"
 #include "sheet.hpp"
 

@@ -14,7 +14,7 @@
 #include "calibration_bar.hpp"
 #include "cautions.hpp"
 #include "check_banner.hpp"
-#include "netcheck/check.hpp"
+#include "netcheck/check/check.hpp"
 #include "page_flow.hpp"
 #include "page_layout.hpp"
 #include "page_map.hpp"

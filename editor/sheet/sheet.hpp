@@ -5,7 +5,7 @@
 #include <optional>
 #include <string>
 
-#include "netcheck/board.hpp"
+#include "netcheck/model/board.hpp"
 
 namespace sheet {
 

@@ -8,7 +8,7 @@
 #include <string>
 #include <string_view>
 
-#include "netcheck/board_file.hpp"
+#include "netcheck/file/board_file.hpp"
 #include "paper.hpp"
 #include "sheet.hpp"
 

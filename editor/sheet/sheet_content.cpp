@@ -7,9 +7,9 @@
 #include <map>
 #include <tuple>
 
-#include "netcheck/colour_code.hpp"
-#include "netcheck/part_kinds.hpp"
-#include "netcheck/value.hpp"
+#include "netcheck/model/colour_code.hpp"
+#include "netcheck/model/part_kinds.hpp"
+#include "netcheck/model/value.hpp"
 
 namespace sheet {
 

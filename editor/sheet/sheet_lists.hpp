@@ -4,8 +4,8 @@
 
 #include <vector>
 
-#include "netcheck/board.hpp"
-#include "netcheck/check_report.hpp"
+#include "netcheck/model/board.hpp"
+#include "netcheck/check/check_report.hpp"
 #include "page_flow.hpp"
 
 namespace sheet {

@@ -2,7 +2,7 @@
 
 #include <algorithm>
 
-#include "netcheck/part_kinds.hpp"
+#include "netcheck/model/part_kinds.hpp"
 
 namespace stripsmith {
 

@@ -7,7 +7,7 @@
 #include <string_view>
 #include <vector>
 
-#include "netcheck/board.hpp"
+#include "netcheck/model/board.hpp"
 
 namespace stripsmith {
 

@@ -4,7 +4,7 @@
 #include <string>
 #include <string_view>
 
-#include "netcheck/board.hpp"
+#include "netcheck/model/board.hpp"
 
 namespace stripsmith {
 

@@ -8,7 +8,7 @@
 #include "editor/tools/ref_names.hpp"
 #include "editor/tools/tools.hpp"
 #include "netcheck/edit/edit.hpp"
-#include "netcheck/part_kinds.hpp"
+#include "netcheck/model/part_kinds.hpp"
 
 namespace stripsmith {
 

@@ -6,7 +6,7 @@
 
 #include <imgui.h>
 
-#include "netcheck/board.hpp"
+#include "netcheck/model/board.hpp"
 
 namespace stripsmith {
 

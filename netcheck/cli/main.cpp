@@ -6,11 +6,11 @@
 #include <string>
 #include <vector>
 
-#include "netcheck/board_file.hpp"
-#include "netcheck/check.hpp"
-#include "netcheck/circuit_loader.hpp"
-#include "netcheck/file_io.hpp"
-#include "netcheck/report_format.hpp"
+#include "netcheck/file/board_file.hpp"
+#include "netcheck/check/check.hpp"
+#include "netcheck/file/circuit_loader.hpp"
+#include "netcheck/file/file_io.hpp"
+#include "netcheck/check/report_format.hpp"
 
 namespace {
 

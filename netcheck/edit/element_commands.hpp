@@ -14,7 +14,7 @@
 #include <utility>
 #include <vector>
 
-#include "netcheck/board.hpp"
+#include "netcheck/model/board.hpp"
 #include "netcheck/edit/mergeable.hpp"
 #include "netcheck/edit/out_of_step.hpp"
 

@@ -6,7 +6,7 @@
 #include <string>
 #include <vector>
 
-#include "command.hpp"
+#include "netcheck/edit/command.hpp"
 
 namespace netcheck::edit {
 

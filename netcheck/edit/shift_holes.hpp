@@ -1,7 +1,7 @@
 // Moving every hole reference of a board element by whole holes.
 #pragma once
 
-#include "netcheck/board.hpp"
+#include "netcheck/model/board.hpp"
 
 namespace netcheck::edit {
 

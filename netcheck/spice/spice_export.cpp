@@ -1,6 +1,6 @@
 // Export: every element line is followed by the annotations that make the importer give back
 // exactly this part; a plain resistor needs none.
-#include "spice_export.hpp"
+#include "netcheck/spice/spice_export.hpp"
 
 #include <algorithm>
 #include <cctype>
@@ -9,11 +9,11 @@
 #include <set>
 #include <vector>
 
-#include "netcheck/part_kinds.hpp"
-#include "netcheck/value.hpp"
-#include "spice_deck.hpp"
-#include "spice_elements.hpp"
-#include "spice_number.hpp"
+#include "netcheck/model/part_kinds.hpp"
+#include "netcheck/model/value.hpp"
+#include "netcheck/spice/detail/spice_deck.hpp"
+#include "netcheck/spice/detail/spice_elements.hpp"
+#include "netcheck/spice/spice_number.hpp"
 
 namespace netcheck {
 

@@ -4,7 +4,7 @@
 #include <string>
 #include <string_view>
 
-#include "netcheck/circuit.hpp"
+#include "netcheck/model/circuit.hpp"
 
 namespace netcheck {
 

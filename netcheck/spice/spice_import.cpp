@@ -1,13 +1,13 @@
 // Deck -> scopes -> expanded parts -> Circuit. Nothing reaches the result unless the whole deck
 // was read without error.
-#include "spice_import.hpp"
+#include "netcheck/spice/spice_import.hpp"
 
 #include <algorithm>
 #include <cctype>
 
-#include "spice_deck.hpp"
-#include "spice_elements.hpp"
-#include "spice_subckt.hpp"
+#include "netcheck/spice/detail/spice_deck.hpp"
+#include "netcheck/spice/detail/spice_elements.hpp"
+#include "netcheck/spice/detail/spice_subckt.hpp"
 
 namespace netcheck {
 

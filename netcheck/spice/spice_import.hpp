@@ -5,9 +5,9 @@
 #include <string>
 #include <string_view>
 
-#include "netcheck/board_file.hpp"
-#include "netcheck/circuit.hpp"
-#include "netcheck/read_limits.hpp"
+#include "netcheck/file/board_file.hpp"
+#include "netcheck/model/circuit.hpp"
+#include "netcheck/file/read_limits.hpp"
 
 namespace netcheck {
 

@@ -1,6 +1,6 @@
 // SPICE scale suffixes (ngspice manual, ch. 2): T 1e12, G 1e9, MEG 1e6, K 1e3, M 1e-3, U 1e-6,
 // N 1e-9, P 1e-12, F 1e-15, MIL 25.4e-6; letters after a number or suffix are ignored.
-#include "spice_number.hpp"
+#include "netcheck/spice/spice_number.hpp"
 
 #include <array>
 #include <cctype>
@@ -8,8 +8,8 @@
 #include <cstdio>
 #include <cstdlib>
 
-#include "netcheck/value.hpp"
-#include "spice_deck.hpp"
+#include "netcheck/model/value.hpp"
+#include "netcheck/spice/detail/spice_deck.hpp"
 
 namespace netcheck::spice {
 

@@ -13,9 +13,9 @@
 
 #include <random>
 
-#include "netcheck/board_file.hpp"
-#include "netcheck/check.hpp"
-#include "netcheck/connectivity.hpp"
+#include "netcheck/file/board_file.hpp"
+#include "netcheck/check/check.hpp"
+#include "netcheck/check/connectivity.hpp"
 
 using namespace netcheck;
 

@@ -6,7 +6,7 @@
 #include <string>
 
 #include "editor/sheet/sheet.hpp"
-#include "netcheck/board.hpp"
+#include "netcheck/model/board.hpp"
 
 namespace {
 

@@ -9,12 +9,13 @@
 #include <sstream>
 
 #include "editor/panels/circuit_diff.hpp"
-#include "editor/panels/circuit_edits.hpp"
+#include "netcheck/edit/circuit_edits.hpp"
 #include "editor/panels/circuit_files.hpp"
-#include "netcheck/board_file.hpp"
+#include "netcheck/file/board_file.hpp"
 #include "netcheck/edit/edit.hpp"
 
 using namespace stripsmith;
+using netcheck::CircuitEdit;
 using netcheck::Circuit;
 using netcheck::PinRef;
 

@@ -6,7 +6,7 @@
 
 #include "editor/app/edit_actions.hpp"
 #include "editor/canvas/offboard_layout.hpp"
-#include "netcheck/board_file.hpp"
+#include "netcheck/file/board_file.hpp"
 #include "netcheck/edit/history.hpp"
 
 using namespace stripsmith;

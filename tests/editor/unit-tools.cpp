@@ -3,11 +3,11 @@
 
 #include "editor/app/edit_actions.hpp"
 #include "editor/app/finding_fix.hpp"
-#include "editor/panels/circuit_capture.hpp"
+#include "netcheck/check/circuit_capture.hpp"
 #include "editor/tools/hit_test.hpp"
 #include "editor/tools/part_factory.hpp"
 #include "editor/tools/ref_names.hpp"
-#include "netcheck/connectivity.hpp"
+#include "netcheck/check/connectivity.hpp"
 
 using namespace stripsmith;
 using netcheck::Hole;

@@ -9,7 +9,7 @@
 
 #include "../test_support.hpp"
 #include "editor/sheet/sheet.hpp"
-#include "netcheck/board_file.hpp"
+#include "netcheck/file/board_file.hpp"
 
 namespace fs = std::filesystem;
 

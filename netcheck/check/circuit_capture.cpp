@@ -1,0 +1,40 @@
+#include "netcheck/check/circuit_capture.hpp"
+
+#include <set>
+
+#include "netcheck/check/connectivity.hpp"
+
+namespace netcheck {
+
+namespace {
+
+std::string keptName(const Board& board, const std::vector<PinRef>& group) {
+    if (!board.circuit) return {};
+    std::set<std::string> names;
+    for (const auto& pin : group)
+        if (auto net = board.circuit->netOf(pin)) names.insert(*net);
+    return names.size() == 1 ? *names.begin() : std::string{};
+}
+
+}  // namespace
+
+Circuit captureCircuit(const Board& board) {
+    Circuit circuit;
+    for (const Part& part : board.parts) {
+        CircuitPart cp{part.kind, part.value, {}, nlohmann::json::object()};
+        for (const auto& pin : part.pins) cp.pins.push_back(pin.name);
+        circuit.parts[part.ref] = cp;
+    }
+    for (const OffboardPart& part : board.offboard)
+        circuit.parts[part.ref] = CircuitPart{part.kind, part.value, part.pins, nlohmann::json::object()};
+    int counter = 0;
+    for (const auto& group : boardNets(board)) {
+        if (group.size() < 2) continue;
+        std::string name = keptName(board, group);
+        while (name.empty() || circuit.nets.count(name)) name = "N" + std::to_string(++counter);
+        circuit.nets[name] = group;
+    }
+    return circuit;
+}
+
+}  // namespace netcheck

@@ -1,0 +1,322 @@
+// Bare link contacts. Geometry is in hole coordinates (row, col), where hole centres are whole
+// numbers, so the tests that decide a crossing are exact integer arithmetic; only the "how close"
+// test for a lead uses the board's pitch.
+#include "netcheck/check/detail/link_findings.hpp"
+
+#include <algorithm>
+#include <cmath>
+#include <cstdint>
+#include <cstdlib>
+#include <utility>
+
+namespace netcheck {
+
+namespace {
+
+bool isBare(const Board& board, const Link& link) {
+    return !link.copperSide && !link.insulated && board.contains(link.from) &&
+           board.contains(link.to);
+}
+
+bool isDiagonal(const Link& link) {
+    return link.from.row != link.to.row && link.from.col != link.to.col;
+}
+
+// Twice the signed area of the triangle a, b, p: zero when p lies on the line through a and b.
+std::int64_t cross(Hole a, Hole b, Hole p) {
+    return std::int64_t{b.col - a.col} * (p.row - a.row) -
+           std::int64_t{b.row - a.row} * (p.col - a.col);
+}
+
+// How near (in pitches) a lead must come to a wire to touch it on this board. At most half a
+// pitch: further out a lead is nearer the next hole's line, and boards finer than 1.2 mm are not
+// stripboard.
+double contactReach(const Board& board) {
+    return std::min(kLinkContactMm / board.pitchMm, 0.5);
+}
+
+// Calls visit(hole) for every hole strictly between the link's ends whose centre lies within
+// `reach` (at most half a pitch) of the wire. Walks the longer axis: in each of its columns (or
+// rows) only the two holes either side of the wire can come that close.
+template <typename Visit>
+void forEachHoleUnder(const Link& link, double reach, Visit visit) {
+    const Hole a = link.from;
+    const Hole b = link.to;
+    const int dr = b.row - a.row;
+    const int dc = b.col - a.col;
+    const double length2 = double{1} * dr * dr + double{1} * dc * dc;
+    const bool alongCols = std::abs(dc) >= std::abs(dr);
+    const int steps = alongCols ? std::abs(dc) : std::abs(dr);
+    const int minorSpan = alongCols ? dr : dc;
+    if (minorSpan == 0) {  // along a strip or straight across: every hole between is under it
+        for (int s = 1; s < steps; ++s) {
+            visit(alongCols ? Hole{a.row, a.col + (dc > 0 ? s : -s)}
+                            : Hole{a.row + (dr > 0 ? s : -s), a.col});
+        }
+        return;
+    }
+    for (int s = 1; s < steps; ++s) {
+        const int major = (alongCols ? a.col : a.row) + ((alongCols ? dc : dr) > 0 ? s : -s);
+        const double minor = (alongCols ? a.row : a.col) + double{1} * minorSpan * s / steps;
+        const auto below = static_cast<int>(std::floor(minor));
+        const auto above = static_cast<int>(std::ceil(minor));
+        for (int m = below; m <= above; ++m) {
+            const Hole h = alongCols ? Hole{m, major} : Hole{major, m};
+            const auto area = static_cast<double>(cross(a, b, h));
+            if (area * area < reach * reach * length2) visit(h);
+        }
+    }
+}
+
+// Whether the wires a-b and c-d cross at a point inside both: not at an end of either, and not
+// lying along each other (an end on the other wire is a lead under it, reported as such).
+bool crossInside(const Link& first, const Link& second) {
+    const std::int64_t c1 = cross(first.from, first.to, second.from);
+    const std::int64_t c2 = cross(first.from, first.to, second.to);
+    const std::int64_t c3 = cross(second.from, second.to, first.from);
+    const std::int64_t c4 = cross(second.from, second.to, first.to);
+    auto opposite = [](std::int64_t x, std::int64_t y) {
+        return (x > 0 && y < 0) || (x < 0 && y > 0);
+    };
+    return opposite(c1, c2) && opposite(c3, c4);
+}
+
+// Where two crossing wires meet: "at D3" when on a hole centre, else "near D3".
+std::string crossingPlace(const Link& first, const Link& second) {
+    const std::int64_t c3 = cross(second.from, second.to, first.from);
+    const std::int64_t c4 = cross(second.from, second.to, first.to);
+    const std::int64_t dr = first.to.row - first.from.row;
+    const std::int64_t dc = first.to.col - first.from.col;
+    const std::int64_t span = c3 - c4;  // never zero for wires that cross
+    const bool onHole = (c3 * dr) % span == 0 && (c3 * dc) % span == 0;
+    const double t = static_cast<double>(c3) / static_cast<double>(span);
+    const Hole nearest{first.from.row + static_cast<int>(std::lround(t * static_cast<double>(dr))),
+                       first.from.col + static_cast<int>(std::lround(t * static_cast<double>(dc)))};
+    return (onHole ? "at " : "near ") + holeName(nearest);
+}
+
+// A board file may hold millions of links a board long, crossing at the same holes. Past these
+// bounds the contacts are left unchecked, with a warning that says so, rather than taking minutes
+// and gigabytes: holes passed over by all the bare links together, per hole of the board (plus a
+// floor for small boards), and pairs of wires that may cross.
+constexpr long kPassesPerHole = 4;
+constexpr long kPassesFloor = 4096;
+constexpr std::size_t kMaxPairs = std::size_t{1} << 22;
+
+// Pairs of links that may cross, each pair once, first < second. Without diagonal links every
+// crossing is on a hole both wires pass over; with them, wires are listed by the cells of the
+// hole grid they pass through (a one-cell margin on each side), and two crossing wires share a
+// cell. `twice`: the holes (indices, sorted) that two or more of the wires pass over. `complete`
+// is cleared when the pairs pass kMaxPairs (those found so far are returned).
+std::vector<std::pair<int, int>> crossingCandidates(const Board& board,
+                                                    const std::vector<int>& bare, bool anyDiagonal,
+                                                    const std::vector<int>& twice, double reach,
+                                                    bool& complete) {
+    std::vector<std::pair<std::int64_t, int>> marks;  // (place, link)
+    const std::int64_t width = std::int64_t{board.cols} + 2;
+    auto cellKey = [&](std::int64_t row, std::int64_t col) { return (row + 1) * width + col + 1; };
+    for (int l : bare) {
+        const Link& link = board.links[static_cast<std::size_t>(l)];
+        if (!anyDiagonal) {
+            forEachHoleUnder(link, reach, [&](Hole h) {
+                const int index = h.row * board.cols + h.col;
+                if (std::binary_search(twice.begin(), twice.end(), index))
+                    marks.emplace_back(index, l);
+            });
+            continue;
+        }
+        const bool alongCols =
+            std::abs(link.to.col - link.from.col) >= std::abs(link.to.row - link.from.row);
+        const Hole a = alongCols ? link.from : Hole{link.from.col, link.from.row};
+        const Hole b = alongCols ? link.to : Hole{link.to.col, link.to.row};
+        auto minorAt = [&](int major) {  // a straight wire between a and b, major axis as col
+            return a.row + double{1} * (b.row - a.row) * (major - a.col) / (b.col - a.col);
+        };
+        for (int t = std::min(a.col, b.col); t < std::max(a.col, b.col); ++t) {
+            const double y0 = minorAt(t);
+            const double y1 = minorAt(t + 1);
+            const auto lo = static_cast<std::int64_t>(std::floor(std::min(y0, y1))) - 1;
+            const auto hi = static_cast<std::int64_t>(std::floor(std::max(y0, y1)));
+            for (std::int64_t m = lo; m <= hi; ++m) {
+                marks.emplace_back(alongCols ? cellKey(m, t) : cellKey(t, m), l);
+            }
+        }
+    }
+    std::sort(marks.begin(), marks.end());
+    std::vector<std::pair<int, int>> pairs;
+    for (std::size_t i = 0; i < marks.size() && complete;) {
+        std::size_t end = i;
+        while (end < marks.size() && marks[end].first == marks[i].first) ++end;
+        for (std::size_t x = i; x < end && complete; ++x) {
+            for (std::size_t y = x + 1; y < end; ++y) {
+                if (marks[x].second != marks[y].second)
+                    pairs.emplace_back(marks[x].second, marks[y].second);
+            }
+            complete = pairs.size() <= kMaxPairs;
+        }
+        i = end;
+    }
+    std::sort(pairs.begin(), pairs.end());
+    pairs.erase(std::unique(pairs.begin(), pairs.end()), pairs.end());
+    return pairs;
+}
+
+// The names of the leads in each of `holes` (sorted, each once), in one pass over the leads.
+std::vector<std::string> leadNamesAt(const CheckContext& context, const std::vector<Hole>& holes) {
+    std::vector<std::string> names(holes.size());
+    HoleBits wanted;  // most leads are elsewhere: one bit says so
+    wanted.reset(context.board().holeCount());
+    for (const Hole& hole : holes) wanted.set(context.holeIndex(hole));
+    for (const Lead& lead : context.leads()) {
+        if (!wanted.test(lead.hole)) continue;
+        const Hole at = context.holeAt(lead.hole);
+        const auto it = std::lower_bound(holes.begin(), holes.end(), at);
+        if (it == holes.end() || *it != at) continue;
+        std::string& name = names[static_cast<std::size_t>(it - holes.begin())];
+        name += (name.empty() ? "" : ", ") + context.leadName(lead);
+    }
+    return names;
+}
+
+// "D3 (R1.1)", "D3 (R1.1) and E3 (C2.+)", "C3 (R2.1), D3 (R1.1) and E3 (C2.+)"; past eight holes
+// the rest are counted, not named (the finding's holes list them all).
+std::string leadsPassedOver(const std::vector<Hole>& under, const std::vector<Hole>& named,
+                            const std::vector<std::string>& names) {
+    constexpr std::size_t kNamed = 8;
+    const std::size_t shown = under.size() > kNamed ? kNamed - 1 : under.size();
+    std::string text;
+    for (std::size_t i = 0; i < shown; ++i) {
+        if (i > 0) text += i + 1 == under.size() ? " and " : ", ";
+        const auto at = std::lower_bound(named.begin(), named.end(), under[i]) - named.begin();
+        text += holeName(under[i]) + " (" + names[static_cast<std::size_t>(at)] + ")";
+    }
+    if (shown < under.size())
+        text += " and " + std::to_string(under.size() - shown) + " more holes";
+    return text;
+}
+
+Finding linkFinding(std::string type, std::string message, std::vector<Hole> holes) {
+    Finding finding;
+    finding.type = std::move(type);
+    finding.severity = Severity::Warning;
+    finding.message = std::move(message);
+    finding.holes = std::move(holes);
+    return finding;
+}
+
+// link-over-lead warnings, in link order. One walk along each wire finds the leads under it and
+// the holes two wires pass over (returned sorted, for findCrossings). Most links join
+// neighbouring holes and pass over nothing.
+std::vector<int> findLinksOverLeads(const CheckContext& context, const std::vector<int>& bare,
+                                    double reach, std::vector<Finding>& warnings) {
+    const Board& board = context.board();
+    std::vector<std::pair<int, std::vector<Hole>>> crossed;  // (link, holes with leads under it)
+    std::vector<Hole> named;
+    std::vector<int> twice;
+    HoleBits passed;
+    bool anyPassed = false;
+    for (int l : bare) {
+        const Link& link = board.links[static_cast<std::size_t>(l)];
+        if (std::abs(link.to.row - link.from.row) < 2 && std::abs(link.to.col - link.from.col) < 2)
+            continue;
+        if (!anyPassed) passed.reset(board.holeCount());
+        anyPassed = true;
+        std::vector<Hole> under;
+        forEachHoleUnder(link, reach, [&](Hole h) {
+            const int index = context.holeIndex(h);
+            if (context.holdsLead(index)) under.push_back(h);
+            if (passed.test(index)) twice.push_back(index);
+            passed.set(index);
+        });
+        if (under.empty()) continue;
+        std::sort(under.begin(), under.end());
+        named.insert(named.end(), under.begin(), under.end());
+        crossed.emplace_back(l, std::move(under));
+    }
+    std::sort(named.begin(), named.end());
+    named.erase(std::unique(named.begin(), named.end()), named.end());
+    const std::vector<std::string> names =
+        named.empty() ? std::vector<std::string>{} : leadNamesAt(context, named);
+    for (auto& [l, under] : crossed) {
+        const Link& link = board.links[static_cast<std::size_t>(l)];
+        std::string message = "Bare link " + linkName(link) + " passes over " +
+                              leadsPassedOver(under, named, names) + ": the wire would touch " +
+                              (under.size() > 1 ? "those leads" : "that lead");
+        std::vector<Hole> holes{link.from, link.to};
+        holes.insert(holes.end(), under.begin(), under.end());
+        warnings.push_back(linkFinding("link-over-lead", std::move(message), std::move(holes)));
+        warnings.back().fix = "sleeve the link or route it round";
+    }
+    std::sort(twice.begin(), twice.end());
+    twice.erase(std::unique(twice.begin(), twice.end()), twice.end());
+    return twice;
+}
+
+// links-touch warnings, in link order (and links-unchecked past kMaxPairs).
+void findCrossings(const Board& board, const std::vector<int>& bare, bool anyDiagonal,
+                   const std::vector<int>& twice, double reach, std::vector<Finding>& warnings) {
+    bool complete = true;
+    for (const auto& [i, j] :
+         crossingCandidates(board, bare, anyDiagonal, twice, reach, complete)) {
+        const Link& first = board.links[static_cast<std::size_t>(i)];
+        const Link& second = board.links[static_cast<std::size_t>(j)];
+        if (!crossInside(first, second)) continue;
+        warnings.push_back(linkFinding("links-touch",
+                                       "Bare links " + linkName(first) + " and " +
+                                           linkName(second) + " cross " +
+                                           crossingPlace(first, second) + ": the wires would touch",
+                                       {first.from, first.to, second.from, second.to}));
+        warnings.back().fix = "sleeve one of them or route it round";
+    }
+    if (!complete) {
+        warnings.push_back(linkFinding("links-unchecked",
+                                       "Too many bare links cross the same places to check every "
+                                       "pair: check by eye where links cross",
+                                       {}));
+    }
+}
+
+}  // namespace
+
+bool liesClear(const CheckContext& context, const Link& link) {
+    const Board& board = context.board();
+    bool clear = true;
+    forEachHoleUnder(link, contactReach(board),
+                     [&](Hole h) { clear = clear && !context.holdsLead(context.holeIndex(h)); });
+    return clear && std::none_of(board.links.begin(), board.links.end(), [&](const Link& other) {
+               return isBare(board, other) && crossInside(link, other);
+           });
+}
+
+void findBareLinkContacts(const CheckContext& context, std::vector<Finding>& warnings) {
+    const Board& board = context.board();
+    const double reach = contactReach(board);
+    std::vector<int> bare;
+    bare.reserve(board.links.size());
+    long passes = 0;  // holes passed over, by all the bare links together
+    bool anyDiagonal = false;
+    for (std::size_t l = 0; l < board.links.size(); ++l) {
+        const Link& link = board.links[l];
+        if (!isBare(board, link)) continue;
+        bare.push_back(static_cast<int>(l));
+        passes +=
+            std::max(std::abs(link.to.row - link.from.row), std::abs(link.to.col - link.from.col)) -
+            1;
+        anyDiagonal = anyDiagonal || isDiagonal(link);
+    }
+    if (passes > kPassesPerHole * board.holeCount() + kPassesFloor) {
+        warnings.push_back(linkFinding(
+            "links-unchecked",
+            "Bare links pass over " + std::to_string(passes) +
+                " holes in all, too many to check for leads under them or links crossing: check "
+                "the links by eye",
+            {}));
+        return;
+    }
+    const std::vector<int> twice = findLinksOverLeads(context, bare, reach, warnings);
+    // Axis-parallel wires can only cross on a hole both pass over.
+    if (anyDiagonal || !twice.empty())
+        findCrossings(board, bare, anyDiagonal, twice, reach, warnings);
+}
+
+}  // namespace netcheck

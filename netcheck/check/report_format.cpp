@@ -1,0 +1,135 @@
+// Report printing. Text is for people at the bench: one line per finding, every line naming holes,
+// then a summary. JSON is the CLI contract: stable key order, fields only where they mean
+// something.
+#include "netcheck/check/report_format.hpp"
+
+namespace netcheck {
+
+namespace {
+
+std::string plural(std::size_t count, const char* word) {
+    return std::to_string(count) + " " + word + (count == 1 ? "" : "s");
+}
+
+std::string findingLine(const Finding& finding) {
+    std::string line = (finding.severity == Severity::Error ? "error " : "warning ") +
+                       finding.type + " " + finding.message;
+    if (!finding.fix.empty()) line += "; " + finding.fix;
+    return line;
+}
+
+// "R1.2 (A9)" for on-board pins, the bare name for off-board lugs.
+std::string pinWithHole(const Board& board, const PinRef& pin) {
+    const Part* part = board.findPart(pin.ref);
+    const Pin* onBoard = part ? part->findPin(pin.pin) : nullptr;
+    return onBoard ? pin.name() + " (" + holeName(onBoard->hole) + ")"
+                   : pin.name() + " (off board)";
+}
+
+std::string islandLine(const Board& board, const Island& island) {
+    std::string line = "island";
+    if (!island.holes.empty()) {
+        line += " " + holeName(island.holes.front());
+        if (island.holes.size() > 1) line += "-" + holeName(island.holes.back());
+    }
+    line += ":";
+    for (std::size_t i = 0; i < island.pins.size(); ++i) {
+        line += (i == 0 ? " " : ", ") + pinWithHole(board, island.pins[i]);
+    }
+    return line;
+}
+
+nlohmann::ordered_json pinNames(const std::vector<PinRef>& pins) {
+    nlohmann::ordered_json names = nlohmann::ordered_json::array();
+    for (const PinRef& pin : pins) names.push_back(pin.name());
+    return names;
+}
+
+nlohmann::ordered_json holeNames(const std::vector<Hole>& holes) {
+    nlohmann::ordered_json names = nlohmann::ordered_json::array();
+    for (const Hole& hole : holes) names.push_back(holeName(hole));
+    return names;
+}
+
+nlohmann::ordered_json findingJson(const Finding& finding) {
+    nlohmann::ordered_json entry;
+    entry["type"] = finding.type;
+    if (!finding.ref.empty()) entry["ref"] = finding.ref;
+    if (finding.type == "short") {
+        entry["nets"] = finding.nets;
+        entry["path"] = holeNames(finding.path);
+        entry["cut"] = finding.suggestedCut ? nlohmann::ordered_json(cutName(*finding.suggestedCut))
+                                            : nlohmann::ordered_json(nullptr);
+    }
+    if (finding.type == "open") {
+        entry["net"] = finding.net;
+        entry["pieces"] = nlohmann::ordered_json::array();
+        for (const auto& piece : finding.pieces) entry["pieces"].push_back(pinNames(piece));
+        entry["links"] = nlohmann::ordered_json::array();
+        for (const Link& link : finding.suggestedLinks) {
+            entry["links"].push_back({{"from", holeName(link.from)}, {"to", holeName(link.to)}});
+        }
+    }
+    if (finding.hole) entry["hole"] = holeName(*finding.hole);
+    if (!finding.holes.empty()) entry["holes"] = holeNames(finding.holes);
+    entry["message"] = finding.message;
+    if (!finding.fix.empty()) entry["fix"] = finding.fix;
+    return entry;
+}
+
+nlohmann::ordered_json findingsJson(const std::vector<Finding>& findings) {
+    nlohmann::ordered_json list = nlohmann::ordered_json::array();
+    for (const Finding& finding : findings) list.push_back(findingJson(finding));
+    return list;
+}
+
+}  // namespace
+
+std::string formatReportText(const CheckReport& report, const Board& board) {
+    std::string text;
+    if (!report.hasCircuit) {
+        text += "no circuit to compare with; " + plural(report.islands.size(), "island") +
+                (report.islands.size() == 1 ? " holds" : " hold") + " pins:\n";
+        for (const Island& island : report.islands) text += islandLine(board, island) + "\n";
+    }
+    for (const Finding& finding : report.errors) text += findingLine(finding) + "\n";
+    for (const Finding& finding : report.warnings) text += findingLine(finding) + "\n";
+    text += plural(report.errors.size(), "error") + ", " +
+            plural(report.warnings.size(), "warning") + "\n";
+    return text;
+}
+
+nlohmann::ordered_json reportJson(const CheckReport& report) {
+    nlohmann::ordered_json json;
+    json["ok"] = report.ok();
+    json["errors"] = findingsJson(report.errors);
+    json["warnings"] = findingsJson(report.warnings);
+    if (!report.hasCircuit) {
+        json["islands"] = nlohmann::ordered_json::array();
+        for (const Island& island : report.islands) {
+            json["islands"].push_back(
+                {{"pins", pinNames(island.pins)}, {"holes", holeNames(island.holes)}});
+        }
+    }
+    return json;
+}
+
+nlohmann::ordered_json netsJson(const Board& board) {
+    nlohmann::ordered_json json;
+    json["nets"] = nlohmann::ordered_json::array();
+    for (const auto& group : boardNets(board)) json["nets"].push_back(pinNames(group));
+    return json;
+}
+
+std::string formatNetsText(const Board& board) {
+    std::string text;
+    for (const auto& group : boardNets(board)) {
+        for (std::size_t i = 0; i < group.size(); ++i) {
+            text += (i == 0 ? "" : " ") + group[i].name();
+        }
+        text += "\n";
+    }
+    return text;
+}
+
+}  // namespace netcheck
