@@ -31,7 +31,7 @@ PinRef pin(const char* text) { return *PinRef::parse(text); }
 std::vector<const Finding*> ofType(const std::vector<Finding>& findings, const std::string& type) {
     std::vector<const Finding*> found;
     for (const Finding& finding : findings) {
-        if (finding.type == type) found.push_back(&finding);
+        if (finding.id() == type) found.push_back(&finding);
     }
     return found;
 }

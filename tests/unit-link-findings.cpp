@@ -12,7 +12,7 @@
 #include <random>
 
 #include "netcheck/check/check.hpp"
-#include "netcheck/check/detail/link_findings.hpp"
+#include "netcheck/check/detail/finders.hpp"
 
 using namespace netcheck;
 
@@ -38,7 +38,7 @@ void addPin(Board& board, const std::string& ref, Hole hole) {
 std::vector<Finding> linkWarnings(const Board& board) {
     std::vector<Finding> found;
     for (const Finding& finding : check(board).warnings) {
-        if (finding.type == "link-over-lead" || finding.type == "links-touch") found.push_back(finding);
+        if (finding.id() == "link-over-lead" || finding.id() == "links-touch") found.push_back(finding);
     }
     return found;
 }
@@ -55,7 +55,7 @@ TEST_CASE("bare links") {
         board.links.push_back(Link{h("A3"), h("E3")});
         auto found = linkWarnings(board);
         REQUIRE(found.size() == 1);
-        CHECK(found[0].type == "link-over-lead");
+        CHECK(found[0].id() == "link-over-lead");
         CHECK(found[0].holes == std::vector<Hole>{h("A3"), h("E3"), h("C3")});
         CHECK(found[0].message == "Bare link A3-E3 passes over C3 (R1.1): the wire would touch that lead");
         CHECK(found[0].fix == "sleeve the link or route it round");
@@ -132,7 +132,7 @@ TEST_CASE("bare links") {
         CHECK(linkWarnings(board).empty());
         const auto warnings = check(board).warnings;
         const auto unchecked = std::count_if(warnings.begin(), warnings.end(),
-                                             [](const Finding& f) { return f.type == "links-unchecked"; });
+                                             [](const Finding& f) { return f.id() == "links-unchecked"; });
         CHECK(unchecked == 1);
         board.links.resize(250);  // 7,000 holes: within the bound, so TP1 is found under them
         CHECK_FALSE(linkWarnings(board).empty());

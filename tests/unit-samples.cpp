@@ -14,7 +14,7 @@ namespace {
 
 // Does `finding` match every field the expectation names?
 bool matches(const Finding& finding, const nlohmann::json& expected) {
-    if (finding.type != expected.at("type").get<std::string>()) return false;
+    if (finding.id() != expected.at("type").get<std::string>()) return false;
     if (expected.contains("ref") && finding.ref != expected["ref"].get<std::string>()) return false;
     if (expected.contains("net") && finding.net != expected["net"].get<std::string>()) return false;
     if (expected.contains("nets") && finding.nets != expected["nets"].get<std::vector<std::string>>()) {

@@ -24,7 +24,7 @@ std::unique_ptr<netcheck::edit::Command> sleeveCommand(const netcheck::Board& bo
 }  // namespace
 
 std::unique_ptr<netcheck::edit::Command> fixCommand(const netcheck::Board& board, const netcheck::Finding& finding) {
-    if (finding.type == "link-over-lead" || finding.type == "links-touch") return sleeveCommand(board, finding);
+    if (finding.type == netcheck::FindingType::LinkOverLead || finding.type == netcheck::FindingType::LinksTouch) return sleeveCommand(board, finding);
     if (finding.suggestedCut) {
         const netcheck::Cut& cut = *finding.suggestedCut;
         if (std::find(board.cuts.begin(), board.cuts.end(), cut) != board.cuts.end()) return nullptr;

@@ -60,7 +60,7 @@ void drawIslandHighlight(const CanvasFrame& f, const netcheck::Board& board, con
 }
 
 void drawFindingHighlight(const CanvasFrame& f, const netcheck::Board& board, const netcheck::Finding& finding) {
-    const ImU32 tone = finding.severity == netcheck::Severity::Error ? palette::kErrorFill
+    const ImU32 tone = finding.severity() == netcheck::Severity::Error ? palette::kErrorFill
                                                                       : palette::rgba(250, 180, 40, 70);
     for (const netcheck::Hole& h : finding.holes) cellGlow(f, h, tone);
     // Short: the copper path between the two nets.

@@ -16,10 +16,10 @@ namespace {
 bool findingRow(EditorApp& app, const netcheck::Finding& finding, int index) {
     bool fixPressed = false;
     ImGui::PushID(index);
-    const bool error = finding.severity == netcheck::Severity::Error;
+    const bool error = finding.severity() == netcheck::Severity::Error;
     const bool focused = app.view.focusedFinding && *app.view.focusedFinding == index;
     ImGui::PushStyleColor(ImGuiCol_Text, error ? ImVec4(1.0f, 0.5f, 0.45f, 1.0f) : ImVec4(1.0f, 0.78f, 0.35f, 1.0f));
-    const std::string head = std::string(error ? "Error: " : "Warning: ") + finding.type;
+    const std::string head = std::string(error ? "Error: " : "Warning: ") + std::string(finding.id());
     const bool clicked = ImGui::Selectable(head.c_str(), focused);
     app.logItem("finding-" + std::to_string(index));
     if (clicked) {

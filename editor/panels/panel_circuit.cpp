@@ -36,7 +36,7 @@ void refuseLoad(EditorApp& app, const std::string& message) {
 void logFindings(const EditorApp& app) {
     if (!app.logHoles) return;
     for (const auto& finding : app.doc.report().errors)
-        std::fprintf(stderr, "STRIPSMITH_E2E finding %s %s\n", finding.type.c_str(),
+        std::fprintf(stderr, "STRIPSMITH_E2E finding %s %s\n", std::string(finding.id()).c_str(),
                      finding.message.c_str());
 }
 

@@ -43,7 +43,7 @@ void drawFindings(PageFlow& flow, const netcheck::CheckReport& report) {
         for (const auto& finding : *list) {
             table.rows.push_back(
                 {std::to_string(number++),
-                 finding.severity == netcheck::Severity::Error ? "ERROR" : "warning", finding.type,
+                 finding.severity() == netcheck::Severity::Error ? "ERROR" : "warning", std::string(finding.id()),
                  finding.message, finding.fix});
         }
     }

@@ -8,9 +8,9 @@
 //   sit at their hole's node.
 // - Parts are matched by reference designator. A ref the circuit names (declared, or only used in
 //   a net) that the board lacks is missing-part; a board part (on or off the board) the circuit
-//   never names is extra-part. A pin the circuit uses that the board part lacks, or a declared pin
-//   list that differs from the board part's, is pin-mismatch (that part's pins are then left out
-//   of the net comparison). Values: kinds whose value is a quantity compare numerically
+//   never names is extra-part. A pin the circuit uses that the board part lacks is pin-mismatch,
+//   and that part's pins are then left out of the net comparison; a declared pin list that
+//   differs from the board part's is pin-mismatch too, but its pins still take part. Values: kinds whose value is a quantity compare numerically
 //   (value-mismatch, an error); other kinds compare as text (value-differs, a warning). An empty
 //   value in the circuit is don't-care.
 // - Orientation: non-polarised two-pin parts of a known kind may sit end for end. Each gets the
@@ -18,7 +18,9 @@
 //   same island and the same intended net); a tie keeps the part as written. Two rounds, so
 //   neighbouring flipped parts settle. Pots and trimmers whose lugs 1 and 3 agree better swapped,
 //   with the wiper agreeing as placed, are taken as swapped and get a pot-reversed warning (the
-//   control works backwards but nothing is shorted). Polarised parts keep their pin names; if the
+//   control works backwards but nothing is shorted). A pin whose hole lies outside the board
+//   (only a board made in code can have one: the file reader refuses it) joins nothing and is
+//   left out of the nets. Polarised parts keep their pin names; if the
 //   other way round (two pins) or another order (three-pin transistors and regulators) would agree
 //   clearly better - at least two joins and more than twice as many - one reversed-part error
 //   says so, beside the shorts and opens the reversal causes.
@@ -46,181 +48,135 @@
 
 #include <algorithm>
 #include <map>
-#include <optional>
 
-#include "netcheck/check/detail/check_context.hpp"
+#include "netcheck/check/detail/checked_board.hpp"
 #include "netcheck/check/detail/circuit_match.hpp"
-#include "netcheck/check/detail/lead_findings.hpp"
-#include "netcheck/check/detail/link_findings.hpp"
-#include "netcheck/check/detail/open_locator.hpp"
-#include "netcheck/check/detail/short_locator.hpp"
+#include "netcheck/check/detail/finders.hpp"
 
 namespace netcheck {
 
 namespace {
 
-// Shorts, and (for the dangling-lead rule) the islands holding a pin meant to join another pin: a
-// pin the circuit leaves unconnected, or the only pin of its net, is meant to be alone.
-void findShorts(const CheckContext& context, const std::vector<PlacedNet>& nets,
-                std::vector<Finding>& errors, std::vector<char>& islandsWithNetPins,
-                std::vector<int>& firstNet) {
-    const Connectivity& copper = context.copper();
-    firstNet.assign(static_cast<std::size_t>(copper.islandCount()), -1);
-    islandsWithNetPins.assign(firstNet.size(), 0);
-    std::vector<int> shortedIslands;
-    for (std::size_t n = 0; n < nets.size(); ++n) {
-        const char meantToJoin = nets[n].pins.size() > 1 ? 1 : 0;
-        for (const NetPin& pin : nets[n].pins) {
-            const auto island = static_cast<std::size_t>(pin.island);
-            islandsWithNetPins[island] |= meantToJoin;
-            int& first = firstNet[island];
-            if (first < 0) first = static_cast<int>(n);
-            if (first != static_cast<int>(n)) shortedIslands.push_back(pin.island);
-        }
-    }
-    if (shortedIslands.empty()) return;
-    std::map<int, std::vector<const PlacedNet*>> shorted;
-    for (int island : shortedIslands) shorted[island];
-    for (const PlacedNet& net : nets) {
+// The shorts, one per island holding pins of two or more nets. `meantToJoin` flags the islands
+// holding a pin meant to join another (for dangling-lead: a pin the circuit leaves unconnected,
+// or the only pin of its net, is meant to be alone).
+std::vector<Finding> findShorts(const CheckedBoard& checked, const std::vector<Net>& nets,
+                                std::vector<char>& meantToJoin) {
+    const auto islands = static_cast<std::size_t>(checked.copper().islandCount());
+    meantToJoin.assign(islands, 0);
+    std::vector<const Net*> firstNet(islands, nullptr);
+    std::map<int, std::vector<const Net*>> shorted;  // island -> its nets, in net order
+    for (const Net& net : nets) {
         for (const NetPin& pin : net.pins) {
-            auto it = shorted.find(pin.island);
-            if (it == shorted.end()) continue;
-            if (it->second.empty() || it->second.back() != &net) it->second.push_back(&net);
+            const auto island = static_cast<std::size_t>(pin.island);
+            if (net.pins.size() > 1) meantToJoin[island] = 1;
+            if (firstNet[island] == nullptr) firstNet[island] = &net;
+            if (firstNet[island] == &net) continue;
+            std::vector<const Net*>& here = shorted[pin.island];
+            if (here.empty()) here.push_back(firstNet[island]);
+            if (here.back() != &net) here.push_back(&net);
         }
     }
+    std::vector<Finding> shorts;
     for (const auto& [island, islandNets] : shorted) {
-        errors.push_back(locateShort(context, island, islandNets));
+        shorts.push_back(locateShort(checked, island, islandNets));
     }
+    return shorts;
 }
 
-void findOpens(const CheckContext& context, const std::vector<PlacedNet>& nets,
-               const std::vector<Finding>& shorts, std::vector<Finding>& errors) {
-    std::vector<const PlacedNet*> open;
-    for (const PlacedNet& net : nets) {
-        if (net.pins.empty()) continue;
-        const int first = net.pins.front().island;
-        const bool split = std::any_of(net.pins.begin(), net.pins.end(),
-                                       [&](const NetPin& pin) { return pin.island != first; });
-        if (split) open.push_back(&net);
+// The opens, one per net whose pins lie in two or more islands, mended on the board as it would
+// be with every short's cut made.
+std::vector<Finding> findOpens(const CheckedBoard& checked, const std::vector<Net>& nets,
+                               const std::vector<Finding>& shorts) {
+    std::vector<const Net*> open;
+    for (const Net& net : nets) {
+        for (const NetPin& pin : net.pins) {
+            if (pin.island != net.pins.front().island) {
+                open.push_back(&net);
+                break;
+            }
+        }
     }
-    if (open.empty()) return;
-    Board repaired = context.board();
+    if (open.empty()) return {};
+    Board repaired = checked.board();
     for (const Finding& finding : shorts) {
         if (finding.suggestedCut) repaired.cuts.push_back(*finding.suggestedCut);
     }
     const Connectivity repairedCopper(repaired);
-    for (const PlacedNet* net : open) {
-        errors.push_back(
-            locateOpen(context, *net, RepairedBoard{&repaired, &repairedCopper, &nets}));
+    std::vector<Finding> opens;
+    for (const Net* net : open) {
+        opens.push_back(locateOpen(checked, *net, RepairedBoard{&repaired, &repairedCopper, &nets}));
     }
+    return opens;
 }
 
-// Islands that hold at least one pin or lug, in id order, with their holes and pins. Islands are
-// numbered in id order before any is filled, and each hole list is sized before it is filled.
-std::vector<Island> pinIslands(const CheckContext& context) {
-    const Board& board = context.board();
-    const Connectivity& copper = context.copper();
+// Islands that hold at least one pin or lug, in id order, with their holes and pins.
+std::vector<Island> pinIslands(const CheckedBoard& checked) {
+    const Board& board = checked.board();
+    const Connectivity& copper = checked.copper();
     std::vector<int> slot(static_cast<std::size_t>(copper.islandCount()), -1);
-    auto slotOf = [&](int node) -> int& {
-        return slot[static_cast<std::size_t>(copper.islandOfNode(node))];
-    };
-    for (const Lead& lead : context.leads()) {
-        if (lead.kind == Lead::Kind::PartPin) slotOf(lead.hole) = 0;
-    }
-    for (std::size_t p = 0; p < board.offboard.size(); ++p) {
-        for (std::size_t k = 0; k < board.offboard[p].pins.size(); ++k) {
-            slotOf(context.lugNode(static_cast<int>(p), static_cast<int>(k))) = 0;
-        }
-    }
     std::vector<Island> islands;
-    islands.reserve(static_cast<std::size_t>(std::count(slot.begin(), slot.end(), 0)));
-    for (std::size_t id = 0; id < slot.size(); ++id) {
-        if (slot[id] < 0) continue;
-        slot[id] = static_cast<int>(islands.size());
-        islands.push_back(Island{static_cast<int>(id), {}, {}});
-    }
-    std::vector<int> holeCount(islands.size(), 0);
-    for (int hole = 0; hole < board.holeCount(); ++hole) {
-        const int at = slotOf(hole);
-        if (at >= 0) ++holeCount[static_cast<std::size_t>(at)];
-    }
-    for (std::size_t i = 0; i < islands.size(); ++i) {
-        islands[i].holes.reserve(static_cast<std::size_t>(holeCount[i]));
-    }
-    for (const Lead& lead : context.leads()) {
+    auto islandOf = [&](int node) -> Island& {
+        int& at = slot[static_cast<std::size_t>(copper.islandOfNode(node))];
+        if (at < 0) {
+            at = static_cast<int>(islands.size());
+            islands.push_back(Island{copper.islandOfNode(node), {}, {}});
+        }
+        return islands[static_cast<std::size_t>(at)];
+    };
+    for (const Lead& lead : checked.leads()) {
         if (lead.kind != Lead::Kind::PartPin) continue;
         const Part& part = board.parts[static_cast<std::size_t>(lead.item)];
-        islands[static_cast<std::size_t>(slotOf(lead.hole))].pins.push_back(
-            PinRef{part.ref, part.pins[static_cast<std::size_t>(lead.sub)].name});
+        islandOf(lead.hole).pins.push_back(PinRef{part.ref, part.pins[static_cast<std::size_t>(lead.sub)].name});
     }
-    for (std::size_t p = 0; p < board.offboard.size(); ++p) {
-        const OffboardPart& part = board.offboard[p];
-        for (std::size_t k = 0; k < part.pins.size(); ++k) {
-            islands[static_cast<std::size_t>(
-                        slotOf(context.lugNode(static_cast<int>(p), static_cast<int>(k))))]
-                .pins.push_back(PinRef{part.ref, part.pins[k]});
-        }
+    int node = board.holeCount();
+    for (const OffboardPart& part : board.offboard) {
+        for (const std::string& lug : part.pins) islandOf(node++).pins.push_back(PinRef{part.ref, lug});
     }
     for (int hole = 0; hole < board.holeCount(); ++hole) {
-        const int at = slotOf(hole);
-        if (at >= 0) islands[static_cast<std::size_t>(at)].holes.push_back(context.holeAt(hole));
+        const int at = slot[static_cast<std::size_t>(copper.islandOfNode(hole))];
+        if (at >= 0) islands[static_cast<std::size_t>(at)].holes.push_back(checked.holeAt(hole));
     }
     for (Island& island : islands) std::sort(island.pins.begin(), island.pins.end());
+    std::sort(islands.begin(), islands.end(), [](const Island& a, const Island& b) { return a.id < b.id; });
     return islands;
+}
+
+CheckReport checkBoard(const CheckedBoard& checked, const Circuit* circuit) {
+    if (circuit == nullptr && checked.board().circuit) circuit = &*checked.board().circuit;
+    CheckReport report;
+    report.hasCircuit = circuit != nullptr;
+    std::vector<char> meantToJoin;
+    if (circuit != nullptr) {
+        CircuitMatch match = matchCircuit(checked, *circuit);
+        report.errors = std::move(match.errors);
+        report.warnings = std::move(match.warnings);
+        const std::vector<Finding> shorts = findShorts(checked, match.nets, meantToJoin);
+        const std::vector<Finding> opens = findOpens(checked, match.nets, shorts);
+        report.errors.insert(report.errors.end(), shorts.begin(), shorts.end());
+        report.errors.insert(report.errors.end(), opens.begin(), opens.end());
+    }
+    findSharedHoles(checked, report.errors);
+    findLeadsOnCuts(checked, report.errors);
+    findDanglingLeads(checked, circuit ? &meantToJoin : nullptr, report.warnings);
+    findBareLinkContacts(checked, report.warnings);
+    findTrim(checked, report.warnings);
+    // With a circuit the findings say everything; the island list is the report of a board alone.
+    if (circuit == nullptr) report.islands = pinIslands(checked);
+    return report;
 }
 
 }  // namespace
 
-// What a Checker keeps between checks.
-struct Checker::Workspace {
-    std::optional<CheckContext> context;
-    MatchMemory matchMemory;
-    CircuitMatch match;
-    std::vector<char> danglingIslands;
-    std::vector<int> firstNetOfIsland;
-};
-
-Checker::Checker() = default;
-Checker::~Checker() = default;
-Checker::Checker(Checker&&) noexcept = default;
-Checker& Checker::operator=(Checker&&) noexcept = default;
-
-const Connectivity& Checker::copper() const { return workspace_->context->copper(); }
-
-CheckReport Checker::check(const Board& board, const Circuit* circuit) {
-    if (circuit == nullptr && board.circuit) circuit = &*board.circuit;
-    if (!workspace_) workspace_ = std::make_unique<Workspace>();
-    Workspace& work = *workspace_;
-    if (work.context) {
-        work.context->reset(board);
-    } else {
-        work.context.emplace(board);
-    }
-    const CheckContext& context = *work.context;
-    CheckReport report;
-    report.hasCircuit = circuit != nullptr;
-    if (circuit != nullptr) {
-        CircuitMatch& match = work.match;
-        matchCircuit(context, *circuit, work.matchMemory, match);
-        report.errors = std::move(match.errors);
-        report.warnings = std::move(match.warnings);
-        std::vector<Finding> shorts;
-        findShorts(context, match.nets, shorts, work.danglingIslands, work.firstNetOfIsland);
-        report.errors.insert(report.errors.end(), shorts.begin(), shorts.end());
-        findOpens(context, match.nets, shorts, report.errors);
-    }
-    findSharedHoles(context, report.errors);
-    findLeadsOnCuts(context, report.errors);
-    findDanglingLeads(context, circuit ? &work.danglingIslands : nullptr, report.warnings);
-    findBareLinkContacts(context, report.warnings);
-    findTrim(context, report.warnings);
-    // With a circuit the findings say everything; the island list is the report of a board alone.
-    if (circuit == nullptr) report.islands = pinIslands(context);
-    return report;
+CheckReport check(const Board& board, const Circuit* circuit) {
+    return checkBoard(CheckedBoard(board), circuit);
 }
 
-CheckReport check(const Board& board, const Circuit* circuit) {
-    return Checker().check(board, circuit);
+CheckReport Checker::check(const Board& board, const Circuit* circuit) {
+    const CheckedBoard checked(board);
+    CheckReport report = checkBoard(checked, circuit);
+    copper_.emplace(checked.copper());
+    return report;
 }
 
 }  // namespace netcheck

@@ -2,22 +2,58 @@
 #pragma once
 
 #include <optional>
+#include <span>
 #include <string>
+#include <string_view>
 #include <vector>
 
-#include "netcheck/model/board.hpp"
 #include "netcheck/check/connectivity.hpp"
+#include "netcheck/model/board.hpp"
 
 namespace netcheck {
 
 enum class Severity { Error, Warning };
 
-/// One thing wrong (or worth a look). `type` is one of: short, open, missing-part, extra-part,
-/// pin-mismatch, value-mismatch, reversed-part, shared-hole, pin-on-cut (errors); value-differs,
-/// pot-reversed, dangling-lead, trim (warnings). Fields not used by a type stay empty.
+/// Every kind of finding. Its id, severity and meaning are in one table (finding_types.cpp),
+/// used by the reports, the editor, the sheet and the README.
+enum class FindingType {
+    Short,
+    Open,
+    MissingPart,
+    ExtraPart,
+    PinMismatch,
+    ValueMismatch,
+    ReversedPart,
+    SharedHole,
+    PinOnCut,
+    ValueDiffers,
+    PotReversed,
+    DanglingLead,
+    LinkOverLead,
+    LinksTouch,
+    LinksUnchecked,
+    Trim,
+};
+
+/// One row of the table of finding types.
+struct FindingTypeInfo {
+    FindingType type;
+    std::string_view id;       ///< as written in reports, e.g. "pin-on-cut"
+    Severity severity;
+    std::string_view meaning;  ///< one line, for the docs and the editor's tooltips
+};
+
+/// The whole table, in report order (errors first).
+std::span<const FindingTypeInfo> findingTypes();
+const FindingTypeInfo& findingTypeInfo(FindingType type);
+/// "short", "pin-on-cut" ...
+std::string_view findingId(FindingType type);
+/// The type of an id; nullopt for an unknown one.
+std::optional<FindingType> findingTypeOfId(std::string_view id);
+
+/// One thing wrong (or worth a look). Fields not used by a type stay empty.
 struct Finding {
-    std::string type;
-    Severity severity = Severity::Error;
+    FindingType type = FindingType::Short;
     std::string message;                      ///< one line, with hole names
     std::string ref;                          ///< part concerned
     std::string net;                          ///< open: the net
@@ -29,6 +65,9 @@ struct Finding {
     std::optional<Cut> suggestedCut;          ///< short: one cut that separates without opening
     std::vector<Link> suggestedLinks;         ///< open: links that join the pieces
     std::string fix;                          ///< the suggested fix in words (may be empty)
+
+    Severity severity() const { return findingTypeInfo(type).severity; }
+    std::string_view id() const { return findingId(type); }
 };
 
 struct CheckReport {

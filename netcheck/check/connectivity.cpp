@@ -1,8 +1,5 @@
-// Tracing the copper. Strips fall into segments (runs of holes joined by copper) at breaks, kept
-// as one bit per hole; a hole's segment is the number of breaks before it, counted from the bits.
-// Only segments, off-board lugs, links and wires go through the union-find, so the tracer does no
-// work per hole at all: its cost follows the cuts, links and wires, and a word of bits per 64
-// holes.
+// Tracing the copper. One pass along the strips numbers the segments (runs of holes that copper
+// joins), then a union-find joins the segments and lugs that links and wires connect.
 #include "netcheck/check/connectivity.hpp"
 
 #include <algorithm>
@@ -13,138 +10,122 @@ namespace netcheck {
 
 namespace {
 
-// Node id of each off-board lug, keyed by its pin reference (sorted).
-void collectLugNodes(const Board& board, std::vector<std::pair<PinRef, int>>& lugs) {
-    lugs.clear();
-    int node = board.holeCount();
-    for (const OffboardPart& part : board.offboard) {
-        for (const std::string& pin : part.pins) lugs.push_back({PinRef{part.ref, pin}, node++});
+// Where copper does not join a hole to the next along its strip: across the board's edge, on pad board,
+// over a cut between them, and on either side of a hole cut (a hole without copper joins neither
+// neighbour).
+std::vector<char> breaksAfter(const Board& board) {
+    std::vector<char> breaks(static_cast<std::size_t>(board.holeCount()),
+                             board.copper == CopperPattern::Pads ? 1 : 0);
+    auto at = [&](int row, int col) { return static_cast<std::size_t>(row * board.cols + col); };
+    for (int row = 0; row < board.rows; ++row) breaks[at(row, board.cols - 1)] = 1;
+    for (const Cut& cut : board.cuts) {
+        if (!board.contains(cut.hole)) continue;
+        breaks[at(cut.hole.row, cut.hole.col)] = 1;
+        if (cut.kind == Cut::Kind::Hole && cut.hole.col > 0)
+            breaks[at(cut.hole.row, cut.hole.col - 1)] = 1;
     }
-    std::stable_sort(lugs.begin(), lugs.end(),
-                     [](const auto& a, const auto& b) { return a.first < b.first; });
-}
-
-int findLug(const std::vector<std::pair<PinRef, int>>& lugs, const PinRef& pin) {
-    auto it = std::lower_bound(lugs.begin(), lugs.end(), pin,
-                               [](const auto& entry, const PinRef& p) { return entry.first < p; });
-    return it != lugs.end() && it->first == pin ? it->second : -1;
+    return breaks;
 }
 
 }  // namespace
 
-Connectivity::Connectivity(const Board& board) {
-    retrace(board);
-}
-
-void Connectivity::retrace(const Board& board) {
-    board_ = &board;
-    holeCount_ = board.holeCount();
-    islandCount_ = 0;
-    collectLugNodes(board, pinNodes_);
-    markBreaks(board);
-    segmentCount_ = breaks_.countAll();
-    const int lugCount = static_cast<int>(pinNodes_.size());
-
-    // Links and wires join segments and lugs.
-    UnionFind& sets = sets_;
-    sets.reset(segmentCount_ + lugCount);
-    auto setOfHole = [&](Hole hole) -> int {
-        return board.contains(hole) ? segmentOf(hole.row * board.cols + hole.col) : -1;
-    };
-    auto setOf = [&](const Endpoint& end) -> int {
-        if (end.isHole()) return setOfHole(*end.hole);
-        const int node = findLug(pinNodes_, end.lug);
-        if (node >= 0) return segmentOf(node);
-        // A wire may also end on the lead of an on-board part: it joins that lead's hole.
-        const Part* part = board.findPart(end.lug.ref);
-        const Pin* pin = part ? part->findPin(end.lug.pin) : nullptr;
-        return pin ? setOfHole(pin->hole) : -1;
-    };
-    for (const Link& link : board.links) {
-        const int a = setOfHole(link.from);
-        const int b = setOfHole(link.to);
-        if (a >= 0 && b >= 0) sets.unite(a, b);
+Connectivity::Connectivity(const Board& board) : board_(&board) {
+    const auto holes = static_cast<std::size_t>(board.holeCount());
+    holeCut_.assign(holes, 0);
+    for (const Cut& cut : board.cuts) {
+        if (cut.kind == Cut::Kind::Hole && board.contains(cut.hole))
+            holeCut_[static_cast<std::size_t>(cut.hole.row * board.cols + cut.hole.col)] = 1;
     }
-    for (const Wire& wire : board.wires) {
-        const int a = setOf(wire.from);
-        const int b = setOf(wire.to);
-        if (a >= 0 && b >= 0) sets.unite(a, b);
+    const std::vector<char> breaks = breaksAfter(board);
+    segmentOfNode_.resize(holes);
+    int segments = 0;
+    for (std::size_t hole = 0; hole < holes; ++hole) {
+        segmentOfNode_[hole] = segments;
+        if (breaks[hole]) ++segments;
+    }
+    for (const OffboardPart& part : board.offboard) {
+        for (const std::string& lug : part.pins) {
+            lugNodes_.emplace(PinRef{part.ref, lug}, static_cast<int>(segmentOfNode_.size()));
+            segmentOfNode_.push_back(segments++);
+        }
     }
 
-    // Dense island ids in order of first node. Segment and lug ids already rise in node order and
-    // a set's root is its smallest member, so a set gets the next id at its root and every later
-    // member takes its root's. A node's island is then its segment's: the table per segment is far
-    // smaller than one per hole, and needs no pass over the holes.
-    const int setCount = segmentCount_ + lugCount;
-    islandOfSegment_.resize(static_cast<std::size_t>(setCount));
-    for (int s = 0; s < setCount; ++s) {
+    UnionFind sets(segments);
+    auto segmentOf = [&](const Endpoint& end) {
+        int node = -1;
+        if (end.isHole()) {
+            node = board.contains(*end.hole) ? end.hole->row * board.cols + end.hole->col : -1;
+        } else if (node = lugNode(end.lug); node < 0) {
+            // A wire may also end on the lead of an on-board part: it joins that lead's hole.
+            const Part* part = board.findPart(end.lug.ref);
+            const Pin* pin = part ? part->findPin(end.lug.pin) : nullptr;
+            if (pin && board.contains(pin->hole)) node = pin->hole.row * board.cols + pin->hole.col;
+        }
+        return node < 0 ? -1 : segmentOfNode_[static_cast<std::size_t>(node)];
+    };
+    auto join = [&](const Endpoint& a, const Endpoint& b) {
+        const int x = segmentOf(a);
+        const int y = segmentOf(b);
+        if (x >= 0 && y >= 0) sets.unite(x, y);
+    };
+    for (const Link& link : board.links) join(Endpoint::atHole(link.from), Endpoint::atHole(link.to));
+    for (const Wire& wire : board.wires) join(wire.from, wire.to);
+
+    // A set's root is its smallest segment, so numbering roots in segment order numbers the
+    // islands in order of their first node.
+    islandOfSegment_.resize(static_cast<std::size_t>(segments));
+    for (int s = 0; s < segments; ++s) {
         const int root = sets.find(s);
         islandOfSegment_[static_cast<std::size_t>(s)] =
             root == s ? islandCount_++ : islandOfSegment_[static_cast<std::size_t>(root)];
     }
 }
 
-// Breaks from the copper pattern and the cuts: the last hole of every strip, every hole of pad
-// board, a cut between two holes, and both sides of a hole cut (a hole without copper joins
-// neither neighbour).
-void Connectivity::markBreaks(const Board& board) {
-    const int cols = board.cols;
-    if (board.copper == CopperPattern::Pads) {
-        breaks_.resetAllSet(holeCount_);
-    } else {
-        breaks_.reset(holeCount_);
-        for (int r = 0; r < board.rows; ++r) breaks_.set(r * cols + cols - 1);
-    }
-    holeCut_.reset(holeCount_);
-    for (const Cut& cut : board.cuts) {
-        if (!board.contains(cut.hole)) continue;
-        const int i = cut.hole.row * cols + cut.hole.col;
-        breaks_.set(i);
-        if (cut.kind == Cut::Kind::Between) continue;
-        holeCut_.set(i);
-        if (cut.hole.col > 0) breaks_.set(i - 1);
-    }
+int Connectivity::islandOfNode(int node) const {
+    if (node < 0 || node >= nodeCount()) return -1;
+    return islandOfSegment_[static_cast<std::size_t>(segmentOfNode_[static_cast<std::size_t>(node)])];
 }
 
 int Connectivity::islandOfHole(Hole hole) const {
-    if (!board_->contains(hole)) return -1;
-    return islandOfNode(hole.row * board_->cols + hole.col);
+    return board_->contains(hole) ? islandOfNode(hole.row * board_->cols + hole.col) : -1;
+}
+
+int Connectivity::lugNode(const PinRef& lug) const {
+    const auto it = lugNodes_.find(lug);
+    return it == lugNodes_.end() ? -1 : it->second;
 }
 
 int Connectivity::islandOfPin(const PinRef& pin) const {
-    const int lug = findLug(pinNodes_, pin);
-    if (lug >= 0) return islandOfNode(lug);
+    if (const int lug = lugNode(pin); lug >= 0) return islandOfNode(lug);
     const Part* part = board_->findPart(pin.ref);
     const Pin* onBoard = part ? part->findPin(pin.pin) : nullptr;
     return onBoard ? islandOfHole(onBoard->hole) : -1;
 }
 
 bool Connectivity::isHoleCut(Hole hole) const {
-    return board_->contains(hole) && holeCut_.test(hole.row * board_->cols + hole.col);
-}
-
-bool Connectivity::isHoleCutAt(int hole) const {
-    return holeCut_.test(hole);
+    return board_->contains(hole) &&
+           holeCut_[static_cast<std::size_t>(hole.row * board_->cols + hole.col)];
 }
 
 bool Connectivity::joinsNext(Hole hole) const {
-    return board_->contains(hole) && !breaks_.test(hole.row * board_->cols + hole.col);
+    if (!board_->contains(hole) || hole.col + 1 >= board_->cols) return false;
+    const auto at = static_cast<std::size_t>(hole.row * board_->cols + hole.col);
+    return segmentOfNode_[at] == segmentOfNode_[at + 1];
 }
 
 Island Connectivity::island(int id) const {
     Island result;
     result.id = id;
     if (id < 0 || id >= islandCount_) return result;
-    const int cols = board_->cols;
-    for (int i = 0; i < holeCount_; ++i) {
-        if (islandOfNode(i) == id) result.holes.push_back(Hole{i / cols, i % cols});
+    for (int i = 0; i < board_->holeCount(); ++i) {
+        if (islandOfNode(i) == id) result.holes.push_back(Hole{i / board_->cols, i % board_->cols});
     }
     for (const Part& part : board_->parts) {
         for (const Pin& pin : part.pins) {
             if (islandOfHole(pin.hole) == id) result.pins.push_back(PinRef{part.ref, pin.name});
         }
     }
-    for (const auto& [lug, node] : pinNodes_) {
+    for (const auto& [lug, node] : lugNodes_) {
         if (islandOfNode(node) == id) result.pins.push_back(lug);
     }
     std::sort(result.pins.begin(), result.pins.end());
@@ -152,20 +133,17 @@ Island Connectivity::island(int id) const {
 }
 
 std::vector<std::vector<PinRef>> boardNets(const Board& board) {
-    const Connectivity connectivity(board);
-    std::vector<std::vector<PinRef>> byIsland(static_cast<std::size_t>(connectivity.islandCount()));
+    const Connectivity copper(board);
+    std::vector<std::vector<PinRef>> byIsland(static_cast<std::size_t>(copper.islandCount()));
+    auto add = [&](int island, PinRef pin) {
+        if (island >= 0) byIsland[static_cast<std::size_t>(island)].push_back(std::move(pin));
+    };
     for (const Part& part : board.parts) {
-        for (const Pin& pin : part.pins) {
-            const int island = connectivity.islandOfHole(pin.hole);
-            if (island >= 0)
-                byIsland[static_cast<std::size_t>(island)].push_back({part.ref, pin.name});
-        }
+        for (const Pin& pin : part.pins) add(copper.islandOfHole(pin.hole), {part.ref, pin.name});
     }
     for (const OffboardPart& part : board.offboard) {
         for (const std::string& lug : part.pins) {
-            const PinRef pin{part.ref, lug};
-            const int island = connectivity.islandOfPin(pin);
-            if (island >= 0) byIsland[static_cast<std::size_t>(island)].push_back(pin);
+            add(copper.islandOfPin({part.ref, lug}), {part.ref, lug});
         }
     }
     std::vector<std::vector<PinRef>> groups;

@@ -12,8 +12,8 @@ std::string plural(std::size_t count, const char* word) {
 }
 
 std::string findingLine(const Finding& finding) {
-    std::string line = (finding.severity == Severity::Error ? "error " : "warning ") +
-                       finding.type + " " + finding.message;
+    std::string line = (finding.severity() == Severity::Error ? "error " : "warning ") +
+                       std::string(finding.id()) + " " + finding.message;
     if (!finding.fix.empty()) line += "; " + finding.fix;
     return line;
 }
@@ -53,15 +53,15 @@ nlohmann::ordered_json holeNames(const std::vector<Hole>& holes) {
 
 nlohmann::ordered_json findingJson(const Finding& finding) {
     nlohmann::ordered_json entry;
-    entry["type"] = finding.type;
+    entry["type"] = finding.id();
     if (!finding.ref.empty()) entry["ref"] = finding.ref;
-    if (finding.type == "short") {
+    if (finding.type == FindingType::Short) {
         entry["nets"] = finding.nets;
         entry["path"] = holeNames(finding.path);
         entry["cut"] = finding.suggestedCut ? nlohmann::ordered_json(cutName(*finding.suggestedCut))
                                             : nlohmann::ordered_json(nullptr);
     }
-    if (finding.type == "open") {
+    if (finding.type == FindingType::Open) {
         entry["net"] = finding.net;
         entry["pieces"] = nlohmann::ordered_json::array();
         for (const auto& piece : finding.pieces) entry["pieces"].push_back(pinNames(piece));

@@ -139,7 +139,7 @@ TEST_CASE("paste") {
 TEST_CASE("finding fixes") {
     netcheck::Board board;
     netcheck::Finding shortFinding;
-    shortFinding.type = "short";
+    shortFinding.type = netcheck::FindingType::Short;
     shortFinding.suggestedCut = netcheck::Cut{{2, 7}, netcheck::Cut::Kind::Hole};
     SUBCASE("a suggested cut becomes an undoable add-cut") {
         auto command = fixCommand(board, shortFinding);
@@ -156,7 +156,7 @@ TEST_CASE("finding fixes") {
     }
     SUBCASE("suggested links become one command") {
         netcheck::Finding open;
-        open.type = "open";
+        open.type = netcheck::FindingType::Open;
         open.suggestedLinks = {{{1, 1}, {3, 1}, false, nlohmann::json::object()}, {{4, 1}, {6, 1}, false, nlohmann::json::object()}};
         auto command = fixCommand(board, open);
         REQUIRE(command);
@@ -167,7 +167,7 @@ TEST_CASE("finding fixes") {
     SUBCASE("a bare link across a lead gets a sleeve") {
         board.links.push_back({{0, 2}, {4, 2}, false, nlohmann::json::object()});
         netcheck::Finding overLead;
-        overLead.type = "link-over-lead";
+        overLead.type = netcheck::FindingType::LinkOverLead;
         overLead.holes = {{0, 2}, {4, 2}, {2, 2}};
         auto command = fixCommand(board, overLead);
         REQUIRE(command);
@@ -178,7 +178,7 @@ TEST_CASE("finding fixes") {
         command->revert(after);
         CHECK(after == board);
         netcheck::Finding noHoles;
-        noHoles.type = "links-touch";
+        noHoles.type = netcheck::FindingType::LinksTouch;
         CHECK_FALSE(fixCommand(board, noHoles));
         board.links[0].insulated = true;  // sleeved already: nothing left to apply
         CHECK_FALSE(fixCommand(board, overLead));

@@ -1,79 +1,80 @@
-// Matching the board's parts to the intended circuit by reference designator: missing, extra and
-// mismatched parts, the orientation of parts that may sit either way round, and reversed parts
-// (private to the checker).
+// Matching the board's parts to the intended circuit by reference designator (private to the
+// checker; the board-versus-circuit view reads it through board_vs_circuit.hpp).
 #pragma once
 
-#include <span>
 #include <string>
 #include <string_view>
-#include <utility>
 #include <vector>
 
-#include "netcheck/check/detail/cache_line_allocator.hpp"
-#include "netcheck/check/detail/check_context.hpp"
 #include "netcheck/check/check_report.hpp"
+#include "netcheck/check/detail/checked_board.hpp"
 #include "netcheck/model/circuit.hpp"
-#include "netcheck/check/detail/part_use.hpp"
-#include "netcheck/check/detail/ref_table.hpp"
 
 namespace netcheck {
 
-/// A pin of an intended net as placed on the board: the circuit's name for it, its node and its
-/// island. The names point into the circuit and the board, which outlive the check.
+/// One pin of a board part as the circuit sees it.
+struct MatchedPin {
+    std::string_view name;   ///< the board's pin name
+    std::string_view meant;  ///< the circuit's name for what sits here (differs when turned round)
+    int node = -1;           ///< -1 for a pin outside the board: it joins nothing
+    int island = -1;
+    int net = -1;  ///< index into CircuitMatch::nets; -1 when the circuit does not care
+};
+
+/// A ref the circuit names, with the board part of that ref when there is one (the first of that
+/// ref, on-board parts before off-board ones).
+struct MatchedPart {
+    std::string_view ref;
+    const Part* part = nullptr;             ///< on the board
+    const OffboardPart* offboard = nullptr;  ///< off the board
+    const CircuitPart* declared = nullptr;   ///< null when the ref appears only in nets
+    std::vector<MatchedPin> pins;            ///< the board part's pins, in its order
+    std::vector<std::string> unknownPins;    ///< pins the circuit uses that the part lacks, sorted
+
+    bool found() const { return part != nullptr || offboard != nullptr; }
+    const std::string& kind() const { return part ? part->kind : offboard->kind; }
+    const std::string& value() const { return part ? part->value : offboard->value; }
+    /// Index of the board pin of that name; -1 when the part has none.
+    int findPin(std::string_view name) const;
+    /// Where pin k is, for messages: "D7" on the board, "VR1.2" off it.
+    std::string place(std::size_t k) const;
+    /// What the circuit expects at two pins is swapped (the part taken as turned round).
+    void swapPins(std::size_t a, std::size_t b);
+};
+
+/// A pin of an intended net as placed on the board, named as the circuit names it.
 struct NetPin {
-    const std::string* ref = nullptr;  // pointers, so making one reads neither name
-    const std::string* pin = nullptr;
+    std::string_view ref;
+    std::string_view pin;
     int node = 0;
     int island = 0;
 
-    PinRef pinRef() const { return PinRef{*ref, *pin}; }
-    std::string name() const { return *ref + "." + *pin; }
-    /// The order of PinRef: by ref, then by pin name.
+    PinRef pinRef() const { return PinRef{std::string(ref), std::string(pin)}; }
+    std::string name() const { return pinRef().name(); }
     bool operator<(const NetPin& other) const {
-        return *ref != *other.ref ? *ref < *other.ref : *pin < *other.pin;
+        return ref != other.ref ? ref < other.ref : pin < other.pin;
     }
 };
 
-/// An intended net with the pins the board actually has (pins of missing parts left out).
-struct PlacedNet {
+/// An intended net with the pins the board has (pins of missing parts, of parts whose pins do
+/// not fit the circuit, and outside the board left out), in ref order.
+struct Net {
     std::string_view name;
-    std::span<const NetPin> pins;  ///< into CircuitMatch::netPins
+    std::vector<NetPin> pins;
 };
 
 struct CircuitMatch {
-    std::vector<Finding> errors;    ///< part findings, by ref
-    std::vector<Finding> warnings;  ///< value-differs, pot-reversed
-    std::vector<PlacedNet> nets;    ///< in circuit order (sorted by name)
-    std::vector<NetPin> netPins;    ///< the pins of every net, net after net
-
-    // The nets point into netPins: moving keeps them valid, a copy would not.
-    CircuitMatch() = default;
-    CircuitMatch(CircuitMatch&&) = default;
-    CircuitMatch& operator=(CircuitMatch&&) = default;
-    CircuitMatch(const CircuitMatch&) = delete;
-    CircuitMatch& operator=(const CircuitMatch&) = delete;
+    std::vector<MatchedPart> parts;  ///< every ref the circuit names, by ref
+    std::vector<Net> nets;           ///< in the circuit's order (by name)
+    std::vector<Finding> errors;     ///< part findings: missing, extra, pins, values, reversed
+    std::vector<Finding> warnings;   ///< value-differs, pot-reversed
 };
 
-/// The matcher's working lists, kept by the caller between checks so that a re-check reuses
-/// their memory (what is in them between calls means nothing).
-struct MatchMemory {
-    RefTable refs;
-    std::vector<PartUse, CacheLineAllocator<PartUse>> uses;
-    std::vector<int> pool;
-    std::vector<int> useOfPart;
-    std::vector<int> useOfOffboard;
-    std::vector<int> order;
-    std::vector<int> slotOfUse;
-    std::vector<int> useInSlot;
-    std::vector<std::pair<std::string_view, std::string_view>> unknownPins;
-    std::vector<char> mentionedPart;
-    std::vector<char> mentionedOffboard;
-    std::vector<std::string_view> netNames;
-    std::vector<std::size_t> netStart;
-};
+/// Matches the board's parts and pins to `circuit`, orients the parts that may sit either way
+/// round, and reports what differs part by part.
+CircuitMatch matchCircuit(const CheckedBoard& checked, const Circuit& circuit);
 
-/// Matches the board's parts and pins to `circuit`, into `match` (whatever it held is replaced).
-void matchCircuit(const CheckContext& context, const Circuit& circuit, MatchMemory& memory,
-                  CircuitMatch& match);
+/// Settles which way round each part sits (see check.cpp) and reports reversed parts and pots.
+void orientParts(const CheckedBoard& checked, CircuitMatch& match);
 
 }  // namespace netcheck

@@ -1,7 +1,7 @@
 // Bare link contacts. Geometry is in hole coordinates (row, col), where hole centres are whole
 // numbers, so the tests that decide a crossing are exact integer arithmetic; only the "how close"
 // test for a lead uses the board's pitch.
-#include "netcheck/check/detail/link_findings.hpp"
+#include "netcheck/check/detail/finders.hpp"
 
 #include <algorithm>
 #include <cmath>
@@ -162,18 +162,14 @@ std::vector<std::pair<int, int>> crossingCandidates(const Board& board,
 }
 
 // The names of the leads in each of `holes` (sorted, each once), in one pass over the leads.
-std::vector<std::string> leadNamesAt(const CheckContext& context, const std::vector<Hole>& holes) {
+std::vector<std::string> leadNamesAt(const CheckedBoard& checked, const std::vector<Hole>& holes) {
     std::vector<std::string> names(holes.size());
-    HoleBits wanted;  // most leads are elsewhere: one bit says so
-    wanted.reset(context.board().holeCount());
-    for (const Hole& hole : holes) wanted.set(context.holeIndex(hole));
-    for (const Lead& lead : context.leads()) {
-        if (!wanted.test(lead.hole)) continue;
-        const Hole at = context.holeAt(lead.hole);
+    for (const Lead& lead : checked.leads()) {
+        const Hole at = checked.holeAt(lead.hole);
         const auto it = std::lower_bound(holes.begin(), holes.end(), at);
         if (it == holes.end() || *it != at) continue;
         std::string& name = names[static_cast<std::size_t>(it - holes.begin())];
-        name += (name.empty() ? "" : ", ") + context.leadName(lead);
+        name += (name.empty() ? "" : ", ") + checked.leadName(lead);
     }
     return names;
 }
@@ -195,10 +191,9 @@ std::string leadsPassedOver(const std::vector<Hole>& under, const std::vector<Ho
     return text;
 }
 
-Finding linkFinding(std::string type, std::string message, std::vector<Hole> holes) {
+Finding linkFinding(FindingType type, std::string message, std::vector<Hole> holes) {
     Finding finding;
-    finding.type = std::move(type);
-    finding.severity = Severity::Warning;
+    finding.type = type;
     finding.message = std::move(message);
     finding.holes = std::move(holes);
     return finding;
@@ -207,26 +202,24 @@ Finding linkFinding(std::string type, std::string message, std::vector<Hole> hol
 // link-over-lead warnings, in link order. One walk along each wire finds the leads under it and
 // the holes two wires pass over (returned sorted, for findCrossings). Most links join
 // neighbouring holes and pass over nothing.
-std::vector<int> findLinksOverLeads(const CheckContext& context, const std::vector<int>& bare,
+std::vector<int> findLinksOverLeads(const CheckedBoard& checked, const std::vector<int>& bare,
                                     double reach, std::vector<Finding>& warnings) {
-    const Board& board = context.board();
+    const Board& board = checked.board();
     std::vector<std::pair<int, std::vector<Hole>>> crossed;  // (link, holes with leads under it)
     std::vector<Hole> named;
     std::vector<int> twice;
-    HoleBits passed;
-    bool anyPassed = false;
+    std::vector<char> passed;
     for (int l : bare) {
         const Link& link = board.links[static_cast<std::size_t>(l)];
         if (std::abs(link.to.row - link.from.row) < 2 && std::abs(link.to.col - link.from.col) < 2)
             continue;
-        if (!anyPassed) passed.reset(board.holeCount());
-        anyPassed = true;
+        passed.resize(static_cast<std::size_t>(board.holeCount()), 0);
         std::vector<Hole> under;
         forEachHoleUnder(link, reach, [&](Hole h) {
-            const int index = context.holeIndex(h);
-            if (context.holdsLead(index)) under.push_back(h);
-            if (passed.test(index)) twice.push_back(index);
-            passed.set(index);
+            const int index = checked.holeIndex(h);
+            if (checked.holdsLead(index)) under.push_back(h);
+            if (passed[static_cast<std::size_t>(index)]) twice.push_back(index);
+            passed[static_cast<std::size_t>(index)] = 1;
         });
         if (under.empty()) continue;
         std::sort(under.begin(), under.end());
@@ -236,7 +229,7 @@ std::vector<int> findLinksOverLeads(const CheckContext& context, const std::vect
     std::sort(named.begin(), named.end());
     named.erase(std::unique(named.begin(), named.end()), named.end());
     const std::vector<std::string> names =
-        named.empty() ? std::vector<std::string>{} : leadNamesAt(context, named);
+        named.empty() ? std::vector<std::string>{} : leadNamesAt(checked, named);
     for (auto& [l, under] : crossed) {
         const Link& link = board.links[static_cast<std::size_t>(l)];
         std::string message = "Bare link " + linkName(link) + " passes over " +
@@ -244,7 +237,7 @@ std::vector<int> findLinksOverLeads(const CheckContext& context, const std::vect
                               (under.size() > 1 ? "those leads" : "that lead");
         std::vector<Hole> holes{link.from, link.to};
         holes.insert(holes.end(), under.begin(), under.end());
-        warnings.push_back(linkFinding("link-over-lead", std::move(message), std::move(holes)));
+        warnings.push_back(linkFinding(FindingType::LinkOverLead, std::move(message), std::move(holes)));
         warnings.back().fix = "sleeve the link or route it round";
     }
     std::sort(twice.begin(), twice.end());
@@ -261,7 +254,7 @@ void findCrossings(const Board& board, const std::vector<int>& bare, bool anyDia
         const Link& first = board.links[static_cast<std::size_t>(i)];
         const Link& second = board.links[static_cast<std::size_t>(j)];
         if (!crossInside(first, second)) continue;
-        warnings.push_back(linkFinding("links-touch",
+        warnings.push_back(linkFinding(FindingType::LinksTouch,
                                        "Bare links " + linkName(first) + " and " +
                                            linkName(second) + " cross " +
                                            crossingPlace(first, second) + ": the wires would touch",
@@ -269,7 +262,7 @@ void findCrossings(const Board& board, const std::vector<int>& bare, bool anyDia
         warnings.back().fix = "sleeve one of them or route it round";
     }
     if (!complete) {
-        warnings.push_back(linkFinding("links-unchecked",
+        warnings.push_back(linkFinding(FindingType::LinksUnchecked,
                                        "Too many bare links cross the same places to check every "
                                        "pair: check by eye where links cross",
                                        {}));
@@ -278,18 +271,18 @@ void findCrossings(const Board& board, const std::vector<int>& bare, bool anyDia
 
 }  // namespace
 
-bool liesClear(const CheckContext& context, const Link& link) {
-    const Board& board = context.board();
+bool liesClear(const CheckedBoard& checked, const Link& link) {
+    const Board& board = checked.board();
     bool clear = true;
     forEachHoleUnder(link, contactReach(board),
-                     [&](Hole h) { clear = clear && !context.holdsLead(context.holeIndex(h)); });
+                     [&](Hole h) { clear = clear && !checked.holdsLead(checked.holeIndex(h)); });
     return clear && std::none_of(board.links.begin(), board.links.end(), [&](const Link& other) {
                return isBare(board, other) && crossInside(link, other);
            });
 }
 
-void findBareLinkContacts(const CheckContext& context, std::vector<Finding>& warnings) {
-    const Board& board = context.board();
+void findBareLinkContacts(const CheckedBoard& checked, std::vector<Finding>& warnings) {
+    const Board& board = checked.board();
     const double reach = contactReach(board);
     std::vector<int> bare;
     bare.reserve(board.links.size());
@@ -306,14 +299,14 @@ void findBareLinkContacts(const CheckContext& context, std::vector<Finding>& war
     }
     if (passes > kPassesPerHole * board.holeCount() + kPassesFloor) {
         warnings.push_back(linkFinding(
-            "links-unchecked",
+            FindingType::LinksUnchecked,
             "Bare links pass over " + std::to_string(passes) +
                 " holes in all, too many to check for leads under them or links crossing: check "
                 "the links by eye",
             {}));
         return;
     }
-    const std::vector<int> twice = findLinksOverLeads(context, bare, reach, warnings);
+    const std::vector<int> twice = findLinksOverLeads(checked, bare, reach, warnings);
     // Axis-parallel wires can only cross on a hole both pass over.
     if (anyDiagonal || !twice.empty())
         findCrossings(board, bare, anyDiagonal, twice, reach, warnings);

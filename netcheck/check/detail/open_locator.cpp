@@ -4,7 +4,7 @@
 // joined, through the nearest pair of free holes (copper present, nothing soldered in) of the two
 // islands whose link would not lie across a lead or a bare link (the nearest pair at all when no
 // pair is clear), on the board with the shorts' suggested cuts applied.
-#include "netcheck/check/detail/open_locator.hpp"
+#include "netcheck/check/detail/finders.hpp"
 
 #include <algorithm>
 #include <cstdlib>
@@ -12,7 +12,7 @@
 #include <map>
 #include <optional>
 
-#include "netcheck/check/detail/link_findings.hpp"
+#include "netcheck/check/detail/finders.hpp"
 
 namespace netcheck {
 
@@ -26,10 +26,10 @@ struct Piece {
     std::vector<int> freeHoles;       // hole indices, ascending
 };
 
-std::vector<Piece> splitIntoPieces(const CheckContext& context, const PlacedNet& net) {
+std::vector<Piece> splitIntoPieces(const CheckedBoard& checked, const Net& net) {
     std::map<int, Piece> byIsland;
     for (const NetPin& pin : net.pins) {
-        const int island = context.copper().islandOfNode(pin.node);
+        const int island = checked.copper().islandOfNode(pin.node);
         Piece& piece = byIsland[island];
         piece.island = island;
         piece.pins.push_back(&pin);
@@ -45,25 +45,25 @@ std::vector<Piece> splitIntoPieces(const CheckContext& context, const PlacedNet&
     return pieces;
 }
 
-void collectFreeHoles(const CheckContext& context, const Connectivity& copper,
+void collectFreeHoles(const CheckedBoard& checked, const Connectivity& copper,
                       std::vector<Piece>& pieces) {
     std::map<int, Piece*> byIsland;
     for (Piece& piece : pieces) byIsland[copper.islandOfNode(piece.pins.front()->node)] = &piece;
-    const int holes = context.board().holeCount();
+    const int holes = checked.board().holeCount();
     for (int hole = 0; hole < holes; ++hole) {
         auto it = byIsland.find(copper.islandOfNode(hole));
-        const bool free = !context.holdsLead(hole) && !copper.isHoleCut(context.holeAt(hole));
+        const bool free = !checked.holdsLead(hole) && !copper.isHoleCut(checked.holeAt(hole));
         if (it != byIsland.end() && free) it->second->freeHoles.push_back(hole);
     }
 }
 
-bool isWhole(const Connectivity& copper, const PlacedNet& net) {
+bool isWhole(const Connectivity& copper, const Net& net) {
     return std::all_of(net.pins.begin(), net.pins.end(), [&](const NetPin& pin) {
         return copper.islandOfNode(pin.node) == copper.islandOfNode(net.pins.front().node);
     });
 }
 
-bool hasShort(const Connectivity& copper, const std::vector<PlacedNet>& nets) {
+bool hasShort(const Connectivity& copper, const std::vector<Net>& nets) {
     std::vector<int> firstNet(static_cast<std::size_t>(copper.islandCount()), -1);
     for (std::size_t n = 0; n < nets.size(); ++n) {
         for (const NetPin& pin : nets[n].pins) {
@@ -76,14 +76,14 @@ bool hasShort(const Connectivity& copper, const std::vector<PlacedNet>& nets) {
 }
 
 // Existing cuts on the rows of the net's pins, nearest to a pin first.
-std::vector<std::size_t> cutsNearNet(const CheckContext& context, const Board& board,
-                                     const PlacedNet& net) {
+std::vector<std::size_t> cutsNearNet(const CheckedBoard& checked, const Board& board,
+                                     const Net& net) {
     std::vector<std::pair<int, std::size_t>> near;
     for (std::size_t c = 0; c < board.cuts.size(); ++c) {
         int best = std::numeric_limits<int>::max();
         for (const NetPin& pin : net.pins) {
-            if (!context.isHoleNode(pin.node)) continue;
-            const Hole hole = context.holeAt(pin.node);
+            if (!checked.isHoleNode(pin.node)) continue;
+            const Hole hole = checked.holeAt(pin.node);
             if (hole.row == board.cuts[c].hole.row) {
                 best = std::min(best, std::abs(hole.col - board.cuts[c].hole.col));
             }
@@ -99,10 +99,10 @@ std::vector<std::size_t> cutsNearNet(const CheckContext& context, const Board& b
 }
 
 // An existing cut whose removal alone mends the net and shorts nothing.
-std::optional<Cut> misplacedCut(const CheckContext& context, const PlacedNet& net,
+std::optional<Cut> misplacedCut(const CheckedBoard& checked, const Net& net,
                                 const RepairedBoard& repaired) {
     Board trial = *repaired.board;
-    for (std::size_t c : cutsNearNet(context, trial, net)) {
+    for (std::size_t c : cutsNearNet(checked, trial, net)) {
         const Cut cut = trial.cuts[c];
         trial.cuts.erase(trial.cuts.begin() + static_cast<std::ptrdiff_t>(c));
         const Connectivity copper(trial);
@@ -131,7 +131,7 @@ constexpr std::size_t kClearTrials = 32;
 
 // The nearest pair of free holes joining a joined piece to one not yet joined, preferring among
 // the nearest few a pair whose link would lie clear (see liesClear).
-Joint nearestJoint(const CheckContext& context, const std::vector<Piece>& pieces,
+Joint nearestJoint(const CheckedBoard& checked, const std::vector<Piece>& pieces,
                    const std::vector<bool>& joined) {
     std::vector<Joint> nearest;  // a max-heap of the kClearTrials nearest pairs met so far
     long found = 0;
@@ -140,9 +140,9 @@ Joint nearestJoint(const CheckContext& context, const std::vector<Piece>& pieces
         for (std::size_t b = 0; b < pieces.size(); ++b) {
             if (joined[b]) continue;
             for (int x : pieces[a].freeHoles) {
-                const Hole hx = context.holeAt(x);
+                const Hole hx = checked.holeAt(x);
                 for (int y : pieces[b].freeHoles) {
-                    const Hole hy = context.holeAt(y);
+                    const Hole hy = checked.holeAt(y);
                     const long dr = hx.row - hy.row;
                     const long dc = hx.col - hy.col;
                     const Joint joint{dr * dr + dc * dc, x, y, b, found++};
@@ -159,33 +159,33 @@ Joint nearestJoint(const CheckContext& context, const std::vector<Piece>& pieces
     }
     std::sort_heap(nearest.begin(), nearest.end());
     for (const Joint& joint : nearest) {
-        if (liesClear(context, Link{context.holeAt(joint.from), context.holeAt(joint.to)}))
+        if (liesClear(checked, Link{checked.holeAt(joint.from), checked.holeAt(joint.to)}))
             return joint;
     }
     return nearest.empty() ? Joint{} : nearest.front();
 }
 
-std::vector<Link> suggestLinks(const CheckContext& context, const std::vector<Piece>& pieces) {
+std::vector<Link> suggestLinks(const CheckedBoard& checked, const std::vector<Piece>& pieces) {
     std::vector<Link> links;
     std::vector<bool> joined(pieces.size(), false);
     joined[0] = true;
     for (std::size_t step = 1; step < pieces.size(); ++step) {
-        const Joint joint = nearestJoint(context, pieces, joined);
+        const Joint joint = nearestJoint(checked, pieces, joined);
         if (joint.from < 0) break;  // the rest have no free hole (lugs only, or every hole used)
         joined[joint.piece] = true;
-        links.push_back(Link{context.holeAt(joint.from), context.holeAt(joint.to)});
+        links.push_back(Link{checked.holeAt(joint.from), checked.holeAt(joint.to)});
     }
     return links;
 }
 
-std::string piecesText(const CheckContext& context, const std::vector<Piece>& pieces) {
+std::string piecesText(const CheckedBoard& checked, const std::vector<Piece>& pieces) {
     std::string text;
     for (const Piece& piece : pieces) {
         if (!text.empty()) text += " | ";
         std::string pins;
         for (const NetPin* pin : piece.pins) {
             pins += (pins.empty() ? "" : ", ") + pin->name();
-            if (context.isHoleNode(pin->node)) pins += " (" + context.nodeName(pin->node) + ")";
+            if (checked.isHoleNode(pin->node)) pins += " (" + checked.nodeName(pin->node) + ")";
         }
         text += pins;
     }
@@ -194,27 +194,27 @@ std::string piecesText(const CheckContext& context, const std::vector<Piece>& pi
 
 }  // namespace
 
-Finding locateOpen(const CheckContext& context, const PlacedNet& net,
+Finding locateOpen(const CheckedBoard& checked, const Net& net,
                    const RepairedBoard& repaired) {
-    std::vector<Piece> pieces = splitIntoPieces(context, net);
+    std::vector<Piece> pieces = splitIntoPieces(checked, net);
     Finding finding;
-    finding.type = "open";
+    finding.type = FindingType::Open;
     finding.net = std::string(net.name);
     for (const Piece& piece : pieces) {
         std::vector<PinRef>& pins = finding.pieces.emplace_back();
         for (const NetPin* pin : piece.pins) {
             pins.push_back(pin->pinRef());
-            if (context.isHoleNode(pin->node)) finding.holes.push_back(context.holeAt(pin->node));
+            if (checked.isHoleNode(pin->node)) finding.holes.push_back(checked.holeAt(pin->node));
         }
     }
     finding.message = std::string(net.name) + " is in " + std::to_string(pieces.size()) +
-                      " pieces: " + piecesText(context, pieces);
-    if (const std::optional<Cut> cut = misplacedCut(context, net, repaired)) {
+                      " pieces: " + piecesText(checked, pieces);
+    if (const std::optional<Cut> cut = misplacedCut(checked, net, repaired)) {
         finding.fix = "remove the cut at " + cutName(*cut);
         return finding;
     }
-    collectFreeHoles(context, *repaired.copper, pieces);
-    finding.suggestedLinks = suggestLinks(context, pieces);
+    collectFreeHoles(checked, *repaired.copper, pieces);
+    finding.suggestedLinks = suggestLinks(checked, pieces);
     for (const Link& link : finding.suggestedLinks) {
         finding.fix += (finding.fix.empty() ? "link " : ", link ") + holeName(link.from) + " to " +
                        holeName(link.to);

@@ -1,13 +1,12 @@
 // Orienting parts against the copper. The score of an orientation is the number of pins of other
 // parts that the copper already joins to each of the part's pins and that belong to the same
 // intended net: the way round that agrees best with the rest of the board is the one meant.
-#include "netcheck/check/detail/part_orientation.hpp"
-
 #include <algorithm>
 #include <array>
 #include <cstdint>
 #include <unordered_map>
 
+#include "netcheck/check/detail/circuit_match.hpp"
 #include "netcheck/model/part_kinds.hpp"
 
 namespace netcheck {
@@ -16,320 +15,249 @@ namespace {
 
 enum class Freedom { Fixed, EndForEnd, PotEnds, Polarised2, Polarised3 };
 
-Freedom freedomOf(const PartUse& use) {
-    if (!use.found() || use.hasUnknownPins) return Freedom::Fixed;
-    const PartKind* kind = use.board.known;
+Freedom freedomOf(const MatchedPart& part) {
+    if (!part.found() || !part.unknownPins.empty()) return Freedom::Fixed;
+    const PartKind* kind = findPartKind(part.kind());
     if (kind == nullptr) return Freedom::Fixed;  // unknown kinds match pin names exactly
     if (kind->name == "pot" || kind->name == "trimmer") {
-        const bool hasLugs =
-            use.findPin("1") >= 0 && use.findPin("2") >= 0 && use.findPin("3") >= 0;
+        const bool hasLugs = part.findPin("1") >= 0 && part.findPin("2") >= 0 && part.findPin("3") >= 0;
         return hasLugs ? Freedom::PotEnds : Freedom::Fixed;
     }
-    if (use.offboard) return Freedom::Fixed;
-    if (use.pinCount() == 2) return kind->polarised ? Freedom::Polarised2 : Freedom::EndForEnd;
-    if (kind->polarised && use.pinCount() == 3 && kind->pins.size() == 3) {
-        return Freedom::Polarised3;
-    }
+    if (part.offboard) return Freedom::Fixed;
+    if (part.pins.size() == 2) return kind->polarised ? Freedom::Polarised2 : Freedom::EndForEnd;
+    if (kind->polarised && part.pins.size() == 3 && kind->pins.size() == 3) return Freedom::Polarised3;
     return Freedom::Fixed;
 }
 
-int islandOf(const PartUse& use, int pin) {
-    return use.islands()[static_cast<std::size_t>(pin)];
-}
-
-// One sortable number for a (net, island) pair.
+// One number for a (net, island) pair.
 std::uint64_t key(int net, int island) {
-    return (static_cast<std::uint64_t>(static_cast<std::uint32_t>(net)) << 32) |
-           static_cast<std::uint32_t>(island);
+    return (std::uint64_t{static_cast<std::uint32_t>(net)} << 32) | static_cast<std::uint32_t>(island);
 }
 
-// How many pins of each intended net sit in each island. Most islands carry one net, so the count
-// lives in a per-island array; only pins of a second net in an island go to a hash map.
+// How many pins of each intended net sit in each island. Pins outside the board and pins the
+// circuit does not care about count nowhere.
 class NetCounts {
 public:
-    NetCounts(int islandCount, std::span<const PartUse> uses, int netCount)
-        : first_(static_cast<std::size_t>(islandCount)),
-          totals_(static_cast<std::size_t>(netCount), 0) {
-        for (const PartUse& use : uses) add(use, +1);
+    explicit NetCounts(const std::vector<MatchedPart>& parts) {
+        for (const MatchedPart& part : parts) add(part, +1);
     }
 
-    void add(const PartUse& use, int delta) {
-        for (int k = 0; k < use.pinCount(); ++k) {
-            const int net = use.net()[static_cast<std::size_t>(k)];
-            if (net < 0) continue;
-            slot(net, islandOf(use, k)) += delta;
-            totals_[static_cast<std::size_t>(net)] += delta;
+    void add(const MatchedPart& part, int delta) {
+        for (const MatchedPin& pin : part.pins) {
+            if (!counts(pin)) continue;
+            count_[key(pin.net, pin.island)] += delta;
+            total_[pin.net] += delta;
         }
     }
 
-    int at(const PartUse& use, int pin) const {
-        const int net = use.net()[static_cast<std::size_t>(pin)];
-        if (net < 0) return 0;
-        const int island = islandOf(use, pin);
-        const First& first = first_[static_cast<std::size_t>(island)];
-        if (first.net == net) return first.count;
-        auto it = others_.find(key(net, island));
-        return it == others_.end() ? 0 : it->second;
-    }
-
-    /// Agreement of the part as presently oriented (its own pins must have been removed).
-    int score(const PartUse& use) const {
+    /// Agreement of the part as it is now oriented (its own pins must have been taken out).
+    int score(const MatchedPart& part) const {
         int total = 0;
-        for (int k = 0; k < use.pinCount(); ++k) total += at(use, k);
+        for (const MatchedPin& pin : part.pins) total += at(pin);
         return total;
     }
 
-    int total(int net) const { return net < 0 ? 0 : totals_[static_cast<std::size_t>(net)]; }
+    int at(const MatchedPin& pin) const {
+        if (!counts(pin)) return 0;
+        const auto it = count_.find(key(pin.net, pin.island));
+        return it == count_.end() ? 0 : it->second;
+    }
+
+    /// Pins of `net` on the board, in any island.
+    int total(int net) const {
+        const auto it = total_.find(net);
+        return it == total_.end() ? 0 : it->second;
+    }
 
 private:
-    int& slot(int net, int island) {
-        First& first = first_[static_cast<std::size_t>(island)];
-        if (first.net < 0) first.net = net;
-        if (first.net == net) return first.count;
-        return others_[key(net, island)];
-    }
-    // The first net seen in an island and its count side by side: one cache line per look.
-    struct First {
-        int net = -1;
-        int count = 0;
-    };
-    std::vector<First> first_;
-    std::unordered_map<std::uint64_t, int> others_;
-    std::vector<int> totals_;
+    static bool counts(const MatchedPin& pin) { return pin.net >= 0 && pin.island >= 0; }
+    std::unordered_map<std::uint64_t, int> count_;
+    std::unordered_map<int, int> total_;
 };
 
-// "Clearly better": the other way round explains at least two joins and more than twice as many
-// as the placement does.
-bool clearlyBetter(int other, int placed) {
-    return other >= 2 && other > 2 * placed;
-}
-
-std::string partLabel(const Board& board, const PartUse& use) {
-    return std::string(use.ref()) + " (" + use.kind(board) + ")";
-}
-
-std::vector<Hole> partHoles(const CheckContext& context, const PartUse& use) {
-    std::vector<Hole> holes;
-    for (int node : use.nodes()) {
-        if (context.isHoleNode(node)) holes.push_back(context.holeAt(node));
-    }
-    return holes;
-}
-
-Finding partFinding(std::string type, Severity severity, const CheckContext& context,
-                    const PartUse& use, std::string message) {
-    Finding finding;
-    finding.type = std::move(type);
-    finding.severity = severity;
-    finding.ref = std::string(use.ref());
-    finding.message = std::move(message);
-    finding.holes = partHoles(context, use);
-    return finding;
-}
-
 // Pins of end-for-end parts counted under both of their nets: a neighbour that could be turned
-// round still says which nets meet in an island. Used only to break ties. The (net, island) keys
-// are kept sorted, so a count is the length of a run of equal keys.
+// round still says which nets meet in an island. Used only to break ties, so built on the first.
 class FlexibleCounts {
 public:
-    void build(std::span<const PartUse> uses, const std::vector<Freedom>& freedom) {
-        for (std::size_t u = 0; u < uses.size(); ++u) {
-            if (freedom[u] != Freedom::EndForEnd) continue;
-            for (int k = 0; k < 2; ++k) {
-                for (int net : uses[u].net()) {
-                    if (net >= 0) keys_.push_back(key(net, islandOf(uses[u], k)));
+    FlexibleCounts(const std::vector<MatchedPart>& parts, const std::vector<Freedom>& freedom)
+        : parts_(parts), freedom_(freedom) {}
+
+    /// Agreement of `part` as oriented, without its own contribution.
+    int score(const MatchedPart& part) {
+        build();
+        int total = 0;
+        for (const MatchedPin& pin : part.pins) {
+            if (pin.net < 0) continue;
+            const auto [first, last] =
+                std::equal_range(keys_.begin(), keys_.end(), key(pin.net, pin.island));
+            if (first == last) continue;
+            const auto own = std::count_if(part.pins.begin(), part.pins.end(),
+                                           [&](const MatchedPin& p) { return p.island == pin.island; });
+            total += static_cast<int>((last - first) - own);
+        }
+        return total;
+    }
+
+private:
+    void build() {
+        if (built_) return;
+        built_ = true;
+        for (std::size_t p = 0; p < parts_.size(); ++p) {
+            if (freedom_[p] != Freedom::EndForEnd) continue;
+            for (const MatchedPin& at : parts_[p].pins) {
+                for (const MatchedPin& of : parts_[p].pins) {
+                    if (of.net >= 0) keys_.push_back(key(of.net, at.island));
                 }
             }
         }
         std::sort(keys_.begin(), keys_.end());
     }
 
-    /// Agreement of `use` as oriented, without its own contribution.
-    int score(const PartUse& use) const {
-        int total = 0;
-        for (int k = 0; k < 2; ++k) {
-            const int net = use.net()[static_cast<std::size_t>(k)];
-            if (net < 0) continue;
-            const auto [first, last] =
-                std::equal_range(keys_.begin(), keys_.end(), key(net, islandOf(use, k)));
-            if (first == last) continue;
-            int own = 0;
-            for (int j = 0; j < 2; ++j) own += islandOf(use, j) == islandOf(use, k) ? 1 : 0;
-            total += static_cast<int>(last - first) - own;
-        }
-        return total;
-    }
-
-private:
-    std::vector<std::uint64_t> keys_;
-};
-
-// The flexible counts are only needed on a tie, so they are built on the first one.
-class LazyFlexibleCounts {
-public:
-    LazyFlexibleCounts(std::span<const PartUse> uses, const std::vector<Freedom>& freedom)
-        : uses_(uses), freedom_(freedom) {}
-    const FlexibleCounts& get() {
-        if (!built_) counts_.build(uses_, freedom_);
-        built_ = true;
-        return counts_;
-    }
-
-private:
-    std::span<const PartUse> uses_;
+    const std::vector<MatchedPart>& parts_;
     const std::vector<Freedom>& freedom_;
-    FlexibleCounts counts_;
+    std::vector<std::uint64_t> keys_;  // sorted: a count is the length of a run of equal keys
     bool built_ = false;
 };
 
-// Returns whether the part was turned round.
-bool chooseEndForEnd(PartUse& use, NetCounts& counts, LazyFlexibleCounts& flexible) {
-    counts.add(use, -1);
-    const int placed = counts.score(use);
-    use.swapPins(0, 1);
-    const int swapped = counts.score(use);
-    bool better = swapped > placed;
-    if (swapped == placed && use.net()[0] != use.net()[1]) {
-        const int swappedFlexible = flexible.get().score(use);
-        use.swapPins(0, 1);
-        better = swappedFlexible > flexible.get().score(use);
-        use.swapPins(0, 1);
+// "Clearly better": the other way round explains at least two joins and more than twice as many
+// as the placement does.
+bool clearlyBetter(int other, int placed) { return other >= 2 && other > 2 * placed; }
+
+std::string partLabel(const MatchedPart& part) {
+    return std::string(part.ref) + " (" + part.kind() + ")";
+}
+
+Finding partFinding(FindingType type, const MatchedPart& part, std::string message) {
+    Finding finding;
+    finding.type = type;
+    finding.ref = std::string(part.ref);
+    finding.message = std::move(message);
+    for (std::size_t k = 0; k < part.pins.size(); ++k) {
+        if (part.part && part.pins[k].node >= 0) finding.holes.push_back(part.part->pins[k].hole);
     }
-    if (!better) use.swapPins(0, 1);  // a full tie keeps the part as written
-    counts.add(use, +1);
+    return finding;
+}
+
+// Returns whether the part was turned round. A full tie keeps the part as written.
+bool chooseEndForEnd(MatchedPart& part, NetCounts& counts, FlexibleCounts& flexible) {
+    counts.add(part, -1);
+    const int placed = counts.score(part);
+    part.swapPins(0, 1);
+    const int swapped = counts.score(part);
+    bool better = swapped > placed;
+    if (swapped == placed && part.pins[0].net != part.pins[1].net) {
+        const int swappedFlexible = flexible.score(part);
+        part.swapPins(0, 1);
+        better = swappedFlexible > flexible.score(part);
+        part.swapPins(0, 1);
+    }
+    if (!better) part.swapPins(0, 1);
+    counts.add(part, +1);
     return better;
 }
 
-void checkPot(const CheckContext& context, PartUse& use, NetCounts& counts,
-              const std::vector<std::string_view>& netNames, std::vector<Finding>& warnings) {
-    const int one = use.findPin("1");
-    const int wiper = use.findPin("2");
-    const int three = use.findPin("3");
-    counts.add(use, -1);
-    const int placed = counts.score(use);
-    const int wiperNet = use.net()[static_cast<std::size_t>(wiper)];
-    const bool wiperRight = counts.at(use, wiper) > 0 || counts.total(wiperNet) == 0;
-    use.swapPins(one, three);
-    const int swapped = counts.score(use);
-    if (swapped > placed && wiperRight) {
-        const int net1 = use.net()[static_cast<std::size_t>(one)];
-        const int net3 = use.net()[static_cast<std::size_t>(three)];
+// Pots whose end lugs agree better swapped, with the wiper agreeing as placed, are taken as
+// swapped: the control works backwards but nothing is shorted.
+void checkPot(MatchedPart& part, NetCounts& counts, const std::vector<Net>& nets,
+              std::vector<Finding>& warnings) {
+    const auto one = static_cast<std::size_t>(part.findPin("1"));
+    const auto wiper = static_cast<std::size_t>(part.findPin("2"));
+    const auto three = static_cast<std::size_t>(part.findPin("3"));
+    counts.add(part, -1);
+    const int placed = counts.score(part);
+    const int wiperNet = part.pins[wiper].net;
+    const bool wiperRight = counts.at(part.pins[wiper]) > 0 || counts.total(wiperNet) == 0;
+    part.swapPins(one, three);
+    if (counts.score(part) > placed && wiperRight) {
         auto netLabel = [&](int net) {
             return net < 0 ? std::string("nothing")
-                           : "net " + std::string(netNames[static_cast<std::size_t>(net)]);
+                           : "net " + std::string(nets[static_cast<std::size_t>(net)].name);
         };
-        warnings.push_back(
-            partFinding("pot-reversed", Severity::Warning, context, use,
-                        partLabel(context.board(), use) +
-                            " end lugs 1 and 3 are swapped against the circuit: " +
-                            context.nodeName(use.nodes()[static_cast<std::size_t>(one)]) +
-                            " is on " + netLabel(net1) + ", " +
-                            context.nodeName(use.nodes()[static_cast<std::size_t>(three)]) +
-                            " on " + netLabel(net3) + " (the control works backwards)"));
+        warnings.push_back(partFinding(
+            FindingType::PotReversed, part,
+            partLabel(part) + " end lugs 1 and 3 are swapped against the circuit: " +
+                part.place(one) + " is on " + netLabel(part.pins[one].net) + ", " +
+                part.place(three) + " on " + netLabel(part.pins[three].net) +
+                " (the control works backwards)"));
     } else {
-        use.swapPins(one, three);
+        part.swapPins(one, three);
     }
-    counts.add(use, +1);
+    counts.add(part, +1);
 }
 
-void checkPolarised2(const CheckContext& context, PartUse& use, NetCounts& counts,
-                     const std::vector<std::string_view>& netNames, std::vector<Finding>& errors) {
-    counts.add(use, -1);
-    const int placed = counts.score(use);
-    use.swapPins(0, 1);
-    const int swapped = counts.score(use);
-    const int netAtFirst = use.net()[0];
-    use.swapPins(0, 1);
-    counts.add(use, +1);
+void checkPolarised2(MatchedPart& part, NetCounts& counts, const std::vector<Net>& nets,
+                     std::vector<Finding>& errors) {
+    counts.add(part, -1);
+    const int placed = counts.score(part);
+    part.swapPins(0, 1);
+    const int swapped = counts.score(part);
+    const int netAtFirst = part.pins[0].net;
+    part.swapPins(0, 1);
+    counts.add(part, +1);
     if (!clearlyBetter(swapped, placed)) return;
     const std::string carries =
-        netAtFirst < 0
-            ? "where the other lead belongs"
-            : "which carries net " + std::string(netNames[static_cast<std::size_t>(netAtFirst)]);
-    errors.push_back(partFinding("reversed-part", Severity::Error, context, use,
-                                 partLabel(context.board(), use) +
-                                     " looks reversed: " + use.pinName(0) + " is in " +
-                                     context.nodeName(use.nodes()[0]) + ", " + carries));
+        netAtFirst < 0 ? "where the other lead belongs"
+                       : "which carries net " + std::string(nets[static_cast<std::size_t>(netAtFirst)].name);
+    errors.push_back(partFinding(FindingType::ReversedPart, part,
+                                 partLabel(part) + " looks reversed: " + std::string(part.pins[0].name) +
+                                     " is in " + part.place(0) + ", " + carries));
 }
 
-std::string pinList(const CheckContext& context, const PartUse& use,
-                    const std::array<int, 3>& order) {
+std::string pinList(const MatchedPart& part, const std::array<std::size_t, 3>& order) {
     std::string text;
-    for (int k = 0; k < 3; ++k) {
-        if (k > 0) text += ", ";
-        text += use.pinName(order[static_cast<std::size_t>(k)]) + " in " +
-                context.nodeName(use.nodes()[static_cast<std::size_t>(k)]);
+    for (std::size_t k = 0; k < 3; ++k) {
+        text += (k > 0 ? ", " : "") + std::string(part.pins[order[k]].name) + " in " + part.place(k);
     }
     return text;
 }
 
-void checkPolarised3(const CheckContext& context, PartUse& use, NetCounts& counts,
-                     std::vector<Finding>& errors) {
-    counts.add(use, -1);
-    const std::array<int, 3> placedNets{use.net()[0], use.net()[1], use.net()[2]};
-    const int placed = counts.score(use);
-    std::array<int, 3> order{0, 1, 2};
-    std::array<int, 3> best = order;
+// Three-pin transistors and regulators: every order of the pins is tried.
+void checkPolarised3(MatchedPart& part, NetCounts& counts, std::vector<Finding>& errors) {
+    counts.add(part, -1);
+    const std::vector<MatchedPin> placedPins = part.pins;
+    const int placed = counts.score(part);
+    std::array<std::size_t, 3> order{0, 1, 2};
+    std::array<std::size_t, 3> best = order;
     int bestScore = placed;
     while (std::next_permutation(order.begin(), order.end())) {
-        for (std::size_t k = 0; k < 3; ++k)
-            use.net()[k] = placedNets[static_cast<std::size_t>(order[k])];
-        const int score = counts.score(use);
-        if (score > bestScore) {
+        for (std::size_t k = 0; k < 3; ++k) part.pins[k].net = placedPins[order[k]].net;
+        if (const int score = counts.score(part); score > bestScore) {
             bestScore = score;
             best = order;
         }
     }
-    std::copy(placedNets.begin(), placedNets.end(), use.net().begin());
-    counts.add(use, +1);
+    part.pins = placedPins;
+    counts.add(part, +1);
     if (!clearlyBetter(bestScore, placed)) return;
-    const std::array<int, 3> asPlaced{0, 1, 2};
-    errors.push_back(partFinding(
-        "reversed-part", Severity::Error, context, use,
-        partLabel(context.board(), use) + " pins look out of order: the copper fits " +
-            pinList(context, use, best) + " (placed: " + pinList(context, use, asPlaced) + ")"));
+    errors.push_back(partFinding(FindingType::ReversedPart, part,
+                                 partLabel(part) + " pins look out of order: the copper fits " +
+                                     pinList(part, best) + " (placed: " + pinList(part, {0, 1, 2}) +
+                                     ")"));
 }
 
 }  // namespace
 
-void orientParts(const CheckContext& context, std::span<PartUse> uses,
-                 const std::vector<std::string_view>& netNames, std::vector<Finding>& errors,
-                 std::vector<Finding>& warnings) {
+void orientParts(const CheckedBoard&, CircuitMatch& match) {
+    std::vector<MatchedPart>& parts = match.parts;
     std::vector<Freedom> freedom;
-    freedom.reserve(uses.size());
-    bool any = false;
-    for (const PartUse& use : uses) {
-        freedom.push_back(freedomOf(use));
-        any = any || freedom.back() != Freedom::Fixed;
-    }
-    if (!any) return;
-    NetCounts counts(context.copper().islandCount(), uses, static_cast<int>(netNames.size()));
-    // Flexible counts do not depend on orientation, so building them late changes nothing.
-    LazyFlexibleCounts flexible(uses, freedom);
-    // Two rounds, so a part flipped in the first round is seen by its neighbours in the second
-    // (when nothing was flipped, the second round would see and decide exactly the same).
+    for (const MatchedPart& part : parts) freedom.push_back(freedomOf(part));
+    if (std::all_of(freedom.begin(), freedom.end(), [](Freedom f) { return f == Freedom::Fixed; }))
+        return;
+    NetCounts counts(parts);
+    FlexibleCounts flexible(parts, freedom);
+    // Two rounds, so a part flipped in the first round is seen by its neighbours in the second.
     bool flipped = true;
     for (int round = 0; round < 2 && flipped; ++round) {
         flipped = false;
-        for (std::size_t u = 0; u < uses.size(); ++u) {
-            if (freedom[u] != Freedom::EndForEnd) continue;
-            flipped = chooseEndForEnd(uses[u], counts, flexible) || flipped;
+        for (std::size_t p = 0; p < parts.size(); ++p) {
+            if (freedom[p] == Freedom::EndForEnd)
+                flipped = chooseEndForEnd(parts[p], counts, flexible) || flipped;
         }
     }
-    for (std::size_t u = 0; u < uses.size(); ++u) {
-        switch (freedom[u]) {
-            case Freedom::PotEnds:
-                checkPot(context, uses[u], counts, netNames, warnings);
-                break;
-            case Freedom::Polarised2:
-                checkPolarised2(context, uses[u], counts, netNames, errors);
-                break;
-            case Freedom::Polarised3:
-                checkPolarised3(context, uses[u], counts, errors);
-                break;
-            default:
-                break;
-        }
+    for (std::size_t p = 0; p < parts.size(); ++p) {
+        if (freedom[p] == Freedom::PotEnds) checkPot(parts[p], counts, match.nets, match.warnings);
+        if (freedom[p] == Freedom::Polarised2) checkPolarised2(parts[p], counts, match.nets, match.errors);
+        if (freedom[p] == Freedom::Polarised3) checkPolarised3(parts[p], counts, match.errors);
     }
 }
 

@@ -2,7 +2,7 @@
 // copper, links and wires), from every pin of the first net to the nearest pin of another net.
 // Cut candidates lie on the path's strip runs; each is tried on a copy of the board and kept only
 // when the two pins fall apart and no net of the island is split.
-#include "netcheck/check/detail/short_locator.hpp"
+#include "netcheck/check/detail/finders.hpp"
 
 #include <algorithm>
 #include <cstdlib>
@@ -23,8 +23,8 @@ struct PinAt {
 
 class IslandGraph {
 public:
-    IslandGraph(const CheckContext& context) : context_(context) {
-        for (auto [a, b] : context.jumpers()) {
+    IslandGraph(const CheckedBoard& checked) : checked_(checked) {
+        for (auto [a, b] : checked.jumpers()) {
             jumpers_[a].push_back(b);
             jumpers_[b].push_back(a);
         }
@@ -32,9 +32,9 @@ public:
 
     template <class Visit>
     void forEachNeighbour(int node, Visit visit) const {
-        if (context_.isHoleNode(node)) {
-            const Hole hole = context_.holeAt(node);
-            const Connectivity& copper = context_.copper();
+        if (checked_.isHoleNode(node)) {
+            const Hole hole = checked_.holeAt(node);
+            const Connectivity& copper = checked_.copper();
             if (hole.col > 0 && copper.joinsNext(Hole{hole.row, hole.col - 1})) visit(node - 1);
             if (copper.joinsNext(hole)) visit(node + 1);
         }
@@ -44,7 +44,7 @@ public:
     }
 
 private:
-    const CheckContext& context_;
+    const CheckedBoard& checked_;
     std::unordered_map<int, std::vector<int>> jumpers_;
 };
 
@@ -103,26 +103,26 @@ bool inLineWithACut(const Board& board, const Cut& cut) {
 // Candidate cuts along the path's strip runs: hole cuts in free holes first (a spot-face cutter in
 // a free hole is the usual practice), then cuts between holes; within each, cuts in line with an
 // existing cut first, then nearest the middle of the path.
-std::vector<Cut> cutCandidates(const CheckContext& context, const std::vector<int>& path) {
+std::vector<Cut> cutCandidates(const CheckedBoard& checked, const std::vector<int>& path) {
     std::vector<std::pair<int, Cut>> holeCuts;
     std::vector<std::pair<int, Cut>> betweenCuts;
     const int middle = static_cast<int>(path.size()) - 1;  // twice the middle index
     auto rank = [&](const Cut& cut, int distance) {
-        return (inLineWithACut(context.board(), cut) ? 0 : 1 << 24) + distance;
+        return (inLineWithACut(checked.board(), cut) ? 0 : 1 << 24) + distance;
     };
     std::set<int> holeCutSeen;
     for (std::size_t i = 0; i + 1 < path.size(); ++i) {
         const int a = path[i];
         const int b = path[i + 1];
-        if (!context.isHoleNode(a) || !context.isHoleNode(b) || std::abs(a - b) != 1) continue;
-        const Hole left = context.holeAt(std::min(a, b));
-        if (context.holeAt(std::max(a, b)).row != left.row) continue;
+        if (!checked.isHoleNode(a) || !checked.isHoleNode(b) || std::abs(a - b) != 1) continue;
+        const Hole left = checked.holeAt(std::min(a, b));
+        if (checked.holeAt(std::max(a, b)).row != left.row) continue;
         const Cut between{left, Cut::Kind::Between};
         betweenCuts.push_back(
             {rank(between, std::abs(static_cast<int>(2 * i + 1) - middle)), between});
         for (std::size_t j : {i, i + 1}) {
-            if (context.isFree(path[j]) && holeCutSeen.insert(path[j]).second) {
-                const Cut holeCut{context.holeAt(path[j]), Cut::Kind::Hole};
+            if (checked.isFree(path[j]) && holeCutSeen.insert(path[j]).second) {
+                const Cut holeCut{checked.holeAt(path[j]), Cut::Kind::Hole};
                 holeCuts.push_back(
                     {rank(holeCut, std::abs(static_cast<int>(2 * j) - middle)), holeCut});
             }
@@ -139,7 +139,7 @@ std::vector<Cut> cutCandidates(const CheckContext& context, const std::vector<in
 
 // True when, after `cut`, the two ends fall apart and every net keeps its island's pins together.
 bool separatesCleanly(const Board& trial, int start, int end,
-                      const std::vector<const PlacedNet*>& nets,
+                      const std::vector<const Net*>& nets,
                       const std::unordered_map<int, std::vector<PinAt>>& pinsAt) {
     const Connectivity copper(trial);
     if (copper.islandOfNode(start) == copper.islandOfNode(end)) return false;
@@ -155,13 +155,13 @@ bool separatesCleanly(const Board& trial, int start, int end,
     return true;
 }
 
-std::optional<Cut> suggestCut(const CheckContext& context, const std::vector<int>& path, int start,
-                              int end, const std::vector<const PlacedNet*>& nets,
+std::optional<Cut> suggestCut(const CheckedBoard& checked, const std::vector<int>& path, int start,
+                              int end, const std::vector<const Net*>& nets,
                               const std::unordered_map<int, std::vector<PinAt>>& pinsAt) {
-    std::vector<Cut> candidates = cutCandidates(context, path);
+    std::vector<Cut> candidates = cutCandidates(checked, path);
     if (candidates.size() > kMaxCutTrials) candidates.resize(kMaxCutTrials);
     if (candidates.empty()) return std::nullopt;
-    Board trial = context.board();
+    Board trial = checked.board();
     for (const Cut& cut : candidates) {
         trial.cuts.push_back(cut);
         const bool good = separatesCleanly(trial, start, end, nets, pinsAt);
@@ -171,9 +171,9 @@ std::optional<Cut> suggestCut(const CheckContext& context, const std::vector<int
     return std::nullopt;
 }
 
-std::string pinText(const CheckContext& context, const PinAt& pin) {
+std::string pinText(const CheckedBoard& checked, const PinAt& pin) {
     const std::string name = pin.pin->name();
-    return context.isHoleNode(pin.pin->node) ? name + " (" + context.nodeName(pin.pin->node) + ")"
+    return checked.isHoleNode(pin.pin->node) ? name + " (" + checked.nodeName(pin.pin->node) + ")"
                                              : name + " (off board)";
 }
 
@@ -184,15 +184,15 @@ const PinAt& pinOfNet(const std::vector<PinAt>& pins, bool firstNet) {
     return pins.front();
 }
 
-std::string routeText(const CheckContext& context, const std::vector<int>& path) {
+std::string routeText(const CheckedBoard& checked, const std::vector<int>& path) {
     std::set<int> rows;
     bool jumps = false;
     for (std::size_t i = 0; i < path.size(); ++i) {
-        if (!context.isHoleNode(path[i])) {
+        if (!checked.isHoleNode(path[i])) {
             jumps = true;
             continue;
         }
-        rows.insert(context.holeAt(path[i]).row);
+        rows.insert(checked.holeAt(path[i]).row);
         if (i > 0 && std::abs(path[i] - path[i - 1]) != 1) jumps = true;
     }
     std::string strips;
@@ -210,13 +210,13 @@ std::string cutFix(const Cut& cut) {
 
 }  // namespace
 
-Finding locateShort(const CheckContext& context, int island,
-                    const std::vector<const PlacedNet*>& nets) {
+Finding locateShort(const CheckedBoard& checked, int island,
+                    const std::vector<const Net*>& nets) {
     Finding finding;
-    finding.type = "short";
-    for (const PlacedNet* net : nets) finding.nets.emplace_back(net->name);
+    finding.type = FindingType::Short;
+    for (const Net* net : nets) finding.nets.emplace_back(net->name);
     std::unordered_map<int, std::vector<PinAt>> pinsAt;
-    const Connectivity& copper = context.copper();
+    const Connectivity& copper = checked.copper();
     for (std::size_t n = 0; n < nets.size(); ++n) {
         for (const NetPin& pin : nets[n]->pins) {
             if (copper.islandOfNode(pin.node) == island) {
@@ -224,14 +224,14 @@ Finding locateShort(const CheckContext& context, int island,
             }
         }
     }
-    const IslandGraph graph(context);
+    const IslandGraph graph(checked);
     int start = -1;
     int end = -1;
     const std::vector<int> path = shortestPath(graph, pinsAt, start, end);
     std::string names;
     for (const std::string& name : finding.nets) names += (names.empty() ? "" : ", ") + name;
     for (int node : path) {
-        if (context.isHoleNode(node)) finding.path.push_back(context.holeAt(node));
+        if (checked.isHoleNode(node)) finding.path.push_back(checked.holeAt(node));
     }
     finding.holes = finding.path;
     if (path.empty()) {
@@ -240,9 +240,9 @@ Finding locateShort(const CheckContext& context, int island,
     }
     const PinAt& from = pinOfNet(pinsAt.at(start), true);
     const PinAt& to = pinOfNet(pinsAt.at(end), false);
-    finding.message = names + ": " + (start == end ? "one hole holds " : routeText(context, path)) +
-                      pinText(context, from) + " and " + pinText(context, to);
-    finding.suggestedCut = suggestCut(context, path, start, end, nets, pinsAt);
+    finding.message = names + ": " + (start == end ? "one hole holds " : routeText(checked, path)) +
+                      pinText(checked, from) + " and " + pinText(checked, to);
+    finding.suggestedCut = suggestCut(checked, path, start, end, nets, pinsAt);
     finding.fix = finding.suggestedCut ? cutFix(*finding.suggestedCut)
                                        : std::string("no single cut separates them");
     return finding;

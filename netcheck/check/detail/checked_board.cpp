@@ -1,0 +1,80 @@
+#include "netcheck/check/detail/checked_board.hpp"
+
+namespace netcheck {
+
+CheckedBoard::CheckedBoard(const Board& board)
+    : board_(&board), copper_(board), leadsInHole_(static_cast<std::size_t>(board.holeCount()), 0) {
+    auto add = [&](Lead::Kind kind, std::size_t item, int sub, Hole hole) {
+        if (!board.contains(hole)) return;
+        const int index = holeIndex(hole);
+        leads_.push_back(Lead{kind, static_cast<int>(item), sub, index, copper_.islandOfNode(index)});
+        ++leadsInHole_[static_cast<std::size_t>(index)];
+    };
+    for (std::size_t p = 0; p < board.parts.size(); ++p) {
+        const std::vector<Pin>& pins = board.parts[p].pins;
+        for (std::size_t k = 0; k < pins.size(); ++k) {
+            add(Lead::Kind::PartPin, p, static_cast<int>(k), pins[k].hole);
+        }
+    }
+    for (std::size_t l = 0; l < board.links.size(); ++l) {
+        add(Lead::Kind::LinkEnd, l, 0, board.links[l].from);
+        add(Lead::Kind::LinkEnd, l, 1, board.links[l].to);
+    }
+    for (std::size_t w = 0; w < board.wires.size(); ++w) {
+        const Wire& wire = board.wires[w];
+        if (wire.from.isHole()) add(Lead::Kind::WireEnd, w, 0, *wire.from.hole);
+        if (wire.to.isHole()) add(Lead::Kind::WireEnd, w, 1, *wire.to.hole);
+    }
+}
+
+int CheckedBoard::endpointNode(const Endpoint& end) const {
+    if (end.isHole()) return board_->contains(*end.hole) ? holeIndex(*end.hole) : -1;
+    if (const int lug = copper_.lugNode(end.lug); lug >= 0) return lug;
+    const Part* part = board_->findPart(end.lug.ref);
+    const Pin* pin = part ? part->findPin(end.lug.pin) : nullptr;
+    return pin && board_->contains(pin->hole) ? holeIndex(pin->hole) : -1;
+}
+
+std::vector<std::pair<int, int>> CheckedBoard::jumpers() const {
+    std::vector<std::pair<int, int>> edges;
+    auto add = [&](int a, int b) {
+        if (a >= 0 && b >= 0) edges.emplace_back(a, b);
+    };
+    for (const Link& link : board_->links) {
+        add(endpointNode(Endpoint::atHole(link.from)), endpointNode(Endpoint::atHole(link.to)));
+    }
+    for (const Wire& wire : board_->wires) add(endpointNode(wire.from), endpointNode(wire.to));
+    return edges;
+}
+
+std::string CheckedBoard::nodeName(int node) const {
+    if (isHoleNode(node)) return holeName(holeAt(node));
+    int lug = board_->holeCount();
+    for (const OffboardPart& part : board_->offboard) {
+        for (const std::string& pin : part.pins) {
+            if (lug++ == node) return part.ref + "." + pin;
+        }
+    }
+    return "?";
+}
+
+std::string CheckedBoard::leadName(const Lead& lead) const {
+    const auto item = static_cast<std::size_t>(lead.item);
+    switch (lead.kind) {
+        case Lead::Kind::PartPin: {
+            const Part& part = board_->parts[item];
+            return part.ref + "." + part.pins[static_cast<std::size_t>(lead.sub)].name;
+        }
+        case Lead::Kind::LinkEnd:
+            return "link " + linkName(board_->links[item]);
+        case Lead::Kind::WireEnd: {
+            const Wire& wire = board_->wires[item];
+            const Endpoint& other = lead.sub == 0 ? wire.to : wire.from;
+            const std::string colour = wire.color.empty() ? "" : wire.color + " ";
+            return colour + "wire to " + other.name();
+        }
+    }
+    return "?";
+}
+
+}  // namespace netcheck
