@@ -281,6 +281,22 @@ TEST_CASE("check") {
         REQUIRE(ofType(report.warnings, "pot-reversed").size() == 1);
     }
 
+    SUBCASE("regression: a pin outside the board joins nothing (it once indexed island -1)") {
+        // Only a board made in code can hold such a pin: the file reader refuses it. The check
+        // must neither read outside its tables (AddressSanitizer in .ci/sanitize) nor place the
+        // pin on any net: R2.2 at C99 is off a 3 x 8 board, so OUT has no pin on the board and
+        // R2 (a resistor, free to turn) is not moved onto it.
+        Board board = seriesPair();
+        board.parts[1].pins[1].hole = Hole{2, 98};
+        board.parts[0].pins[0].hole = Hole{-1, 1};
+        const CheckReport report = check(board);
+        CHECK(ofType(report.errors, "short").empty());
+        CHECK(ofType(report.errors, "open").empty());
+        CHECK(ofType(report.errors, "reversed-part").empty());
+        CHECK(report.errors.empty());
+        CHECK(formatReportText(check(board), board) == formatReportText(report, board));
+    }
+
     SUBCASE("deterministic: the same board gives the same report") {
         std::mt19937 rng(99);
         for (int i = 0; i < 200; ++i) {

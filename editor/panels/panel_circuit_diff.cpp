@@ -1,11 +1,16 @@
-// The Circuit panel's comparison: each net of the circuit beside the pins the board joins.
+// The Circuit panel's comparison: each net of the circuit beside the pins the board joins, as the
+// check sees them.
 #include <imgui.h>
 
-#include "editor/panels/circuit_diff.hpp"
 #include "editor/panels/circuit_panel_views.hpp"
+#include "netcheck/check/board_vs_circuit.hpp"
 
 namespace stripsmith {
 namespace {
+
+using netcheck::CircuitDifference;
+using netcheck::NetDifference;
+using netcheck::PartDifference;
 
 const ImVec4 kBad{1.0f, 0.5f, 0.45f, 1.0f};
 const ImVec4 kGood{0.45f, 0.9f, 0.55f, 1.0f};
@@ -53,7 +58,7 @@ void netRows(const CircuitDifference& diff, bool onlyDifferent) {
 
 void drawCircuitDifference(EditorApp& app) {
     // Computed per frame: a board of a few hundred pins takes well under a millisecond.
-    const CircuitDifference diff = compareBoardWithCircuit(app.doc.board());
+    const CircuitDifference diff = netcheck::compareBoardWithCircuit(app.doc.board());
     if (diff.same()) ImGui::TextColored(kGood, "The board joins exactly what the circuit says.");
     if (!diff.partsOnlyOnBoard.empty())
         ImGui::TextColored(kBad, "On the board only: %s", refList(diff.partsOnlyOnBoard).c_str());
