@@ -1,5 +1,6 @@
 // Tracing the copper. One pass along the strips numbers the segments (runs of holes that copper
-// joins), then a union-find joins the segments and lugs that links and wires connect.
+// joins; each lug is a segment of its own), a union-find joins the segments that links and wires
+// connect, and a last pass gives each node its island.
 #include "netcheck/check/connectivity.hpp"
 
 #include <algorithm>
@@ -36,17 +37,17 @@ Connectivity::Connectivity(const Board& board) : board_(&board) {
         if (cut.kind == Cut::Kind::Hole && board.contains(cut.hole))
             holeCut_[static_cast<std::size_t>(cut.hole.row * board.cols + cut.hole.col)] = 1;
     }
-    const std::vector<char> breaks = breaksAfter(board);
-    segmentOfNode_.resize(holes);
+    breakAfter_ = breaksAfter(board);
+    std::vector<int> segmentOfNode(holes);
     int segments = 0;
     for (std::size_t hole = 0; hole < holes; ++hole) {
-        segmentOfNode_[hole] = segments;
-        if (breaks[hole]) ++segments;
+        segmentOfNode[hole] = segments;
+        if (breakAfter_[hole]) ++segments;
     }
     for (const OffboardPart& part : board.offboard) {
         for (const std::string& lug : part.pins) {
-            lugNodes_.emplace(PinRef{part.ref, lug}, static_cast<int>(segmentOfNode_.size()));
-            segmentOfNode_.push_back(segments++);
+            lugNodes_.emplace(PinRef{part.ref, lug}, static_cast<int>(segmentOfNode.size()));
+            segmentOfNode.push_back(segments++);
         }
     }
 
@@ -61,7 +62,7 @@ Connectivity::Connectivity(const Board& board) : board_(&board) {
             const Pin* pin = part ? part->findPin(end.lug.pin) : nullptr;
             if (pin && board.contains(pin->hole)) node = pin->hole.row * board.cols + pin->hole.col;
         }
-        return node < 0 ? -1 : segmentOfNode_[static_cast<std::size_t>(node)];
+        return node < 0 ? -1 : segmentOfNode[static_cast<std::size_t>(node)];
     };
     auto join = [&](const Endpoint& a, const Endpoint& b) {
         const int x = segmentOf(a);
@@ -73,17 +74,21 @@ Connectivity::Connectivity(const Board& board) : board_(&board) {
 
     // A set's root is its smallest segment, so numbering roots in segment order numbers the
     // islands in order of their first node.
-    islandOfSegment_.resize(static_cast<std::size_t>(segments));
+    std::vector<int> islandOfSegment(static_cast<std::size_t>(segments));
     for (int s = 0; s < segments; ++s) {
         const int root = sets.find(s);
-        islandOfSegment_[static_cast<std::size_t>(s)] =
-            root == s ? islandCount_++ : islandOfSegment_[static_cast<std::size_t>(root)];
+        islandOfSegment[static_cast<std::size_t>(s)] =
+            root == s ? islandCount_++ : islandOfSegment[static_cast<std::size_t>(root)];
+    }
+    islandOfNode_.resize(segmentOfNode.size());
+    for (std::size_t node = 0; node < segmentOfNode.size(); ++node) {
+        islandOfNode_[node] = islandOfSegment[static_cast<std::size_t>(segmentOfNode[node])];
     }
 }
 
 int Connectivity::islandOfNode(int node) const {
     if (node < 0 || node >= nodeCount()) return -1;
-    return islandOfSegment_[static_cast<std::size_t>(segmentOfNode_[static_cast<std::size_t>(node)])];
+    return islandOfNode_[static_cast<std::size_t>(node)];
 }
 
 int Connectivity::islandOfHole(Hole hole) const {
@@ -109,8 +114,7 @@ bool Connectivity::isHoleCut(Hole hole) const {
 
 bool Connectivity::joinsNext(Hole hole) const {
     if (!board_->contains(hole) || hole.col + 1 >= board_->cols) return false;
-    const auto at = static_cast<std::size_t>(hole.row * board_->cols + hole.col);
-    return segmentOfNode_[at] == segmentOfNode_[at + 1];
+    return !breakAfter_[static_cast<std::size_t>(hole.row * board_->cols + hole.col)];
 }
 
 Island Connectivity::island(int id) const {

@@ -24,7 +24,7 @@ public:
     explicit Connectivity(const Board& board);
 
     int islandCount() const { return islandCount_; }
-    int nodeCount() const { return static_cast<int>(segmentOfNode_.size()); }
+    int nodeCount() const { return static_cast<int>(islandOfNode_.size()); }
     /// Island of a node; -1 when out of range.
     int islandOfNode(int node) const;
     /// Island of a hole; -1 outside the board.
@@ -43,10 +43,8 @@ public:
 
 private:
     const Board* board_;
-    // A strip segment is a run of holes joined by copper; each lug is a segment of its own.
-    // Links and wires join segments into islands.
-    std::vector<int> segmentOfNode_;
-    std::vector<int> islandOfSegment_;
+    std::vector<int> islandOfNode_;
+    std::vector<char> breakAfter_;  // by hole: no copper to the next hole along the strip
     std::vector<char> holeCut_;
     std::map<PinRef, int> lugNodes_;
     int islandCount_ = 0;

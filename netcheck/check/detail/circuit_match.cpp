@@ -58,6 +58,7 @@ Finding placedPartFinding(FindingType type, const MatchedPart& part, const std::
 // The ref's part as placed: its pins with their nodes and islands, no net yet.
 void placePart(const CheckedBoard& checked, MatchedPart& matched) {
     const Connectivity& copper = checked.copper();
+    matched.pins.reserve(matched.part ? matched.part->pins.size() : matched.offboard->pins.size());
     if (matched.part) {
         for (const Pin& pin : matched.part->pins) {
             const bool on = checked.board().contains(pin.hole);
@@ -77,17 +78,19 @@ public:
     Matcher(const CheckedBoard& checked, const Circuit& circuit)
         : checked_(checked), circuit_(circuit) {
         const Board& board = checked.board();
-        boardPart_.reserve(board.parts.size() + board.offboard.size());
-        for (const Part& part : board.parts) boardPart_.emplace(part.ref, BoardPart{&part, nullptr});
-        for (const OffboardPart& part : board.offboard)
-            boardPart_.emplace(part.ref, BoardPart{nullptr, &part});
+        refs_.reserve(board.parts.size() + board.offboard.size() + circuit.parts.size());
+        match_.parts.reserve(circuit.parts.size());
+        for (const Part& part : board.parts) refs_.emplace(part.ref, Ref{&part, nullptr});
+        for (const OffboardPart& part : board.offboard) refs_.emplace(part.ref, Ref{nullptr, &part});
     }
 
     CircuitMatch run() {
-        for (const auto& [ref, part] : circuit_.parts) named(ref).declared = &part;
+        for (const auto& [ref, part] : circuit_.parts) partNamed(ref).declared = &part;
         for (const auto& [name, pins] : circuit_.nets) assignNet(name, pins);
-        std::sort(match_.parts.begin(), match_.parts.end(),
-                  [](const MatchedPart& a, const MatchedPart& b) { return a.ref < b.ref; });
+        // Declared parts come in ref order; refs that only the nets name were added after them.
+        auto byRef = [](const MatchedPart& a, const MatchedPart& b) { return a.ref < b.ref; };
+        if (!std::is_sorted(match_.parts.begin(), match_.parts.end(), byRef))
+            std::stable_sort(match_.parts.begin(), match_.parts.end(), byRef);
         for (MatchedPart& part : match_.parts) {
             std::sort(part.unknownPins.begin(), part.unknownPins.end());
             part.unknownPins.erase(std::unique(part.unknownPins.begin(), part.unknownPins.end()),
@@ -101,30 +104,35 @@ public:
     }
 
 private:
-    struct BoardPart {
-        const Part* part;
-        const OffboardPart* offboard;
+    // What a ref names: the first board part of that ref, and its place in match_.parts once
+    // the circuit has named it.
+    struct Ref {
+        const Part* part = nullptr;
+        const OffboardPart* offboard = nullptr;
+        std::size_t matched = kNotNamed;
     };
+    static constexpr std::size_t kNotNamed = ~std::size_t{0};
 
-    MatchedPart& named(std::string_view ref) {
-        const auto [it, added] = partOfRef_.emplace(ref, match_.parts.size());
-        if (!added) return match_.parts[it->second];
+    MatchedPart& partNamed(std::string_view ref) {
+        Ref& named = refs_[ref];
+        if (named.matched != kNotNamed) return match_.parts[named.matched];
+        named.matched = match_.parts.size();
         MatchedPart& matched = match_.parts.emplace_back();
         matched.ref = ref;
-        if (const auto board = boardPart_.find(ref); board != boardPart_.end()) {
-            matched.part = board->second.part;
-            matched.offboard = board->second.offboard;
-            placePart(checked_, matched);
-        }
+        matched.part = named.part;
+        matched.offboard = named.offboard;
+        if (matched.found()) placePart(checked_, matched);
         return matched;
     }
+
+    bool isNamed(std::string_view ref) const { return refs_.at(ref).matched != kNotNamed; }
 
     // Puts the net on each board pin it names (a pin named by two nets keeps the first).
     void assignNet(std::string_view name, const std::vector<PinRef>& pins) {
         const int net = static_cast<int>(match_.nets.size());
         match_.nets.push_back(Net{name, {}});
         for (const PinRef& pin : pins) {
-            MatchedPart& part = named(pin.ref);
+            MatchedPart& part = partNamed(pin.ref);
             if (!part.found()) continue;
             const int k = part.findPin(pin.pin);
             if (k < 0) {
@@ -153,7 +161,7 @@ private:
         const Board& board = checked_.board();
         std::vector<Finding> extra;
         for (const Part& part : board.parts) {
-            if (partOfRef_.count(part.ref)) continue;
+            if (isNamed(part.ref)) continue;
             Finding finding = partFinding(FindingType::ExtraPart, part.ref, "");
             std::vector<std::string> holes;
             for (const Pin& pin : part.pins) {
@@ -165,7 +173,7 @@ private:
             extra.push_back(std::move(finding));
         }
         for (const OffboardPart& part : board.offboard) {
-            if (partOfRef_.count(part.ref)) continue;
+            if (isNamed(part.ref)) continue;
             extra.push_back(partFinding(
                 FindingType::ExtraPart, part.ref,
                 part.ref + " (" + part.kind + ", off the board) is wired up but not in the circuit"));
@@ -219,13 +227,19 @@ private:
 
     const CheckedBoard& checked_;
     const Circuit& circuit_;
-    std::unordered_map<std::string_view, BoardPart> boardPart_;  // the first part of each ref
-    std::unordered_map<std::string_view, std::size_t> partOfRef_;  // into match_.parts
+    std::unordered_map<std::string_view, Ref> refs_;  // match_.parts indices hold until sorted
     CircuitMatch match_;
 };
 
 // The pins of every net, in ref order, each part's pins in board order.
 void placeNets(CircuitMatch& match) {
+    std::vector<std::size_t> pinsOfNet(match.nets.size(), 0);
+    for (const MatchedPart& part : match.parts) {
+        for (const MatchedPin& pin : part.pins) {
+            if (pin.net >= 0) ++pinsOfNet[static_cast<std::size_t>(pin.net)];
+        }
+    }
+    for (std::size_t n = 0; n < match.nets.size(); ++n) match.nets[n].pins.reserve(pinsOfNet[n]);
     for (const MatchedPart& part : match.parts) {
         if (!part.found() || !part.unknownPins.empty()) continue;
         for (const MatchedPin& pin : part.pins) {

@@ -4,7 +4,7 @@
 #include <algorithm>
 #include <array>
 #include <cstdint>
-#include <unordered_map>
+#include <map>
 
 #include "netcheck/check/detail/circuit_match.hpp"
 #include "netcheck/model/part_kinds.hpp"
@@ -35,18 +35,22 @@ std::uint64_t key(int net, int island) {
 }
 
 // How many pins of each intended net sit in each island. Pins outside the board and pins the
-// circuit does not care about count nowhere.
+// circuit does not care about count nowhere. Most islands carry one net, so its count lives in
+// a plain array by island; only where nets meet (a short) do counts go to a map.
 class NetCounts {
 public:
-    explicit NetCounts(const std::vector<MatchedPart>& parts) {
+    NetCounts(const std::vector<MatchedPart>& parts, int islands, std::size_t nets)
+        : first_(static_cast<std::size_t>(islands)), total_(nets, 0) {
         for (const MatchedPart& part : parts) add(part, +1);
     }
 
     void add(const MatchedPart& part, int delta) {
         for (const MatchedPin& pin : part.pins) {
             if (!counts(pin)) continue;
-            count_[key(pin.net, pin.island)] += delta;
-            total_[pin.net] += delta;
+            NetCount& first = first_[static_cast<std::size_t>(pin.island)];
+            if (first.net < 0) first.net = pin.net;
+            (first.net == pin.net ? first.count : others_[{pin.island, pin.net}]) += delta;
+            total_[static_cast<std::size_t>(pin.net)] += delta;
         }
     }
 
@@ -59,20 +63,24 @@ public:
 
     int at(const MatchedPin& pin) const {
         if (!counts(pin)) return 0;
-        const auto it = count_.find(key(pin.net, pin.island));
-        return it == count_.end() ? 0 : it->second;
+        const NetCount& first = first_[static_cast<std::size_t>(pin.island)];
+        if (first.net == pin.net) return first.count;
+        const auto it = others_.find({pin.island, pin.net});
+        return it == others_.end() ? 0 : it->second;
     }
 
     /// Pins of `net` on the board, in any island.
-    int total(int net) const {
-        const auto it = total_.find(net);
-        return it == total_.end() ? 0 : it->second;
-    }
+    int total(int net) const { return net < 0 ? 0 : total_[static_cast<std::size_t>(net)]; }
 
 private:
+    struct NetCount {
+        int net = -1;
+        int count = 0;
+    };
     static bool counts(const MatchedPin& pin) { return pin.net >= 0 && pin.island >= 0; }
-    std::unordered_map<std::uint64_t, int> count_;
-    std::unordered_map<int, int> total_;
+    std::vector<NetCount> first_;                  // by island: the first net seen there
+    std::map<std::pair<int, int>, int> others_;  // (island, net) for the other nets
+    std::vector<int> total_;                       // by net
 };
 
 // Pins of end-for-end parts counted under both of their nets: a neighbour that could be turned
@@ -237,13 +245,13 @@ void checkPolarised3(MatchedPart& part, NetCounts& counts, std::vector<Finding>&
 
 }  // namespace
 
-void orientParts(const CheckedBoard&, CircuitMatch& match) {
+void orientParts(const CheckedBoard& checked, CircuitMatch& match) {
     std::vector<MatchedPart>& parts = match.parts;
     std::vector<Freedom> freedom;
     for (const MatchedPart& part : parts) freedom.push_back(freedomOf(part));
     if (std::all_of(freedom.begin(), freedom.end(), [](Freedom f) { return f == Freedom::Fixed; }))
         return;
-    NetCounts counts(parts);
+    NetCounts counts(parts, checked.copper().islandCount(), match.nets.size());
     FlexibleCounts flexible(parts, freedom);
     // Two rounds, so a part flipped in the first round is seen by its neighbours in the second.
     bool flipped = true;
