@@ -1,27 +1,15 @@
-// The parts of the Circuit panel, one file each; drawCircuitPanel (panel_circuit.cpp) puts them in
-// tabs. Private to the panel.
+// The Circuit panel's "Board against circuit" view, still written against the whole editor. The
+// panel reaches it only through CircuitPanelContext::drawComparison (set in editor/frame.cpp), so
+// nothing else in the panels depends on EditorApp. When the comparison comes from the core, it
+// should take the board and CircuitPanelState, move to circuit_views.hpp, and this file go.
 #pragma once
 
-#include <string>
-
 #include "editor/app/editor_app.hpp"
-#include "netcheck/edit/circuit_edits.hpp"
+#include "editor/panels/circuit_views.hpp"
 
 namespace stripsmith {
 
-/// Performs an edit as one SetCircuit command labelled `label`, or shows why it was refused.
-void applyCircuitEdit(EditorApp& app, const netcheck::CircuitEdit& edit, const std::string& label);
-
-/// Parts with kind, value and pins; add, edit, remove; a net name for every pin.
-void drawCircuitParts(EditorApp& app, const netcheck::Circuit& circuit);
-/// Nets with their pins; rename and merge.
-void drawCircuitNets(EditorApp& app, const netcheck::Circuit& circuit);
 /// The board beside the circuit.
 void drawCircuitDifference(EditorApp& app);
-
-/// Text box for a net name with a drop-down of matching existing names. True when the maker
-/// confirmed a name (Enter, leaving the box after typing, or a pick from the list); then `text`
-/// holds it.
-bool netNameInput(const char* id, std::string& text, const netcheck::Circuit& circuit, float width);
 
 }  // namespace stripsmith
