@@ -12,6 +12,7 @@
 namespace stripsmith {
 namespace {
 
+// What a row of the list reads and changes.
 struct CheckPanel {
     const Document& doc;
     ViewState& view;

@@ -51,7 +51,7 @@ void loadCircuitFile(const CircuitPanelContext& c, const std::string& path) {
     c.state.loadedFrom = path;
     for (const std::string& note : circuit.notes) c.log.note(note);
     c.commands.perform(std::make_unique<netcheck::edit::SetCircuit>(c.doc.board(), *circuit.value,
-                                                             "Load circuit " + baseName(path)));
+                                                                    "Load circuit " + baseName(path)));
     logFindings(c);
 }
 
@@ -116,7 +116,7 @@ void toolbar(const CircuitPanelContext& c) {
     ImGui::SameLine();
     if (ImGui::Button("Take the board as the circuit"))
         c.commands.perform(std::make_unique<netcheck::edit::SetCircuit>(board, captureCircuit(board),
-                                                                 "Take the board as the circuit"));
+                                                                        "Take the board as the circuit"));
     if (ImGui::IsItemHovered())
         ImGui::SetTooltip(
             "The board's present connections become the intended circuit, so later edits are "
@@ -125,7 +125,7 @@ void toolbar(const CircuitPanelContext& c) {
         ImGui::SameLine();
         if (ImGui::Button("Start an empty circuit"))
             c.commands.perform(std::make_unique<netcheck::edit::SetCircuit>(board, netcheck::Circuit{},
-                                                                     "Start an empty circuit"));
+                                                                            "Start an empty circuit"));
         return;
     }
     ImGui::SameLine();
