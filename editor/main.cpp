@@ -23,9 +23,9 @@
 #include <vector>
 
 #include "editor/app/editor_app.hpp"
-#include "editor/app/frame.hpp"
+#include "editor/frame.hpp"
 #include "editor/app/look.hpp"
-#include "editor/files/file_actions.hpp"
+#include "editor/file_actions.hpp"
 #include "editor/platform/draw_data_split.hpp"
 #include "editor/platform/imgui_impl_sfml.hpp"
 #include "editor/platform/x11_errors.hpp"
@@ -173,7 +173,7 @@ int run(const Options& options) {
 
     EditorApp app;
     app.view.side = options.side;
-    app.logHoles = std::getenv("STRIPSMITH_E2E_LOG") != nullptr;
+    app.log = TestLog::fromEnvironment();
     const bool screenshot = !options.screenshot.empty();
     if (!screenshot) {
         app.recent.load(RecentFiles::defaultFile());

@@ -6,9 +6,10 @@
 
 #include <imgui.h>
 
-#include "editor/canvas/board_transform.hpp"
-
 namespace stripsmith {
+
+/// Which face of the board the canvas shows.
+enum class Side { Component, Copper, SeeThrough };
 
 struct ViewState {
     float holePx = 24.0f;          ///< zoom: screen pixels per hole pitch

@@ -11,9 +11,6 @@
 
 namespace stripsmith {
 
-/// Which face of the board the canvas shows.
-enum class Side { Component, Copper, SeeThrough };
-
 /// Maps board units to screen pixels for one frame.
 struct BoardTransform {
     ImVec2 origin{0, 0};  ///< screen position of view unit (0,0): the board's top-left on screen

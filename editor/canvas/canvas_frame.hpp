@@ -6,6 +6,7 @@
 
 #include <imgui.h>
 
+#include "editor/app/view_state.hpp"
 #include "editor/canvas/board_transform.hpp"
 #include "editor/canvas/offboard_layout.hpp"
 #include "netcheck/model/board.hpp"

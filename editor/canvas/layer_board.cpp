@@ -1,4 +1,4 @@
-// Substrate, copper and edge labels.
+// Substrate, copper, edge labels and the caption naming the side shown.
 #include <algorithm>
 #include <cstdio>
 #include <string>
@@ -14,7 +14,8 @@ float canvasTextSize(const CanvasFrame& f, float pitchFraction) {
     return std::min(size, 28.0f);
 }
 
-void drawSubstrate(const CanvasFrame& f, const netcheck::Board& board) {
+void drawSubstrate(const LayerFrame& f) {
+    const netcheck::Board& board = f.board;
     const ImVec2 a = f.at({0, 0});
     const ImVec2 b = f.at({static_cast<float>(board.cols), static_cast<float>(board.rows)});
     const ImVec2 lo{std::min(a.x, b.x), a.y};
@@ -63,13 +64,14 @@ void drawHoles(const CanvasFrame& f) {
 
 }  // namespace
 
-void drawCopper(const CanvasFrame& f, const netcheck::Board& board) {
-    if (board.copper == netcheck::CopperPattern::Pads) drawPads(f);
+void drawCopper(const LayerFrame& f) {
+    if (f.board.copper == netcheck::CopperPattern::Pads) drawPads(f);
     else drawStrips(f);
     drawHoles(f);
 }
 
-void drawEdgeLabels(const CanvasFrame& f, const netcheck::Board& board) {
+void drawEdgeLabels(const LayerFrame& f) {
+    const netcheck::Board& board = f.board;
     const float size = canvasTextSize(f, 0.48f);
     if (size <= 0.0f) return;
     ImFont* font = ImGui::GetFont();
@@ -93,6 +95,19 @@ void drawEdgeLabels(const CanvasFrame& f, const netcheck::Board& board) {
             f.draw->AddText(font, size, {p.x - textSize.x * 0.5f, p.y - textSize.y * 0.5f},
                             palette::kLabelDim, text);
         }
+    }
+}
+
+void drawSideCaption(const LayerFrame& f) {
+    const ImVec2 pos = f.clipMin;
+    if (f.side == Side::Copper) {
+        const char* caption = "COPPER SIDE - seen from below, mirrored: hole 1 is on the right";
+        f.draw->AddRectFilled({pos.x + 8, pos.y + 8},
+                              {pos.x + 8 + ImGui::CalcTextSize(caption).x + 16, pos.y + 12 + ImGui::GetFontSize() + 4},
+                              palette::rgba(222, 142, 74, 230), 4);
+        f.draw->AddText({pos.x + 16, pos.y + 12}, palette::kText, caption);
+    } else if (f.side == Side::SeeThrough) {
+        f.draw->AddText({pos.x + 16, pos.y + 12}, palette::kLabel, "SEE-THROUGH - component side with the copper below");
     }
 }
 

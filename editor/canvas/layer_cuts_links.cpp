@@ -40,7 +40,9 @@ void drawBetweenCut(const CanvasFrame& f, netcheck::Hole left, ImU32 mark) {
 
 }  // namespace
 
-void drawCuts(const CanvasFrame& f, const netcheck::Board& board, const Selected& selected) {
+void drawCuts(const LayerFrame& f) {
+    const netcheck::Board& board = f.board;
+    const Selected& selected = f.selected;
     for (std::size_t i = 0; i < board.cuts.size(); ++i) {
         const netcheck::Cut& cut = board.cuts[i];
         if (cut.hole.row < f.firstRow || cut.hole.row > f.lastRow) continue;
@@ -51,7 +53,9 @@ void drawCuts(const CanvasFrame& f, const netcheck::Board& board, const Selected
     }
 }
 
-void drawLinks(const CanvasFrame& f, const netcheck::Board& board, const Selected& selected) {
+void drawLinks(const LayerFrame& f) {
+    const netcheck::Board& board = f.board;
+    const Selected& selected = f.selected;
     for (std::size_t i = 0; i < board.links.size(); ++i) {
         const netcheck::Link& link = board.links[i];
         const ImVec2 a = f.hole(link.from);

@@ -40,7 +40,10 @@ void drawSuggestedCut(const CanvasFrame& f, const netcheck::Cut& cut) {
 
 }  // namespace
 
-void drawIslandHighlight(const CanvasFrame& f, const netcheck::Board& board, const netcheck::Island& island) {
+void drawIslandHighlight(const LayerFrame& f) {
+    if (!f.hoveredIsland) return;
+    const netcheck::Island& island = *f.hoveredIsland;
+    const netcheck::Board& board = f.board;
     for (const netcheck::Hole& h : island.holes)
         if (h.row >= f.firstRow && h.row <= f.lastRow && h.col >= f.firstCol && h.col <= f.lastCol)
             cellGlow(f, h, palette::kHover);
@@ -59,7 +62,10 @@ void drawIslandHighlight(const CanvasFrame& f, const netcheck::Board& board, con
     }
 }
 
-void drawFindingHighlight(const CanvasFrame& f, const netcheck::Board& board, const netcheck::Finding& finding) {
+void drawFindingHighlight(const LayerFrame& f) {
+    if (!f.focusedFinding) return;
+    const netcheck::Finding& finding = *f.focusedFinding;
+    const netcheck::Board& board = f.board;
     const ImU32 tone = finding.severity() == netcheck::Severity::Error ? palette::kErrorFill
                                                                       : palette::rgba(250, 180, 40, 70);
     for (const netcheck::Hole& h : finding.holes) cellGlow(f, h, tone);
@@ -85,8 +91,8 @@ void drawFindingHighlight(const CanvasFrame& f, const netcheck::Board& board, co
                 f.draw->AddCircle(f.hole(pin.hole), f.t.len(0.55f), palette::kWarning, 16, 2.5f);
 }
 
-void drawFindingMarks(const CanvasFrame& f, const netcheck::CheckReport& report) {
-    for (const netcheck::Finding& finding : report.errors) {
+void drawFindingMarks(const LayerFrame& f) {
+    for (const netcheck::Finding& finding : f.report.errors) {
         if (finding.hole) f.draw->AddCircle(f.hole(*finding.hole), f.t.len(0.55f), palette::kError, 16, 2.0f);
         if (finding.suggestedCut) {
             const ImVec2 p = f.hole(finding.suggestedCut->hole);

@@ -9,7 +9,9 @@ namespace stripsmith {
 
 using netcheck::edit::ElementRef;
 
-void drawOffboardParts(const CanvasFrame& f, const netcheck::Board& board, const Selected& selected) {
+void drawOffboardParts(const LayerFrame& f) {
+    const netcheck::Board& board = f.board;
+    const Selected& selected = f.selected;
     const float size = std::max(11.0f, canvasTextSize(f, 0.5f));
     ImFont* font = ImGui::GetFont();
     for (const OffboardSpot& spot : f.spots) {
@@ -37,7 +39,9 @@ void drawOffboardParts(const CanvasFrame& f, const netcheck::Board& board, const
     }
 }
 
-void drawWires(const CanvasFrame& f, const netcheck::Board& board, const Selected& selected) {
+void drawWires(const LayerFrame& f) {
+    const netcheck::Board& board = f.board;
+    const Selected& selected = f.selected;
     for (std::size_t i = 0; i < board.wires.size(); ++i) {
         const netcheck::Wire& wire = board.wires[i];
         const auto a = endpointPosition(board, f.spots, wire.from);

@@ -382,8 +382,9 @@ void drawSelectionOutline(const CanvasFrame& f, const Part& part) {
 
 }  // namespace
 
-void drawParts(const CanvasFrame& f, const netcheck::Board& board, const Selected& selected,
-               std::optional<std::size_t> hoveredPart) {
+void drawParts(const LayerFrame& f) {
+    const netcheck::Board& board = f.board;
+    const Selected& selected = f.selected;
     const bool detailed = f.detailed();
     for (std::size_t i = 0; i < board.parts.size(); ++i) {
         const Part& part = board.parts[i];
@@ -401,7 +402,7 @@ void drawParts(const CanvasFrame& f, const netcheck::Board& board, const Selecte
         }
         if (selected.count(ElementRef{ElementRef::Kind::Part, i})) drawSelectionOutline(f, part);
         const bool namesByZoom = f.t.holePx >= 36.0f && bodyStyleOf(part) == BodyStyle::ToPackage;
-        if ((hoveredPart && *hoveredPart == i) || namesByZoom) drawPinNames(f, part);
+        if ((f.hoveredPart && *f.hoveredPart == i) || namesByZoom) drawPinNames(f, part);
     }
 }
 

@@ -1,46 +1,57 @@
-// One draw function per canvas layer, called in this order by the canvas.
+// One draw function per canvas layer, called in this order by the canvas. Each takes the frame:
+// where to draw and what.
 #pragma once
 
+#include <cstddef>
 #include <optional>
-#include <set>
-#include <string>
-#include <vector>
 
+#include "editor/app/selection.hpp"
 #include "editor/canvas/canvas_frame.hpp"
 #include "netcheck/check/check_report.hpp"
 #include "netcheck/check/connectivity.hpp"
-#include "netcheck/edit/selection_commands.hpp"
 
 namespace stripsmith {
 
-using Selected = std::set<netcheck::edit::ElementRef>;
+/// The canvas geometry of one frame plus what the layers draw in it.
+struct LayerFrame : CanvasFrame {
+    LayerFrame(const CanvasFrame& geometry, const netcheck::Board& board, const Selected& selected,
+               const netcheck::CheckReport& report)
+        : CanvasFrame(geometry), board(board), selected(selected), report(report) {}
+
+    const netcheck::Board& board;
+    const Selected& selected;
+    const netcheck::CheckReport& report;
+    std::optional<std::size_t> hoveredPart;           ///< its pin names are shown
+    const netcheck::Island* hoveredIsland = nullptr;  ///< lit up with everything joined to it
+    const netcheck::Finding* focusedFinding = nullptr;
+};
 
 /// The board outline and substrate, for the side shown.
-void drawSubstrate(const CanvasFrame& f, const netcheck::Board& board);
+void drawSubstrate(const LayerFrame& f);
 /// Copper strips (or pads) and the holes.
-void drawCopper(const CanvasFrame& f, const netcheck::Board& board);
+void drawCopper(const LayerFrame& f);
 /// Row letters on both sides, hole numbers above and below.
-void drawEdgeLabels(const CanvasFrame& f, const netcheck::Board& board);
-/// Hole cuts (copper ring drilled away) and between cuts (a scored gap), strongest on the copper side.
-void drawCuts(const CanvasFrame& f, const netcheck::Board& board, const Selected& selected);
-/// Wire links between holes.
-void drawLinks(const CanvasFrame& f, const netcheck::Board& board, const Selected& selected);
-/// Part bodies and leads (component side, see-through) or solder joints (copper side).
-/// `hoveredPart` shows pin names of that part.
-void drawParts(const CanvasFrame& f, const netcheck::Board& board, const Selected& selected,
-               std::optional<std::size_t> hoveredPart);
-/// Off-board parts beside the board with their named lugs.
-void drawOffboardParts(const CanvasFrame& f, const netcheck::Board& board, const Selected& selected);
-/// Flying leads from lug to hole or lug, in their colour.
-void drawWires(const CanvasFrame& f, const netcheck::Board& board, const Selected& selected);
+void drawEdgeLabels(const LayerFrame& f);
 /// Everything joined to the hovered hole: the island's holes, and the links and wires inside it.
-void drawIslandHighlight(const CanvasFrame& f, const netcheck::Board& board,
-                         const netcheck::Island& island);
-/// A finding: its copper path, pieces, suggested cut or links, and its hole.
-void drawFindingHighlight(const CanvasFrame& f, const netcheck::Board& board,
-                          const netcheck::Finding& finding);
+void drawIslandHighlight(const LayerFrame& f);
+/// Wire links between holes.
+void drawLinks(const LayerFrame& f);
+/// Part bodies and leads (component side, see-through) or solder joints (copper side), with the
+/// pin names of the hovered part.
+void drawParts(const LayerFrame& f);
+/// Hole cuts (copper ring drilled away) and between cuts (a scored gap), strongest on the copper
+/// side.
+void drawCuts(const LayerFrame& f);
+/// Off-board parts beside the board with their named lugs.
+void drawOffboardParts(const LayerFrame& f);
+/// Flying leads from lug to hole or lug, in their colour.
+void drawWires(const LayerFrame& f);
 /// Marks every error's hole lightly so faults are visible without opening the list.
-void drawFindingMarks(const CanvasFrame& f, const netcheck::CheckReport& report);
+void drawFindingMarks(const LayerFrame& f);
+/// The focused finding: its copper path, pieces, suggested cut or links, and its hole.
+void drawFindingHighlight(const LayerFrame& f);
+/// The caption naming the side shown, over the top-left of the canvas.
+void drawSideCaption(const LayerFrame& f);
 
 /// Rough screen size of text for a zoom, or 0 when too small to read.
 float canvasTextSize(const CanvasFrame& f, float pitchFraction);

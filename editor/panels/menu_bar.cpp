@@ -1,105 +1,120 @@
 // The menus: File, Edit, View, Help.
 #include <imgui.h>
 
-#include "editor/app/edit_actions.hpp"
-#include "editor/files/file_actions.hpp"
 #include "editor/panels/panels.hpp"
 
 namespace stripsmith {
 namespace {
 
-void fileMenu(EditorApp& app) {
-    if (!ImGui::BeginMenu("File")) return;
-    if (ImGui::MenuItem("New board", "Ctrl+N")) actionNew(app);
-    if (ImGui::MenuItem("Open...", "Ctrl+O")) actionOpen(app);
-    if (ImGui::BeginMenu("Open recent", !app.recent.paths().empty())) {
-        for (const std::string& path : app.recent.paths())
-            if (ImGui::MenuItem(path.c_str())) actionOpenPath(app, path);
+void exportSheet(const MenuContext& c) {
+    const std::string& path = c.doc.path();
+    std::string name = path.empty() ? "board" : path;
+    const auto slash = name.find_last_of('/');
+    if (slash != std::string::npos) name = name.substr(slash + 1);
+    if (const auto dot = name.find('.'); dot != std::string::npos) name = name.substr(0, dot);
+    const auto folder = path.empty() ? std::string() : path.substr(0, path.find_last_of('/'));
+    c.chooser.open(FileChooser::Purpose::ExportSheet, folder, name + "-sheet.pdf");
+}
+
+FileRequest fileMenu(const MenuContext& c) {
+    using Kind = FileRequest::Kind;
+    FileRequest request;
+    if (!ImGui::BeginMenu("File")) return request;
+    if (ImGui::MenuItem("New board", "Ctrl+N")) request.kind = Kind::New;
+    if (ImGui::MenuItem("Open...", "Ctrl+O")) request.kind = Kind::Open;
+    if (ImGui::BeginMenu("Open recent", !c.recent.paths().empty())) {
+        for (const std::string& path : c.recent.paths())
+            if (ImGui::MenuItem(path.c_str())) request = {Kind::OpenRecent, path};
         ImGui::EndMenu();
     }
-    if (ImGui::MenuItem("Save", "Ctrl+S")) actionSave(app);
-    if (ImGui::MenuItem("Save as...", "Ctrl+Shift+S")) actionSaveAs(app);
+    if (ImGui::MenuItem("Save", "Ctrl+S")) request.kind = Kind::Save;
+    if (ImGui::MenuItem("Save as...", "Ctrl+Shift+S")) request.kind = Kind::SaveAs;
     ImGui::Separator();
-    if (ImGui::MenuItem("Export build sheet (PDF/SVG)...")) {
-        std::string name = app.doc.path().empty() ? "board" : app.doc.path();
-        const auto slash = name.find_last_of('/');
-        if (slash != std::string::npos) name = name.substr(slash + 1);
-        if (const auto dot = name.find('.'); dot != std::string::npos) name = name.substr(0, dot);
-        const auto folder = app.doc.path().empty() ? std::string() : app.doc.path().substr(0, app.doc.path().find_last_of('/'));
-        app.chooser.open(FileChooser::Purpose::ExportSheet, folder, name + "-sheet.pdf");
-    }
+    if (ImGui::MenuItem("Export build sheet (PDF/SVG)...")) exportSheet(c);
     ImGui::Separator();
-    if (ImGui::MenuItem("Quit", "Ctrl+Q")) actionQuit(app);
+    if (ImGui::MenuItem("Quit", "Ctrl+Q")) request.kind = Kind::Quit;
     ImGui::EndMenu();
+    return request;
 }
 
-void editMenu(EditorApp& app) {
+void editMenu(const MenuContext& c) {
     if (!ImGui::BeginMenu("Edit")) return;
-    const auto& history = app.doc.history();
+    const auto& history = c.doc.history();
     const std::string undoText = history.canUndo() ? "Undo " + history.undoLabel() : "Undo";
     const std::string redoText = history.canRedo() ? "Redo " + history.redoLabel() : "Redo";
-    if (ImGui::MenuItem(undoText.c_str(), "Ctrl+Z", false, history.canUndo())) undo(app);
-    if (ImGui::MenuItem(redoText.c_str(), "Ctrl+Y", false, history.canRedo())) redo(app);
+    if (ImGui::MenuItem(undoText.c_str(), "Ctrl+Z", false, history.canUndo())) undo(c.edit);
+    if (ImGui::MenuItem(redoText.c_str(), "Ctrl+Y", false, history.canRedo())) redo(c.edit);
     ImGui::Separator();
-    const bool any = !app.selection.empty();
-    if (ImGui::MenuItem("Copy", "Ctrl+C", false, any)) copySelection(app);
-    if (ImGui::MenuItem("Paste", "Ctrl+V", false, !app.clipboard.empty())) paste(app, app.hoverHole);
-    if (ImGui::MenuItem("Duplicate", "Ctrl+D", false, any)) duplicateSelection(app);
-    if (ImGui::MenuItem("Turn 90°", "R", false, any)) rotateSelection(app);
-    if (ImGui::MenuItem("Delete", "Del", false, any)) deleteSelection(app);
-    if (ImGui::MenuItem("Select all", "Ctrl+A")) selectAll(app);
+    const bool any = !c.edit.selection.empty();
+    if (ImGui::MenuItem("Copy", "Ctrl+C", false, any)) copySelection(c.edit);
+    if (ImGui::MenuItem("Paste", "Ctrl+V", false, !c.edit.clipboard.empty()))
+        paste(c.edit, c.pasteAt);
+    if (ImGui::MenuItem("Duplicate", "Ctrl+D", false, any)) duplicateSelection(c.edit);
+    if (ImGui::MenuItem("Turn 90°", "R", false, any)) rotateSelection(c.edit);
+    if (ImGui::MenuItem("Delete", "Del", false, any)) deleteSelection(c.edit);
+    if (ImGui::MenuItem("Select all", "Ctrl+A")) selectAll(c.edit);
     ImGui::EndMenu();
 }
 
-void viewMenu(EditorApp& app) {
+void viewMenu(const MenuContext& c) {
+    ViewState& view = c.view;
     if (!ImGui::BeginMenu("View")) {
-        app.logItem("menu-view");
+        c.log.item("menu-view");
         return;
     }
     auto side = [&](const char* label, Side s) {
-        if (ImGui::MenuItem(label, nullptr, app.view.side == s)) {
-            app.view.side = s;
-            app.view.fitPending = true;
+        if (ImGui::MenuItem(label, nullptr, view.side == s)) {
+            view.side = s;
+            view.fitPending = true;
         }
     };
     side("Component side", Side::Component);
     side("Copper side (mirrored)", Side::Copper);
     side("See-through", Side::SeeThrough);
     ImGui::Separator();
-    if (ImGui::MenuItem("Fit board", "F")) app.view.fitPending = true;
-    ImGui::MenuItem("Circuit panel", nullptr, &app.view.showCircuit);
-    app.logItem("menu-circuit-panel");
+    if (ImGui::MenuItem("Fit board", "F")) view.fitPending = true;
+    ImGui::MenuItem("Circuit panel", nullptr, &view.showCircuit);
+    c.log.item("menu-circuit-panel");
     if (ImGui::BeginMenu("Interface size")) {
-        if (ImGui::MenuItem("Normal (1x)", nullptr, app.view.uiScale == 1)) app.view.uiScale = 1;
-        if (ImGui::MenuItem("Large (2x)", nullptr, app.view.uiScale == 2)) app.view.uiScale = 2;
+        if (ImGui::MenuItem("Normal (1x)", nullptr, view.uiScale == 1)) view.uiScale = 1;
+        if (ImGui::MenuItem("Large (2x)", nullptr, view.uiScale == 2)) view.uiScale = 2;
         ImGui::EndMenu();
     }
     ImGui::EndMenu();
 }
 
-}  // namespace
-
-void drawMenuBar(EditorApp& app) {
-    if (!ImGui::BeginMainMenuBar()) return;
-    fileMenu(app);
-    editMenu(app);
-    viewMenu(app);
-    if (ImGui::BeginMenu("Help")) {
-        ImGui::MenuItem("Keys", "F1", &app.view.showHelp);
-        ImGui::EndMenu();
-    }
-    const auto& report = app.doc.report();
-    const std::string title = (app.doc.path().empty() ? std::string("untitled") : app.doc.path()) +
-                              (app.doc.modified() ? " *" : "") + (app.doc.readOnly() ? "  [read-only]" : "");
+void titleAndCheck(const Document& doc) {
+    const auto& report = doc.report();
+    const std::string title = (doc.path().empty() ? std::string("untitled") : doc.path()) +
+                              (doc.modified() ? " *" : "") +
+                              (doc.readOnly() ? "  [read-only]" : "");
     ImGui::SameLine(ImGui::GetWindowWidth() * 0.35f);
     ImGui::TextDisabled("%s", title.c_str());
     ImGui::SameLine(ImGui::GetWindowWidth() - 220);
     const std::size_t warnings = report.warnings.size();
     const std::size_t errors = report.errors.size();
     if (report.ok())
-        ImGui::TextColored({0.45f, 0.9f, 0.55f, 1.0f}, "Check: OK (%zu warning%s)", warnings, warnings == 1 ? "" : "s");
-    else ImGui::TextColored({1.0f, 0.5f, 0.45f, 1.0f}, "Check: %zu error%s", errors, errors == 1 ? "" : "s");
+        ImGui::TextColored({0.45f, 0.9f, 0.55f, 1.0f}, "Check: OK (%zu warning%s)", warnings,
+                           warnings == 1 ? "" : "s");
+    else
+        ImGui::TextColored({1.0f, 0.5f, 0.45f, 1.0f}, "Check: %zu error%s", errors,
+                           errors == 1 ? "" : "s");
+}
+
+}  // namespace
+
+FileRequest drawMenuBar(const MenuContext& c) {
+    if (!ImGui::BeginMainMenuBar()) return {};
+    const FileRequest request = fileMenu(c);
+    editMenu(c);
+    viewMenu(c);
+    if (ImGui::BeginMenu("Help")) {
+        ImGui::MenuItem("Keys", "F1", &c.view.showHelp);
+        ImGui::EndMenu();
+    }
+    titleAndCheck(c.doc);
     ImGui::EndMainMenuBar();
+    return request;
 }
 
 }  // namespace stripsmith

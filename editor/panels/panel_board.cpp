@@ -8,64 +8,75 @@
 namespace stripsmith {
 namespace {
 
-void resize(EditorApp& app, netcheck::edit::EdgeChange change) {
-    const auto& board = app.doc.board();
+// What the Board panel changes besides the board: a resize or trim drops the selection (its
+// indices may no longer hold) and a trim refits the view.
+struct BoardPanel {
+    const Document& doc;
+    Commands commands;
+    Selected& selection;
+    ViewState& view;
+};
+
+void resize(const BoardPanel& p, netcheck::edit::EdgeChange change) {
+    const auto& board = p.doc.board();
     if (board.rows + change.top + change.bottom < 1 || board.cols + change.left + change.right < 1) return;
     try {
-        app.perform(std::make_unique<netcheck::edit::ResizeBoard>(board, change));
+        p.commands.perform(std::make_unique<netcheck::edit::ResizeBoard>(board, change));
     } catch (const std::exception& e) {
-        app.say(e.what());
+        p.commands.say(e.what());
     }
-    app.selection.clear();
+    p.selection.clear();
 }
 
-void edgeRow(EditorApp& app, const char* name, netcheck::edit::EdgeChange grow) {
+void edgeRow(const BoardPanel& p, const char* name, netcheck::edit::EdgeChange grow) {
     ImGui::PushID(name);
     ImGui::TextUnformatted(name);
     ImGui::SameLine(80);
-    if (ImGui::SmallButton("+1")) resize(app, grow);
+    if (ImGui::SmallButton("+1")) resize(p, grow);
     ImGui::SameLine();
     netcheck::edit::EdgeChange shrink{-grow.top, -grow.bottom, -grow.left, -grow.right};
-    if (ImGui::SmallButton("-1")) resize(app, shrink);
+    if (ImGui::SmallButton("-1")) resize(p, shrink);
     ImGui::PopID();
 }
 
 }  // namespace
 
-void drawBoardPanel(EditorApp& app, ImVec2 pos, ImVec2 size) {
+void drawBoardPanel(const Document& doc, Commands commands, Selected& selection, ViewState& view, ImVec2 pos,
+                    ImVec2 size) {
+    const BoardPanel p{doc, commands, selection, view};
     if (beginPanel("Board", pos, size)) {
-        const auto& board = app.doc.board();
+        const auto& board = doc.board();
         ImGui::Text("%d x %d holes", board.cols, board.rows);
         ImGui::Text("%.1f x %.1f mm", board.widthMm(), board.heightMm());
         ImGui::TextDisabled("(%d strips of %d holes, pitch %.2f mm)", board.rows, board.cols, board.pitchMm);
         int rows = board.rows, cols = board.cols;
         ImGui::SetNextItemWidth(110);
         if (ImGui::InputInt("strips (rows)", &rows, 1, 5, ImGuiInputTextFlags_EnterReturnsTrue) && rows != board.rows)
-            resize(app, {0, rows - board.rows, 0, 0});
+            resize(p, {0, rows - board.rows, 0, 0});
         ImGui::SetNextItemWidth(110);
         if (ImGui::InputInt("holes (cols)", &cols, 1, 5, ImGuiInputTextFlags_EnterReturnsTrue) && cols != board.cols)
-            resize(app, {0, 0, 0, cols - board.cols});
+            resize(p, {0, 0, 0, cols - board.cols});
         if (ImGui::TreeNode("Grow or shrink an edge")) {
-            edgeRow(app, "Top", {1, 0, 0, 0});
-            edgeRow(app, "Bottom", {0, 1, 0, 0});
-            edgeRow(app, "Left", {0, 0, 1, 0});
-            edgeRow(app, "Right", {0, 0, 0, 1});
+            edgeRow(p, "Top", {1, 0, 0, 0});
+            edgeRow(p, "Bottom", {0, 1, 0, 0});
+            edgeRow(p, "Left", {0, 0, 1, 0});
+            edgeRow(p, "Right", {0, 0, 0, 1});
             ImGui::TreePop();
         }
         if (ImGui::Button("Trim to used area")) {
             if (auto command = netcheck::edit::trimToUsedArea(board)) {
-                app.perform(std::move(command));
-                app.selection.clear();
-                app.view.fitPending = true;
+                p.commands.perform(std::move(command));
+                p.selection.clear();
+                p.view.fitPending = true;
             } else {
-                app.say("Nothing to trim.");
+                p.commands.say("Nothing to trim.");
             }
         }
         std::string title = board.title;
         ImGui::SetNextItemWidth(-1);
         if (ImGui::InputTextWithHint("##title", "board title", &title, ImGuiInputTextFlags_EnterReturnsTrue) &&
             title != board.title)
-            app.perform(std::make_unique<netcheck::edit::SetTitle>(board, title));
+            p.commands.perform(std::make_unique<netcheck::edit::SetTitle>(board, title));
     }
     ImGui::End();
 }

@@ -4,12 +4,9 @@
 #include <imgui.h>
 #include <imgui_stdlib.h>
 
-#include <cstdio>
-
 #include "netcheck/check/circuit_capture.hpp"
 #include "editor/panels/circuit_files.hpp"
-#include "editor/panels/circuit_panel_views.hpp"
-#include "editor/panels/panels.hpp"
+#include "editor/panels/circuit_views.hpp"
 #include "netcheck/edit/edit.hpp"
 #include "netcheck/file/file_io.hpp"
 
@@ -26,68 +23,64 @@ std::string folderOf(const std::string& path) {
     return slash == std::string::npos ? std::string() : path.substr(0, slash);
 }
 
-void refuseLoad(EditorApp& app, const std::string& message) {
-    app.dialogs.errorTitle = "Cannot load the circuit";
-    app.dialogs.errorText = message + "\n\nThe board's circuit is unchanged.";
-    app.say("Cannot load the circuit: " + message);
+void refuseLoad(const CircuitPanelContext& c, const std::string& message) {
+    c.dialogs.errorTitle = "Cannot load the circuit";
+    c.dialogs.errorText = message + "\n\nThe board's circuit is unchanged.";
+    c.commands.say("Cannot load the circuit: " + message);
 }
 
 // For scripted tests: what the check says right after a load.
-void logFindings(const EditorApp& app) {
-    if (!app.logHoles) return;
-    for (const auto& finding : app.doc.report().errors)
-        std::fprintf(stderr, "STRIPSMITH_E2E finding %s %s\n", std::string(finding.id()).c_str(),
-                     finding.message.c_str());
+void logFindings(const CircuitPanelContext& c) {
+    if (!c.log.on()) return;
+    for (const auto& finding : c.doc.report().errors) c.log.finding(finding);
 }
 
-void loadCircuitFile(EditorApp& app, const std::string& path) {
+void loadCircuitFile(const CircuitPanelContext& c, const std::string& path) {
     const netcheck::ReadLimits limits;
     auto text = netcheck::readFileLimited(path, limits.maxBytes);
     if (!text.ok()) {
-        refuseLoad(app, text.error ? text.error->describe() : "cannot read " + path);
+        refuseLoad(c, text.error ? text.error->describe() : "cannot read " + path);
         return;
     }
-    auto circuit = readCircuitForEditor(*text.value, path, app.circuitPanel.spice);
+    auto circuit = readCircuitForEditor(*text.value, path, c.state.spice);
     if (!circuit.ok()) {
-        refuseLoad(app, circuit.error ? circuit.error->describe() : "unreadable circuit " + path);
+        refuseLoad(c, circuit.error ? circuit.error->describe() : "unreadable circuit " + path);
         return;
     }
-    app.circuitPanel.loadNotes = circuit.notes;
-    app.circuitPanel.loadedFrom = path;
-    if (app.logHoles)
-        for (const std::string& note : circuit.notes)
-            std::fprintf(stderr, "STRIPSMITH_E2E note %s\n", note.c_str());
-    app.perform(std::make_unique<netcheck::edit::SetCircuit>(app.doc.board(), *circuit.value,
-                                                             "Load circuit " + baseName(path)));
-    logFindings(app);
+    c.state.loadNotes = circuit.notes;
+    c.state.loadedFrom = path;
+    for (const std::string& note : circuit.notes) c.log.note(note);
+    c.commands.perform(std::make_unique<netcheck::edit::SetCircuit>(c.doc.board(), *circuit.value,
+                                                                    "Load circuit " + baseName(path)));
+    logFindings(c);
 }
 
-void exportCircuitFile(EditorApp& app, const std::string& path) {
-    const auto& board = app.doc.board();
+void exportCircuitFile(const CircuitPanelContext& c, const std::string& path) {
+    const auto& board = c.doc.board();
     if (!board.circuit) return;
     const std::string title = board.title.empty() ? "Stripsmith circuit" : board.title;
     if (auto problem =
             netcheck::saveFileAtomically(path, circuitFileText(*board.circuit, path, title))) {
-        app.dialogs.errorTitle = "Cannot export the circuit";
-        app.dialogs.errorText = *problem;
+        c.dialogs.errorTitle = "Cannot export the circuit";
+        c.dialogs.errorText = *problem;
         return;
     }
-    app.say("Exported the circuit to " + path);
+    c.commands.say("Exported the circuit to " + path);
 }
 
-void takeChosenFile(EditorApp& app) {
-    if (app.chosenForPanel.empty()) return;
-    if (app.chooser.purpose() == FileChooser::Purpose::OpenCircuit) {
-        loadCircuitFile(app, app.chosenForPanel);
-        app.chosenForPanel.clear();
-    } else if (app.chooser.purpose() == FileChooser::Purpose::ExportCircuit) {
-        exportCircuitFile(app, app.chosenForPanel);
-        app.chosenForPanel.clear();
+void takeChosenFile(const CircuitPanelContext& c) {
+    if (c.chosenFile.empty()) return;
+    if (c.chooser.purpose() == FileChooser::Purpose::OpenCircuit) {
+        loadCircuitFile(c, c.chosenFile);
+        c.chosenFile.clear();
+    } else if (c.chooser.purpose() == FileChooser::Purpose::ExportCircuit) {
+        exportCircuitFile(c, c.chosenFile);
+        c.chosenFile.clear();
     }
 }
 
-void spiceOptions(EditorApp& app) {
-    auto& options = app.circuitPanel.spice;
+void spiceOptions(const CircuitPanelContext& c) {
+    auto& options = c.state.spice;
     if (!ImGui::TreeNode("SPICE deck options")) return;
     ImGui::SetNextItemWidth(120);
     ImGui::InputText("Name of node 0", &options.groundName);
@@ -100,8 +93,8 @@ void spiceOptions(EditorApp& app) {
     ImGui::TreePop();
 }
 
-void loadNotes(EditorApp& app) {
-    auto& state = app.circuitPanel;
+void loadNotes(const CircuitPanelContext& c) {
+    auto& state = c.state;
     if (state.loadNotes.empty()) return;
     ImGui::TextColored({1.0f, 0.8f, 0.35f, 1.0f},
                        "Notes on %s (%zu):", baseName(state.loadedFrom).c_str(),
@@ -113,17 +106,17 @@ void loadNotes(EditorApp& app) {
     ImGui::EndChild();
 }
 
-void toolbar(EditorApp& app) {
-    const auto& board = app.doc.board();
+void toolbar(const CircuitPanelContext& c) {
+    const auto& board = c.doc.board();
     if (ImGui::Button("Load circuit file..."))
-        app.chooser.open(FileChooser::Purpose::OpenCircuit, folderOf(app.doc.path()));
-    app.logItem("load-circuit");
+        c.chooser.open(FileChooser::Purpose::OpenCircuit, folderOf(c.doc.path()));
+    c.log.item("load-circuit");
     if (ImGui::IsItemHovered())
         ImGui::SetTooltip("A JSON circuit file or a SPICE deck (.cir, .sp, .spice, .net, .ckt).");
     ImGui::SameLine();
     if (ImGui::Button("Take the board as the circuit"))
-        app.perform(std::make_unique<netcheck::edit::SetCircuit>(board, captureCircuit(board),
-                                                                 "Take the board as the circuit"));
+        c.commands.perform(std::make_unique<netcheck::edit::SetCircuit>(board, captureCircuit(board),
+                                                                        "Take the board as the circuit"));
     if (ImGui::IsItemHovered())
         ImGui::SetTooltip(
             "The board's present connections become the intended circuit, so later edits are "
@@ -131,15 +124,15 @@ void toolbar(EditorApp& app) {
     if (!board.circuit) {
         ImGui::SameLine();
         if (ImGui::Button("Start an empty circuit"))
-            app.perform(std::make_unique<netcheck::edit::SetCircuit>(board, netcheck::Circuit{},
-                                                                     "Start an empty circuit"));
+            c.commands.perform(std::make_unique<netcheck::edit::SetCircuit>(board, netcheck::Circuit{},
+                                                                            "Start an empty circuit"));
         return;
     }
     ImGui::SameLine();
     if (ImGui::Button("Export...")) {
-        const std::string name = baseName(app.doc.path());
+        const std::string name = baseName(c.doc.path());
         const std::string stem = name.substr(0, name.find('.'));
-        app.chooser.open(FileChooser::Purpose::ExportCircuit, folderOf(app.doc.path()),
+        c.chooser.open(FileChooser::Purpose::ExportCircuit, folderOf(c.doc.path()),
                          (stem.empty() ? std::string("circuit") : stem) + ".cir");
     }
     if (ImGui::IsItemHovered())
@@ -148,34 +141,34 @@ void toolbar(EditorApp& app) {
             "file.\nThe circuit is also saved inside the board file.");
     ImGui::SameLine();
     if (ImGui::Button("Remove circuit"))
-        app.perform(
+        c.commands.perform(
             std::make_unique<netcheck::edit::SetCircuit>(board, std::nullopt, "Remove circuit"));
 }
 
 }  // namespace
 
-void applyCircuitEdit(EditorApp& app, const netcheck::CircuitEdit& edit, const std::string& label) {
+void applyCircuitEdit(const CircuitPanelContext& c, const netcheck::CircuitEdit& edit, const std::string& label) {
     if (const auto* problem = std::get_if<std::string>(&edit)) {
-        app.say(*problem);
+        c.commands.say(*problem);
         return;
     }
     const auto& circuit = std::get<netcheck::Circuit>(edit);
-    if (app.doc.board().circuit == circuit) return;
-    app.perform(std::make_unique<netcheck::edit::SetCircuit>(app.doc.board(), circuit, label));
+    if (c.doc.board().circuit == circuit) return;
+    c.commands.perform(std::make_unique<netcheck::edit::SetCircuit>(c.doc.board(), circuit, label));
 }
 
-void drawCircuitPanel(EditorApp& app) {
-    takeChosenFile(app);
-    if (!app.view.showCircuit) return;
+void drawCircuitPanel(const CircuitPanelContext& c) {
+    takeChosenFile(c);
+    if (!c.open) return;
     const ImVec2 d = ImGui::GetIO().DisplaySize;
     ImGui::SetNextWindowPos({d.x * 0.25f, d.y * 0.1f}, ImGuiCond_FirstUseEver);
     ImGui::SetNextWindowSize({d.x * 0.5f, d.y * 0.7f}, ImGuiCond_FirstUseEver);
-    if (ImGui::Begin("Circuit", &app.view.showCircuit)) {
-        toolbar(app);
-        spiceOptions(app);
-        loadNotes(app);
+    if (ImGui::Begin("Circuit", &c.open)) {
+        toolbar(c);
+        spiceOptions(c);
+        loadNotes(c);
         ImGui::Separator();
-        const auto& board = app.doc.board();
+        const auto& board = c.doc.board();
         if (!board.circuit) {
             ImGui::TextWrapped(
                 "No intended circuit yet. Load one, start an empty one and type it in, or take the "
@@ -183,17 +176,17 @@ void drawCircuitPanel(EditorApp& app) {
         } else if (ImGui::BeginTabBar("circuit-views")) {
             const netcheck::Circuit circuit = *board.circuit;  // edits below replace the board's
             if (ImGui::BeginTabItem("Parts")) {
-                drawCircuitParts(app, circuit);
+                drawCircuitParts(c, circuit);
                 ImGui::EndTabItem();
             }
             if (ImGui::BeginTabItem("Nets")) {
-                drawCircuitNets(app, circuit);
+                drawCircuitNets(c, circuit);
                 ImGui::EndTabItem();
             }
             const bool comparing = ImGui::BeginTabItem("Board against circuit");
-            app.logItem("circuit-tab-difference");
+            c.log.item("circuit-tab-difference");
             if (comparing) {
-                drawCircuitDifference(app);
+                drawCircuitDifference(c.doc.board(), c.state);
                 ImGui::EndTabItem();
             }
             ImGui::EndTabBar();

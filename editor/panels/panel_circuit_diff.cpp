@@ -2,7 +2,7 @@
 // check sees them.
 #include <imgui.h>
 
-#include "editor/panels/circuit_panel_views.hpp"
+#include "editor/panels/circuit_views.hpp"
 #include "netcheck/check/board_vs_circuit.hpp"
 
 namespace stripsmith {
@@ -56,9 +56,9 @@ void netRows(const CircuitDifference& diff, bool onlyDifferent) {
 
 }  // namespace
 
-void drawCircuitDifference(EditorApp& app) {
+void drawCircuitDifference(const netcheck::Board& board, CircuitPanelState& state) {
     // Computed per frame: a board of a few hundred pins takes well under a millisecond.
-    const CircuitDifference diff = netcheck::compareBoardWithCircuit(app.doc.board());
+    const CircuitDifference diff = netcheck::compareBoardWithCircuit(board);
     if (diff.same()) ImGui::TextColored(kGood, "The board joins exactly what the circuit says.");
     if (!diff.partsOnlyOnBoard.empty())
         ImGui::TextColored(kBad, "On the board only: %s", refList(diff.partsOnlyOnBoard).c_str());
@@ -69,7 +69,7 @@ void drawCircuitDifference(EditorApp& app) {
         ImGui::TextColored(kBad, "%s: board %s %s, circuit %s %s", part.ref.c_str(),
                            part.boardKind.c_str(), part.boardValue.c_str(),
                            part.circuitKind.c_str(), part.circuitValue.c_str());
-    bool& onlyDifferent = app.circuitPanel.onlyDifferentNets;
+    bool& onlyDifferent = state.onlyDifferentNets;
     ImGui::Checkbox("Only nets that differ", &onlyDifferent);
     ImGui::BeginChild("diff");
     netRows(diff, onlyDifferent);

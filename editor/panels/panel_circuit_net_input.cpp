@@ -2,7 +2,7 @@
 #include <imgui.h>
 #include <imgui_stdlib.h>
 
-#include "editor/panels/circuit_panel_views.hpp"
+#include "editor/panels/circuit_views.hpp"
 
 namespace stripsmith {
 

@@ -2,7 +2,7 @@
 #include <imgui.h>
 #include <imgui_stdlib.h>
 
-#include "editor/panels/circuit_panel_views.hpp"
+#include "editor/panels/circuit_views.hpp"
 
 namespace stripsmith {
 namespace {
@@ -13,8 +13,8 @@ std::string pinList(const std::vector<netcheck::PinRef>& pins) {
     return list;
 }
 
-void renameForm(EditorApp& app, const netcheck::Circuit& circuit) {
-    auto& s = app.circuitPanel;
+void renameForm(const CircuitPanelContext& c, const netcheck::Circuit& circuit) {
+    auto& s = c.state;
     ImGui::TextUnformatted("Rename net");
     ImGui::SameLine(110);
     netNameInput("rename-from", s.renameFrom, circuit, 140);
@@ -26,13 +26,13 @@ void renameForm(EditorApp& app, const netcheck::Circuit& circuit) {
     ImGui::SameLine();
     if (ImGui::Button("Rename")) {
         const auto edit = renameNet(circuit, s.renameFrom, s.renameTo);
-        applyCircuitEdit(app, edit, "Rename net " + s.renameFrom + " to " + s.renameTo);
+        applyCircuitEdit(c, edit, "Rename net " + s.renameFrom + " to " + s.renameTo);
         if (std::holds_alternative<netcheck::Circuit>(edit)) s.renameFrom = s.renameTo;
     }
 }
 
-void mergeForm(EditorApp& app, const netcheck::Circuit& circuit) {
-    auto& s = app.circuitPanel;
+void mergeForm(const CircuitPanelContext& c, const netcheck::Circuit& circuit) {
+    auto& s = c.state;
     ImGui::TextUnformatted("Merge net");
     ImGui::SameLine(110);
     netNameInput("merge-from", s.mergeFrom, circuit, 140);
@@ -43,17 +43,17 @@ void mergeForm(EditorApp& app, const netcheck::Circuit& circuit) {
     ImGui::SameLine();
     if (ImGui::Button("Merge")) {
         const auto edit = mergeNets(circuit, s.mergeFrom, s.mergeInto);
-        applyCircuitEdit(app, edit, "Merge net " + s.mergeFrom + " into " + s.mergeInto);
+        applyCircuitEdit(c, edit, "Merge net " + s.mergeFrom + " into " + s.mergeInto);
         if (std::holds_alternative<netcheck::Circuit>(edit)) s.mergeFrom.clear();
     }
 }
 
 }  // namespace
 
-void drawCircuitNets(EditorApp& app, const netcheck::Circuit& circuit) {
-    auto& s = app.circuitPanel;
-    renameForm(app, circuit);
-    mergeForm(app, circuit);
+void drawCircuitNets(const CircuitPanelContext& c, const netcheck::Circuit& circuit) {
+    auto& s = c.state;
+    renameForm(c, circuit);
+    mergeForm(c, circuit);
     ImGui::Separator();
     ImGui::BeginChild("nets");
     if (ImGui::BeginTable(

@@ -4,7 +4,7 @@
 
 #include <sstream>
 
-#include "editor/panels/circuit_panel_views.hpp"
+#include "editor/panels/circuit_views.hpp"
 #include "netcheck/model/part_kinds.hpp"
 
 namespace stripsmith {
@@ -47,8 +47,8 @@ void kindPicker(const char* id, std::string& kind, std::string& pins) {
     ImGui::PopID();
 }
 
-void addPartForm(EditorApp& app, const netcheck::Circuit& circuit) {
-    auto& s = app.circuitPanel;
+void addPartForm(const CircuitPanelContext& c, const netcheck::Circuit& circuit) {
+    auto& s = c.state;
     ImGui::TextUnformatted("Add a part:");
     ImGui::SetNextItemWidth(70);
     ImGui::InputTextWithHint("##ref", "ref", &s.newRef);
@@ -68,12 +68,12 @@ void addPartForm(EditorApp& app, const netcheck::Circuit& circuit) {
                                          nlohmann::json::object()};
         const auto edit = addCircuitPart(circuit, s.newRef, part);
         if (std::holds_alternative<netcheck::Circuit>(edit)) s.newRef.clear();
-        applyCircuitEdit(app, edit, "Add " + s.newRef + " to the circuit");
+        applyCircuitEdit(c, edit, "Add " + s.newRef + " to the circuit");
     }
 }
 
-void editPartForm(EditorApp& app, const netcheck::Circuit& circuit, const std::string& ref) {
-    auto& s = app.circuitPanel;
+void editPartForm(const CircuitPanelContext& c, const netcheck::Circuit& circuit, const std::string& ref) {
+    auto& s = c.state;
     ImGui::Indent();
     ImGui::SetNextItemWidth(70);
     ImGui::InputText("##eref", &s.editRef);
@@ -91,15 +91,15 @@ void editPartForm(EditorApp& app, const netcheck::Circuit& circuit, const std::s
         const netcheck::CircuitPart part{s.editKind, s.editValue, splitPins(s.editPins), old.extra};
         const auto edit = editCircuitPart(circuit, ref, s.editRef, part);
         if (std::holds_alternative<netcheck::Circuit>(edit)) s.editingRef.clear();
-        applyCircuitEdit(app, edit, "Edit " + ref + " in the circuit");
+        applyCircuitEdit(c, edit, "Edit " + ref + " in the circuit");
     }
     ImGui::SameLine();
     if (ImGui::Button("Cancel")) s.editingRef.clear();
     ImGui::Unindent();
 }
 
-void pinRows(EditorApp& app, const netcheck::Circuit& circuit, const std::string& ref) {
-    auto& s = app.circuitPanel;
+void pinRows(const CircuitPanelContext& c, const netcheck::Circuit& circuit, const std::string& ref) {
+    auto& s = c.state;
     for (const std::string& pinName : pinsOfPart(circuit, ref)) {
         const netcheck::PinRef pin{ref, pinName};
         const std::string key = pin.name();
@@ -114,7 +114,7 @@ void pinRows(EditorApp& app, const netcheck::Circuit& circuit, const std::string
         if (confirmed) {
             s.pinNetText.erase(key);
             applyCircuitEdit(
-                app, assignPinToNet(circuit, pin, text),
+                c, assignPinToNet(circuit, pin, text),
                 text.empty() ? "Take " + key + " out of its net" : "Join " + key + " to " + text);
         } else if (text != current || active) {
             s.pinNetText[key] = text;
@@ -131,9 +131,9 @@ void pinRows(EditorApp& app, const netcheck::Circuit& circuit, const std::string
 
 }  // namespace
 
-void drawCircuitParts(EditorApp& app, const netcheck::Circuit& circuit) {
-    auto& s = app.circuitPanel;
-    addPartForm(app, circuit);
+void drawCircuitParts(const CircuitPanelContext& c, const netcheck::Circuit& circuit) {
+    auto& s = c.state;
+    addPartForm(c, circuit);
     ImGui::Separator();
     ImGui::BeginChild("parts");
     for (const auto& [ref, part] : circuit.parts) {
@@ -150,11 +150,11 @@ void drawCircuitParts(EditorApp& app, const netcheck::Circuit& circuit) {
         }
         ImGui::SameLine();
         if (ImGui::SmallButton("Remove"))
-            applyCircuitEdit(app, removeCircuitPart(circuit, ref),
+            applyCircuitEdit(c, removeCircuitPart(circuit, ref),
                              "Remove " + ref + " from the circuit");
-        if (s.editingRef == ref) editPartForm(app, circuit, ref);
+        if (s.editingRef == ref) editPartForm(c, circuit, ref);
         if (open) {
-            pinRows(app, circuit, ref);
+            pinRows(c, circuit, ref);
             ImGui::TreePop();
         }
         ImGui::PopID();

@@ -19,16 +19,15 @@ float halfWidth() {
             ImGui::GetStyle().ItemSpacing.x) * 0.5f;
 }
 
-void toolButton(EditorApp& app, const char* label, Tool tool, const char* tip) {
-    const bool on = app.tool.tool == tool;
+void toolButton(ToolState& state, const char* label, Tool tool, const char* tip) {
+    const bool on = state.tool == tool;
     if (on) ImGui::PushStyleColor(ImGuiCol_Button, ImGui::GetStyleColorVec4(ImGuiCol_ButtonActive));
-    if (ImGui::Button(label, {halfWidth(), 0})) selectTool(app, tool);
+    if (ImGui::Button(label, {halfWidth(), 0})) selectTool(state, tool);
     if (on) ImGui::PopStyleColor();
     if (ImGui::IsItemHovered()) ImGui::SetTooltip("%s", tip);
 }
 
-void placingOptions(EditorApp& app) {
-    auto& t = app.tool;
+void placingOptions(ToolState& t) {
     ImGui::Separator();
     const netcheck::PartKind* kind = netcheck::findPartKind(t.placeKind);
     ImGui::Text("Placing: %s", kind ? std::string(kind->label).c_str() : t.placeKind.c_str());
@@ -51,15 +50,15 @@ void placingOptions(EditorApp& app) {
     }
 }
 
-void wireOptions(EditorApp& app) {
+void wireOptions(ToolState& t) {
     static constexpr std::array<const char*, 10> kColours{"red", "black", "yellow", "green", "blue",
                                                          "white", "orange", "brown", "grey", "violet"};
     ImGui::Separator();
     ImGui::TextUnformatted("Wire colour");
     ImGui::SetNextItemWidth(-1);
-    if (ImGui::BeginCombo("##wirecolour", app.tool.wireColour.c_str())) {
+    if (ImGui::BeginCombo("##wirecolour", t.wireColour.c_str())) {
         for (const char* c : kColours)
-            if (ImGui::Selectable(c, app.tool.wireColour == c)) app.tool.wireColour = c;
+            if (ImGui::Selectable(c, t.wireColour == c)) t.wireColour = c;
         ImGui::EndCombo();
     }
     ImGui::TextWrapped("Click a lug or a hole, then the other end.");
@@ -67,32 +66,33 @@ void wireOptions(EditorApp& app) {
 
 }  // namespace
 
-void drawPartsPanel(EditorApp& app, ImVec2 pos, ImVec2 size) {
+void drawPartsPanel(const ToolContext& tools, TestLog& log, ImVec2 pos, ImVec2 size) {
+    ToolState& t = tools.tool;
     if (beginPanel("Parts", pos, size)) {
         ImGui::TextUnformatted("Tools");
-        toolButton(app, "Select (V)", Tool::Select, "Click, shift-click or drag a box; drag to move");
+        toolButton(t, "Select (V)", Tool::Select, "Click, shift-click or drag a box; drag to move");
         ImGui::SameLine();
-        toolButton(app, "Link (L)", Tool::Link, "A wire link between two holes");
-        toolButton(app, "Cut (X)", Tool::Cut, "Click a hole for a hole cut, between two holes for a track cut");
+        toolButton(t, "Link (L)", Tool::Link, "A wire link between two holes");
+        toolButton(t, "Cut (X)", Tool::Cut, "Click a hole for a hole cut, between two holes for a track cut");
         ImGui::SameLine();
-        toolButton(app, "Wire (W)", Tool::Wire, "A flying lead from a lug to a hole or lug");
+        toolButton(t, "Wire (W)", Tool::Wire, "A flying lead from a lug to a hole or lug");
         ImGui::Separator();
         ImGui::TextUnformatted("On the board");
         int column = 0;
         for (const netcheck::PartKind& kind : netcheck::partKinds()) {
             if (kind.offboard) continue;
             const std::string name(kind.name);
-            const bool on = app.tool.tool == Tool::Place && app.tool.placeKind == name;
+            const bool on = t.tool == Tool::Place && t.placeKind == name;
             if (column++ % 2) ImGui::SameLine();
             if (on) ImGui::PushStyleColor(ImGuiCol_Button, ImGui::GetStyleColorVec4(ImGuiCol_ButtonActive));
             if (ImGui::Button(name.c_str(), {halfWidth(), 0}))
-                startPlacing(app, name);
-            app.logItem("place-" + name);
+                startPlacing(t, name);
+            log.item("place-" + name);
             if (on) ImGui::PopStyleColor();
             if (ImGui::IsItemHovered()) ImGui::SetTooltip("%s", std::string(kind.label).c_str());
         }
-        if (app.tool.tool == Tool::Place) placingOptions(app);
-        if (app.tool.tool == Tool::Wire) wireOptions(app);
+        if (t.tool == Tool::Place) placingOptions(t);
+        if (t.tool == Tool::Wire) wireOptions(t);
         ImGui::Separator();
         ImGui::TextUnformatted("Off the board (wired)");
         column = 0;
@@ -101,7 +101,7 @@ void drawPartsPanel(EditorApp& app, ImVec2 pos, ImVec2 size) {
             const std::string name(kind.name);
             if (column++ % 2) ImGui::SameLine();
             if (ImGui::Button(("+ " + name).c_str(), {halfWidth(), 0}))
-                addOffboardPart(app, name);
+                addOffboardPart(tools, name);
             if (ImGui::IsItemHovered()) ImGui::SetTooltip("Add a %s beside the board", std::string(kind.label).c_str());
         }
     }

@@ -2,7 +2,6 @@
 #include <imgui.h>
 #include <imgui_stdlib.h>
 
-#include "editor/app/edit_actions.hpp"
 #include "editor/canvas/part_style.hpp"
 #include "editor/panels/panels.hpp"
 #include "editor/tools/part_factory.hpp"
@@ -22,11 +21,11 @@ bool editText(const char* label, const std::string& current, std::string& out) {
     return ImGui::InputText(label, &out, ImGuiInputTextFlags_EnterReturnsTrue) && out != current;
 }
 
-void replacePart(EditorApp& app, std::size_t index, const netcheck::Part& part, std::string label = {}) {
-    app.perform(std::make_unique<netcheck::edit::ReplacePart>(app.doc.board(), index, part, std::move(label)));
+void replacePart(const EditContext& c, std::size_t index, const netcheck::Part& part, std::string label = {}) {
+    c.commands.perform(std::make_unique<netcheck::edit::ReplacePart>(c.doc.board(), index, part, std::move(label)));
 }
 
-void partKindCombo(EditorApp& app, std::size_t index, const netcheck::Part& part) {
+void partKindCombo(const EditContext& c, std::size_t index, const netcheck::Part& part) {
     ImGui::SetNextItemWidth(-70);
     if (!ImGui::BeginCombo("kind", part.kind.c_str())) return;
     for (const netcheck::PartKind& kind : netcheck::partKinds()) {
@@ -38,13 +37,13 @@ void partKindCombo(EditorApp& app, std::size_t index, const netcheck::Part& part
             const auto names = pinNamesFor(changed.kind, static_cast<int>(part.pins.size()));
             for (std::size_t i = 0; i < changed.pins.size(); ++i) changed.pins[i].name = names[i];
             changed.extra.erase("pinout");
-            replacePart(app, index, changed);
+            replacePart(c, index, changed);
         }
     }
     ImGui::EndCombo();
 }
 
-void pinoutCombo(EditorApp& app, std::size_t index, const netcheck::Part& part) {
+void pinoutCombo(const EditContext& c, std::size_t index, const netcheck::Part& part) {
     const auto choices = pinoutChoices(part.kind);
     if (choices.empty() || part.pins.size() != 3) return;
     const std::string current = pinoutLabel(part);
@@ -52,13 +51,13 @@ void pinoutCombo(EditorApp& app, std::size_t index, const netcheck::Part& part) 
     if (ImGui::BeginCombo("pinout", current.c_str())) {
         for (const std::string& choice : choices)
             if (ImGui::Selectable(choice.c_str(), choice == current) && choice != current)
-                if (auto changed = applyPinout(part, choice)) replacePart(app, index, *changed, "Set pinout of " + part.ref);
+                if (auto changed = applyPinout(part, choice)) replacePart(c, index, *changed, "Set pinout of " + part.ref);
         ImGui::EndCombo();
     }
     if (ImGui::IsItemHovered()) ImGui::SetTooltip("Pick the order printed on your part's datasheet, first hole first.");
 }
 
-void bodyChoice(EditorApp& app, std::size_t index, const netcheck::Part& part) {
+void bodyChoice(const EditContext& c, std::size_t index, const netcheck::Part& part) {
     if (part.pins.size() != 2) return;
     const BodyStyle style = bodyStyleOf(part);
     if (style == BodyStyle::Resistor || style == BodyStyle::Diode) {
@@ -66,7 +65,7 @@ void bodyChoice(EditorApp& app, std::size_t index, const netcheck::Part& part) {
         if (ImGui::Checkbox("stands on end", &standing)) {
             netcheck::Part changed = part;
             changed.extra["body"] = standing ? "standing" : "lying";
-            replacePart(app, index, changed);
+            replacePart(c, index, changed);
         }
     }
     if (part.kind == "capacitor") {
@@ -74,81 +73,81 @@ void bodyChoice(EditorApp& app, std::size_t index, const netcheck::Part& part) {
         if (ImGui::RadioButton("ceramic", ceramic) && !ceramic) {
             netcheck::Part changed = part;
             changed.extra["package"] = "ceramic";
-            replacePart(app, index, changed);
+            replacePart(c, index, changed);
         }
         ImGui::SameLine();
         if (ImGui::RadioButton("film", !ceramic) && ceramic) {
             netcheck::Part changed = part;
             changed.extra["package"] = "film";
-            replacePart(app, index, changed);
+            replacePart(c, index, changed);
         }
     }
 }
 
-void partProperties(EditorApp& app, std::size_t index) {
-    const netcheck::Part part = app.doc.board().parts[index];
+void partProperties(const EditContext& c, std::size_t index) {
+    const netcheck::Part part = c.doc.board().parts[index];
     std::string text;
     if (editText("ref", part.ref, text)) {
-        if (text.empty() || refTaken(app.doc.board(), text, part.ref)) {
-            app.say("The ref " + text + " is already used (or empty); refs must be unique.");
+        if (text.empty() || refTaken(c.doc.board(), text, part.ref)) {
+            c.commands.say("The ref " + text + " is already used (or empty); refs must be unique.");
         } else {
             netcheck::Part changed = part;
             changed.ref = text;
-            replacePart(app, index, changed);
+            replacePart(c, index, changed);
         }
     }
     if (editText("value", part.value, text)) {
         netcheck::Part changed = part;
         changed.value = text;
-        replacePart(app, index, changed);
+        replacePart(c, index, changed);
     }
-    partKindCombo(app, index, part);
-    pinoutCombo(app, index, part);
-    bodyChoice(app, index, part);
+    partKindCombo(c, index, part);
+    pinoutCombo(c, index, part);
+    bodyChoice(c, index, part);
     ImGui::Separator();
     for (const netcheck::Pin& pin : part.pins) ImGui::BulletText("%s in %s", pin.name.c_str(), netcheck::holeName(pin.hole).c_str());
-    if (ImGui::Button("Turn 90° (R)")) rotateSelection(app);
+    if (ImGui::Button("Turn 90° (R)")) rotateSelection(c);
 }
 
-void linkProperties(EditorApp& app, std::size_t index) {
-    const netcheck::Link link = app.doc.board().links[index];
+void linkProperties(const EditContext& c, TestLog& log, std::size_t index) {
+    const netcheck::Link link = c.doc.board().links[index];
     ImGui::Text("Link %s to %s", netcheck::holeName(link.from).c_str(), netcheck::holeName(link.to).c_str());
     bool copper = link.copperSide;
     if (ImGui::Checkbox("on the copper side (solder bridge)", &copper)) {
         netcheck::Link changed = link;
         changed.copperSide = copper;
-        app.perform(std::make_unique<netcheck::edit::ReplaceLink>(app.doc.board(), index, changed));
+        c.commands.perform(std::make_unique<netcheck::edit::ReplaceLink>(c.doc.board(), index, changed));
     }
     bool insulated = link.insulated;
     const bool toggled = ImGui::Checkbox("insulated (sleeved: may cross leads and links)", &insulated);
-    app.logItem("link-insulated");
+    log.item("link-insulated");
     if (toggled) {
         netcheck::Link changed = link;
         changed.insulated = insulated;
-        app.perform(std::make_unique<netcheck::edit::ReplaceLink>(app.doc.board(), index, changed));
+        c.commands.perform(std::make_unique<netcheck::edit::ReplaceLink>(c.doc.board(), index, changed));
     }
 }
 
-void wireProperties(EditorApp& app, std::size_t index) {
-    const netcheck::Wire wire = app.doc.board().wires[index];
+void wireProperties(const EditContext& c, std::size_t index) {
+    const netcheck::Wire wire = c.doc.board().wires[index];
     ImGui::Text("Wire %s to %s", wire.from.name().c_str(), wire.to.name().c_str());
     std::string colour;
     if (editText("colour", wire.color, colour)) {
         netcheck::Wire changed = wire;
         changed.color = colour;
-        app.perform(std::make_unique<netcheck::edit::ReplaceWire>(app.doc.board(), index, changed));
+        c.commands.perform(std::make_unique<netcheck::edit::ReplaceWire>(c.doc.board(), index, changed));
     }
 }
 
-void offboardProperties(EditorApp& app, std::size_t index) {
-    const netcheck::OffboardPart part = app.doc.board().offboard[index];
+void offboardProperties(const EditContext& c, std::size_t index) {
+    const netcheck::OffboardPart part = c.doc.board().offboard[index];
     std::string text;
     auto replace = [&](const netcheck::OffboardPart& changed) {
-        app.perform(std::make_unique<netcheck::edit::ReplaceOffboard>(app.doc.board(), index, changed));
+        c.commands.perform(std::make_unique<netcheck::edit::ReplaceOffboard>(c.doc.board(), index, changed));
     };
     if (editText("ref", part.ref, text)) {
-        if (text.empty() || refTaken(app.doc.board(), text, part.ref)) {
-            app.say("The ref " + text + " is already used (or empty); refs must be unique.");
+        if (text.empty() || refTaken(c.doc.board(), text, part.ref)) {
+            c.commands.say("The ref " + text + " is already used (or empty); refs must be unique.");
         } else {
             auto changed = part;
             changed.ref = text;
@@ -169,24 +168,24 @@ void offboardProperties(EditorApp& app, std::size_t index) {
 
 }  // namespace
 
-void drawPropertiesPanel(EditorApp& app, ImVec2 pos, ImVec2 size) {
+void drawPropertiesPanel(const EditContext& c, TestLog& log, ImVec2 pos, ImVec2 size) {
     if (beginPanel("Properties", pos, size)) {
-        if (app.selection.empty()) {
+        if (c.selection.empty()) {
             ImGui::TextDisabled("Nothing selected.");
             ImGui::TextWrapped("Select something on the board to see and change it here.");
-        } else if (app.selection.size() > 1) {
-            ImGui::Text("%zu items selected", app.selection.size());
-            if (ImGui::Button("Turn parts 90° (R)")) rotateSelection(app);
-            if (ImGui::Button("Duplicate (Ctrl+D)")) duplicateSelection(app);
-            if (ImGui::Button("Delete (Del)")) deleteSelection(app);
+        } else if (c.selection.size() > 1) {
+            ImGui::Text("%zu items selected", c.selection.size());
+            if (ImGui::Button("Turn parts 90° (R)")) rotateSelection(c);
+            if (ImGui::Button("Duplicate (Ctrl+D)")) duplicateSelection(c);
+            if (ImGui::Button("Delete (Del)")) deleteSelection(c);
         } else {
-            const ElementRef ref = *app.selection.begin();
-            const auto& board = app.doc.board();
+            const ElementRef ref = *c.selection.begin();
+            const auto& board = c.doc.board();
             switch (ref.kind) {
-            case ElementRef::Kind::Part: if (ref.index < board.parts.size()) partProperties(app, ref.index); break;
-            case ElementRef::Kind::Link: if (ref.index < board.links.size()) linkProperties(app, ref.index); break;
-            case ElementRef::Kind::Wire: if (ref.index < board.wires.size()) wireProperties(app, ref.index); break;
-            case ElementRef::Kind::Offboard: if (ref.index < board.offboard.size()) offboardProperties(app, ref.index); break;
+            case ElementRef::Kind::Part: if (ref.index < board.parts.size()) partProperties(c, ref.index); break;
+            case ElementRef::Kind::Link: if (ref.index < board.links.size()) linkProperties(c, log, ref.index); break;
+            case ElementRef::Kind::Wire: if (ref.index < board.wires.size()) wireProperties(c, ref.index); break;
+            case ElementRef::Kind::Offboard: if (ref.index < board.offboard.size()) offboardProperties(c, ref.index); break;
             case ElementRef::Kind::Cut:
                 if (ref.index < board.cuts.size()) {
                     const auto& cut = board.cuts[ref.index];
@@ -195,7 +194,7 @@ void drawPropertiesPanel(EditorApp& app, ImVec2 pos, ImVec2 size) {
                 }
                 break;
             }
-            if (ImGui::Button("Delete (Del)")) deleteSelection(app);
+            if (ImGui::Button("Delete (Del)")) deleteSelection(c);
         }
     }
     ImGui::End();

@@ -9,15 +9,15 @@ namespace stripsmith {
 
 namespace {
 
-std::string hoverText(const EditorApp& app) {
+std::string hoverText(const Document& doc, const HoverState& hover) {
     std::string text;
-    if (app.hoverHole) text = netcheck::holeName(*app.hoverHole);
-    else if (app.hoverLug) text = app.hoverLug->name();
+    if (hover.hole) text = netcheck::holeName(*hover.hole);
+    else if (hover.lug) text = hover.lug->name();
     else return {};
-    if (app.hoverHole && app.doc.connectivity().isHoleCut(*app.hoverHole)) return text + "  (hole cut: no copper)";
-    if (app.hoverIsland < 0) return text;
-    if (auto net = app.doc.netOfIsland(app.hoverIsland)) return text + "  net " + *net;
-    const netcheck::Island* island = app.doc.island(app.hoverIsland);
+    if (hover.hole && doc.connectivity().isHoleCut(*hover.hole)) return text + "  (hole cut: no copper)";
+    if (hover.island < 0) return text;
+    if (auto net = doc.netOfIsland(hover.island)) return text + "  net " + *net;
+    const netcheck::Island* island = doc.island(hover.island);
     if (!island) return text;
     if (island->pins.empty()) return text + "  (no pins joined)";
     std::string pins;
@@ -26,8 +26,8 @@ std::string hoverText(const EditorApp& app) {
     return text + "  joins " + pins;
 }
 
-const char* toolHint(const EditorApp& app) {
-    switch (app.tool.tool) {
+const char* toolHint(const ToolState& state) {
+    switch (state.tool) {
     case Tool::Select: return "Select: click, shift-click, drag a box; drag to move; arrows nudge";
     case Tool::Place: return "Place: click the ends (or drag); R turns; Esc stops";
     case Tool::Link: return "Link: click two holes";
@@ -39,23 +39,24 @@ const char* toolHint(const EditorApp& app) {
 
 }  // namespace
 
-void drawStatusBar(EditorApp& app, ImVec2 pos, ImVec2 size) {
+void drawStatusBar(const Document& doc, const HoverState& hover, const ToolState& tool, const std::string& status,
+                   ImVec2 pos, ImVec2 size) {
     if (beginPanel("##status", pos, size)) {
-        const auto& board = app.doc.board();
-        const std::string hover = hoverText(app);
-        ImGui::Text("%s", hover.empty() ? toolHint(app) : hover.c_str());
+        const auto& board = doc.board();
+        const std::string pointer = hoverText(doc, hover);
+        ImGui::Text("%s", pointer.empty() ? toolHint(tool) : pointer.c_str());
         ImGui::SameLine(size.x * 0.45f);
         ImGui::Text("%d x %d holes (%.1f x %.1f mm)", board.cols, board.rows, board.widthMm(), board.heightMm());
         ImGui::SameLine(size.x * 0.68f);
-        ImGui::TextDisabled("%s", app.status.c_str());
+        ImGui::TextDisabled("%s", status.c_str());
     }
     ImGui::End();
 }
 
-void drawHelpWindow(EditorApp& app) {
-    if (!app.view.showHelp) return;
+void drawHelpWindow(bool& open) {
+    if (!open) return;
     ImGui::SetNextWindowSize({520, 0}, ImGuiCond_FirstUseEver);
-    if (ImGui::Begin("Keys", &app.view.showHelp)) {
+    if (ImGui::Begin("Keys", &open)) {
         static constexpr const char* kKeys[][2] = {
             {"V / L / X / W", "select / link / cut / wire tool"},
             {"R", "turn the part being placed or the selected parts"},

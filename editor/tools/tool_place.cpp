@@ -38,45 +38,45 @@ void ghostPart(const CanvasFrame& f, const netcheck::Part& part, bool fits) {
     }
 }
 
-void selectOnly(EditorApp& app, ElementRef::Kind kind, std::size_t index) { app.selection = {ElementRef{kind, index}}; }
+void selectOnly(const ToolContext& c, ElementRef::Kind kind, std::size_t index) { c.selection = {ElementRef{kind, index}}; }
 
-void addPart(EditorApp& app, netcheck::Part part) {
-    const auto& board = app.doc.board();
+void addPart(const ToolContext& c, netcheck::Part part) {
+    const auto& board = c.doc.board();
     if (!fitsOnBoard(part, board)) {
-        app.say("That part would not fit on the board there.");
+        c.commands.say("That part would not fit on the board there.");
         return;
     }
-    if (app.tool.standing && part.pins.size() == 2) part.extra["body"] = "standing";
-    if (app.perform(std::make_unique<netcheck::edit::AddPart>(part)))
-        selectOnly(app, ElementRef::Kind::Part, app.doc.board().parts.size() - 1);
+    if (c.tool.standing && part.pins.size() == 2) part.extra["body"] = "standing";
+    if (c.commands.perform(std::make_unique<netcheck::edit::AddPart>(part)))
+        selectOnly(c, ElementRef::Kind::Part, c.doc.board().parts.size() - 1);
 }
 
-netcheck::Part twoLead(EditorApp& app, Hole a, Hole b) {
-    const auto& board = app.doc.board();
-    return makeTwoLeadPart(app.tool.placeKind, nextFreeRef(board, refPrefix(app.tool.placeKind)),
-                           app.tool.placeValue, a, b);
+netcheck::Part twoLead(const ToolContext& c, Hole a, Hole b) {
+    const auto& board = c.doc.board();
+    return makeTwoLeadPart(c.tool.placeKind, nextFreeRef(board, refPrefix(c.tool.placeKind)),
+                           c.tool.placeValue, a, b);
 }
 
-netcheck::Part multiPin(EditorApp& app, Hole anchor) {
-    const auto& board = app.doc.board();
-    const bool counted = app.tool.placeKind == "ic" || app.tool.placeKind == "header" ||
-                         app.tool.placeKind == "wire-terminal";
-    const int pins = counted ? app.tool.pinCount : defaultPinCount(app.tool.placeKind);
-    return makeMultiPinPart(app.tool.placeKind, nextFreeRef(board, refPrefix(app.tool.placeKind)),
-                            app.tool.placeValue, anchor, app.tool.quarterTurns, pins);
+netcheck::Part multiPin(const ToolContext& c, Hole anchor) {
+    const auto& board = c.doc.board();
+    const bool counted = c.tool.placeKind == "ic" || c.tool.placeKind == "header" ||
+                         c.tool.placeKind == "wire-terminal";
+    const int pins = counted ? c.tool.pinCount : defaultPinCount(c.tool.placeKind);
+    return makeMultiPinPart(c.tool.placeKind, nextFreeRef(board, refPrefix(c.tool.placeKind)),
+                            c.tool.placeValue, anchor, c.tool.quarterTurns, pins);
 }
 
 }  // namespace
 
 // ---- place -------------------------------------------------------------------------------------
 
-void runPlaceTool(EditorApp& app, const CanvasInput& in, const CanvasFrame& f) {
-    auto& t = app.tool;
+void runPlaceTool(const ToolContext& c, const CanvasInput& in, const CanvasFrame& f) {
+    auto& t = c.tool;
     if (!isTwoLead(t.placeKind)) {
         if (!in.hole) return;
-        const netcheck::Part part = multiPin(app, *in.hole);
-        ghostPart(f, part, fitsOnBoard(part, app.doc.board()));
-        if (in.pressed && in.hovered) addPart(app, part);
+        const netcheck::Part part = multiPin(c, *in.hole);
+        ghostPart(f, part, fitsOnBoard(part, c.doc.board()));
+        if (in.pressed && in.hovered) addPart(c, part);
         return;
     }
     // Two-lead: click one end then the other, or drag from one end to the other. A click-click on
@@ -87,34 +87,34 @@ void runPlaceTool(EditorApp& app, const CanvasInput& in, const CanvasFrame& f) {
             t.pressHole = *in.hole;
         } else {
             const Hole second = *in.hole == *t.firstEnd ? defaultSecondHole(t.placeKind, *t.firstEnd, t.standing) : *in.hole;
-            addPart(app, twoLead(app, *t.firstEnd, second));
+            addPart(c, twoLead(c, *t.firstEnd, second));
             t.firstEnd.reset();
         }
     } else if (in.released && t.firstEnd && t.pressHole && in.hole && *in.hole != *t.pressHole) {
-        addPart(app, twoLead(app, *t.firstEnd, *in.hole));
+        addPart(c, twoLead(c, *t.firstEnd, *in.hole));
         t.firstEnd.reset();
     }
     if (in.released) t.pressHole.reset();
     if (t.firstEnd && in.hole) {
         const Hole second = *in.hole == *t.firstEnd ? defaultSecondHole(t.placeKind, *t.firstEnd, t.standing) : *in.hole;
-        ghostPart(f, twoLead(app, *t.firstEnd, second), app.doc.board().contains(second));
+        ghostPart(f, twoLead(c, *t.firstEnd, second), c.doc.board().contains(second));
     } else if (in.hole) {
         const Hole second = defaultSecondHole(t.placeKind, *in.hole, t.standing);
-        ghostPart(f, twoLead(app, *in.hole, second), app.doc.board().contains(second));
+        ghostPart(f, twoLead(c, *in.hole, second), c.doc.board().contains(second));
     }
 }
 
 // ---- link --------------------------------------------------------------------------------------
 
-void runLinkTool(EditorApp& app, const CanvasInput& in, const CanvasFrame& f) {
-    auto& t = app.tool;
+void runLinkTool(const ToolContext& c, const CanvasInput& in, const CanvasFrame& f) {
+    auto& t = c.tool;
     auto place = [&](Hole a, Hole b) {
         if (a == b) return;
         netcheck::Link link;
         link.from = a;
         link.to = b;
-        if (app.perform(std::make_unique<netcheck::edit::AddLink>(link)))
-            selectOnly(app, ElementRef::Kind::Link, app.doc.board().links.size() - 1);
+        if (c.commands.perform(std::make_unique<netcheck::edit::AddLink>(link)))
+            selectOnly(c, ElementRef::Kind::Link, c.doc.board().links.size() - 1);
         t.firstEnd.reset();
     };
     if (in.pressed && in.hovered && in.hole) {
@@ -134,8 +134,8 @@ void runLinkTool(EditorApp& app, const CanvasInput& in, const CanvasFrame& f) {
 
 // ---- cut ---------------------------------------------------------------------------------------
 
-void runCutTool(EditorApp& app, const CanvasInput& in, const CanvasFrame& f) {
-    const auto& board = app.doc.board();
+void runCutTool(const ToolContext& c, const CanvasInput& in, const CanvasFrame& f) {
+    const auto& board = c.doc.board();
     const auto cut = cutAt(in.board, board.rows, board.cols);
     if (!cut) return;
     if (cut->kind == netcheck::Cut::Kind::Hole) {
@@ -144,14 +144,14 @@ void runCutTool(EditorApp& app, const CanvasInput& in, const CanvasFrame& f) {
         const float x = static_cast<float>(cut->hole.col) + 1.0f, y = static_cast<float>(cut->hole.row) + 0.5f;
         f.draw->AddLine(f.at({x, y - 0.5f}), f.at({x, y + 0.5f}), palette::kGhost, 4.0f);
     }
-    if (in.pressed && in.hovered) app.perform(netcheck::edit::toggleCut(board, *cut));
+    if (in.pressed && in.hovered) c.commands.perform(netcheck::edit::toggleCut(board, *cut));
 }
 
 // ---- wire --------------------------------------------------------------------------------------
 
-void runWireTool(EditorApp& app, const CanvasInput& in, const CanvasFrame& f) {
-    auto& t = app.tool;
-    const auto& board = app.doc.board();
+void runWireTool(const ToolContext& c, const CanvasInput& in, const CanvasFrame& f) {
+    auto& t = c.tool;
+    const auto& board = c.doc.board();
     std::optional<netcheck::Endpoint> here;
     if (in.lug) here = netcheck::Endpoint::atLug(*in.lug);
     else if (in.hole && board.contains(*in.hole)) here = netcheck::Endpoint::atHole(*in.hole);
@@ -174,31 +174,41 @@ void runWireTool(EditorApp& app, const CanvasInput& in, const CanvasFrame& f) {
     wire.from = *t.wireStart;
     wire.to = *here;
     wire.color = t.wireColour;
-    if (app.perform(std::make_unique<netcheck::edit::AddWire>(wire)))
-        selectOnly(app, ElementRef::Kind::Wire, app.doc.board().wires.size() - 1);
+    if (c.commands.perform(std::make_unique<netcheck::edit::AddWire>(wire)))
+        selectOnly(c, ElementRef::Kind::Wire, c.doc.board().wires.size() - 1);
     t.wireStart.reset();
 }
 
 // ---- switching tools ----------------------------------------------------------------------------
 
-void selectTool(EditorApp& app, Tool tool) {
-    app.tool.cancel();
-    app.tool.tool = tool;
+void selectTool(ToolState& state, Tool tool) {
+    state.cancel();
+    state.tool = tool;
 }
 
-void startPlacing(EditorApp& app, const std::string& kind) {
-    selectTool(app, Tool::Place);
-    app.tool.placeKind = kind;
-    app.tool.placeValue = defaultValue(kind);
-    app.tool.quarterTurns = 0;
-    app.tool.pinCount = defaultPinCount(kind);
+void startPlacing(ToolState& state, const std::string& kind) {
+    selectTool(state, Tool::Place);
+    state.placeKind = kind;
+    state.placeValue = defaultValue(kind);
+    state.quarterTurns = 0;
+    state.pinCount = defaultPinCount(kind);
 }
 
-void addOffboardPart(EditorApp& app, const std::string& kind) {
+void runActiveTool(const ToolContext& c, const CanvasInput& in, const CanvasFrame& f) {
+    switch (c.tool.tool) {
+    case Tool::Select: runSelectTool(c, in, f); break;
+    case Tool::Place: runPlaceTool(c, in, f); break;
+    case Tool::Link: runLinkTool(c, in, f); break;
+    case Tool::Cut: runCutTool(c, in, f); break;
+    case Tool::Wire: runWireTool(c, in, f); break;
+    }
+}
+
+void addOffboardPart(const ToolContext& c, const std::string& kind) {
     const netcheck::PartKind* k = netcheck::findPartKind(kind);
     netcheck::OffboardPart part;
     part.kind = kind;
-    part.ref = nextFreeRef(app.doc.board(), refPrefix(kind));
+    part.ref = nextFreeRef(c.doc.board(), refPrefix(kind));
     part.value = defaultValue(kind);
     if (k && !k->pins.empty()) {
         for (std::string_view n : k->pins) part.pins.emplace_back(n);
@@ -206,8 +216,8 @@ void addOffboardPart(EditorApp& app, const std::string& kind) {
         // Switches: a common on-on toggle has three lugs.
         part.pins = {"1", "2", "3"};
     }
-    if (app.perform(std::make_unique<netcheck::edit::AddOffboard>(part)))
-        selectOnly(app, ElementRef::Kind::Offboard, app.doc.board().offboard.size() - 1);
+    if (c.commands.perform(std::make_unique<netcheck::edit::AddOffboard>(part)))
+        selectOnly(c, ElementRef::Kind::Offboard, c.doc.board().offboard.size() - 1);
 }
 
 }  // namespace stripsmith

@@ -1,39 +1,41 @@
 // The canvas tools. Each reads the mouse over the canvas, emits commands, and draws its preview.
 #pragma once
 
-#include <optional>
+#include <string>
 
-#include <imgui.h>
-
-#include "editor/app/editor_app.hpp"
+#include "editor/app/commands.hpp"
+#include "editor/app/document.hpp"
+#include "editor/app/selection.hpp"
+#include "editor/app/tool_state.hpp"
 #include "editor/canvas/canvas_frame.hpp"
+#include "editor/canvas/canvas_input.hpp"
 
 namespace stripsmith {
 
-/// The mouse over the canvas this frame, in board terms.
-struct CanvasInput {
-    ImVec2 board{0, 0};                        ///< board units under the mouse
-    bool hovered = false;                      ///< mouse over the canvas (and no popup above it)
-    std::optional<netcheck::Hole> hole;        ///< hole under the mouse (nearest cell)
-    std::optional<netcheck::PinRef> lug;       ///< off-board lug under the mouse
-    bool pressed = false;                      ///< left button went down this frame
-    bool released = false;                     ///< left button went up this frame
-    bool down = false;                         ///< left button held
-    bool shift = false;
+/// What the tools read and change: the board (read-only), the selection, the tool's own state,
+/// and the way to emit commands.
+struct ToolContext {
+    const Document& doc;
+    Selected& selection;
+    ToolState& tool;
+    Commands commands;
 };
 
-void runSelectTool(EditorApp& app, const CanvasInput& in, const CanvasFrame& f);
-void runPlaceTool(EditorApp& app, const CanvasInput& in, const CanvasFrame& f);
-void runLinkTool(EditorApp& app, const CanvasInput& in, const CanvasFrame& f);
-void runCutTool(EditorApp& app, const CanvasInput& in, const CanvasFrame& f);
-void runWireTool(EditorApp& app, const CanvasInput& in, const CanvasFrame& f);
+/// Runs the active tool on this frame's mouse input and draws its preview on the canvas.
+void runActiveTool(const ToolContext& c, const CanvasInput& in, const CanvasFrame& f);
+
+void runSelectTool(const ToolContext& c, const CanvasInput& in, const CanvasFrame& f);
+void runPlaceTool(const ToolContext& c, const CanvasInput& in, const CanvasFrame& f);
+void runLinkTool(const ToolContext& c, const CanvasInput& in, const CanvasFrame& f);
+void runCutTool(const ToolContext& c, const CanvasInput& in, const CanvasFrame& f);
+void runWireTool(const ToolContext& c, const CanvasInput& in, const CanvasFrame& f);
 
 /// Switches tool, dropping any half-done gesture.
-void selectTool(EditorApp& app, Tool tool);
+void selectTool(ToolState& state, Tool tool);
 /// Picks a part kind to place (switches to the place tool).
-void startPlacing(EditorApp& app, const std::string& kind);
+void startPlacing(ToolState& state, const std::string& kind);
 
 /// Adds an off-board part of a kind beside the board (ref numbered automatically).
-void addOffboardPart(EditorApp& app, const std::string& kind);
+void addOffboardPart(const ToolContext& c, const std::string& kind);
 
 }  // namespace stripsmith

@@ -7,7 +7,7 @@
 #include <imgui.h>
 
 #include "editor/app/editor_app.hpp"
-#include "editor/app/frame.hpp"
+#include "editor/frame.hpp"
 #include "editor/app/look.hpp"
 #include "editor/platform/draw_data_split.hpp"
 #include "editor/tools/part_factory.hpp"

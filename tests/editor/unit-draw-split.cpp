@@ -5,7 +5,8 @@
 #include <imgui.h>
 
 #include "editor/app/editor_app.hpp"
-#include "editor/app/frame.hpp"
+#include "editor/canvas/board_transform.hpp"
+#include "editor/frame.hpp"
 #include "editor/platform/draw_data_split.hpp"
 #include "editor/tools/part_factory.hpp"
 

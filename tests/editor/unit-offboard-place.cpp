@@ -4,7 +4,7 @@
 
 #include <cmath>
 
-#include "editor/app/edit_actions.hpp"
+#include "editor/tools/edit_actions.hpp"
 #include "editor/canvas/offboard_layout.hpp"
 #include "netcheck/file/board_file.hpp"
 #include "netcheck/edit/history.hpp"

@@ -1,7 +1,7 @@
 // Tool logic without a window: part making, rotation, pinouts, ref numbering, paste, fixes.
 #include <doctest/doctest.h>
 
-#include "editor/app/edit_actions.hpp"
+#include "editor/tools/edit_actions.hpp"
 #include "editor/app/finding_fix.hpp"
 #include "netcheck/check/circuit_capture.hpp"
 #include "editor/tools/hit_test.hpp"

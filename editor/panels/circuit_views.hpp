@@ -4,20 +4,22 @@
 
 #include <string>
 
-#include "editor/app/editor_app.hpp"
+#include "editor/panels/panels.hpp"
 #include "netcheck/edit/circuit_edits.hpp"
 
 namespace stripsmith {
 
 /// Performs an edit as one SetCircuit command labelled `label`, or shows why it was refused.
-void applyCircuitEdit(EditorApp& app, const netcheck::CircuitEdit& edit, const std::string& label);
+void applyCircuitEdit(const CircuitPanelContext& c, const netcheck::CircuitEdit& edit,
+                      const std::string& label);
 
 /// Parts with kind, value and pins; add, edit, remove; a net name for every pin.
-void drawCircuitParts(EditorApp& app, const netcheck::Circuit& circuit);
+void drawCircuitParts(const CircuitPanelContext& c, const netcheck::Circuit& circuit);
 /// Nets with their pins; rename and merge.
-void drawCircuitNets(EditorApp& app, const netcheck::Circuit& circuit);
-/// The board beside the circuit.
-void drawCircuitDifference(EditorApp& app);
+void drawCircuitNets(const CircuitPanelContext& c, const netcheck::Circuit& circuit);
+
+/// The board beside the circuit, net by net, as the check sees it.
+void drawCircuitDifference(const netcheck::Board& board, CircuitPanelState& state);
 
 /// Text box for a net name with a drop-down of matching existing names. True when the maker
 /// confirmed a name (Enter, leaving the box after typing, or a pick from the list); then `text`

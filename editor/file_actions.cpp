@@ -1,8 +1,7 @@
 // Sections: loading and saving | actions | dialogs | autosave.
-#include "editor/files/file_actions.hpp"
+#include "editor/file_actions.hpp"
 
 #include <algorithm>
-#include <cstdio>
 #include <filesystem>
 
 #include <imgui.h>
@@ -175,7 +174,7 @@ void drawUnsavedPrompt(EditorApp& app) {
         ImGui::CloseCurrentPopup();
     };
     const bool save = ImGui::Button("Save", {110, 0});
-    app.logItem("unsaved-save");
+    app.log.item("unsaved-save");
     if (save) {
         if (!app.doc.path().empty() && !app.doc.readOnly()) {
             close();
@@ -189,14 +188,14 @@ void drawUnsavedPrompt(EditorApp& app) {
     }
     ImGui::SameLine();
     const bool discard = ImGui::Button("Don't save", {110, 0});
-    app.logItem("unsaved-dont-save");
+    app.log.item("unsaved-dont-save");
     if (discard) {
         close();
         doPending(app, action, path);
     }
     ImGui::SameLine();
     const bool cancel = ImGui::Button("Cancel", {110, 0});
-    app.logItem("unsaved-cancel");
+    app.log.item("unsaved-cancel");
     if (cancel) close();
     ImGui::EndPopup();
 }
@@ -211,7 +210,7 @@ void drawMessage(EditorApp& app, const char* title, std::string& text, bool& cle
     ImGui::PopTextWrapPos();
     ImGui::Spacing();
     const bool ok = ImGui::Button("OK", {110, 0});
-    app.logItem("message-ok");
+    app.log.item("message-ok");
     // Not on the frame it appears: the Enter that accepted a file chooser would close it unseen.
     if (ok || (ImGui::IsKeyPressed(ImGui::GetKeyIndex(ImGuiKey_Enter)) && !ImGui::IsWindowAppearing())) {
         clear = true;
@@ -231,7 +230,7 @@ void drawRecoveryOffer(EditorApp& app) {
                 rec.originalPath.empty() ? "" : " (", rec.originalPath.empty() ? "" : (rec.originalPath + ")").c_str());
     ImGui::Spacing();
     const bool restore = ImGui::Button("Restore", {110, 0});
-    app.logItem("restore");
+    app.log.item("restore");
     if (restore) {
         auto result = netcheck::readBoard(rec.boardText, "recovered board");
         if (result.ok()) {
@@ -253,20 +252,16 @@ void drawRecoveryOffer(EditorApp& app) {
     ImGui::EndPopup();
 }
 
-// With STRIPSMITH_E2E_LOG set: one "STRIPSMITH_E2E dialogs ..." line each time the open dialogs
-// change, so scripted tests wait for a dialog before they type or click in it.
+// Which dialogs are open, so scripted tests wait for a dialog before they type or click in it.
 void logDialogs(EditorApp& app) {
-    if (!app.logHoles) return;
+    if (!app.log.on()) return;
     std::string state = app.chooser.isOpen() ? "chooser" : "-";
     if (app.dialogs.askUnsaved) state += " unsaved";
     if (!app.dialogs.errorText.empty())
         state += " error " + app.dialogs.errorTitle + ": " + app.dialogs.errorText;
     if (!app.dialogs.notice.empty()) state += " note " + app.dialogs.notice;
     std::replace(state.begin(), state.end(), '\n', ' ');
-    std::string& last = app.loggedItems["dialogs"];
-    if (last == state) return;
-    last = state;
-    std::fprintf(stderr, "STRIPSMITH_E2E dialogs %s\n", state.c_str());
+    app.log.dialogs(state);
 }
 
 }  // namespace

@@ -1,5 +1,6 @@
 // New, open, save, save as, recent, quit: each asks about unsaved changes first where it must,
-// and reports problems in a dialog without touching the open document.
+// and reports problems in a dialog without touching the open document. These work on the whole
+// editor (a new document resets the selection, tool and view), so they sit beside the frame.
 #pragma once
 
 #include <string>

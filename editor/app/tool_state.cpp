@@ -1,4 +1,4 @@
-#include "editor/tools/tool_state.hpp"
+#include "editor/app/tool_state.hpp"
 
 #include <array>
 #include <string_view>

@@ -1,4 +1,4 @@
-#include "editor/app/edit_actions.hpp"
+#include "editor/tools/edit_actions.hpp"
 
 #include <algorithm>
 #include <climits>
@@ -14,48 +14,40 @@ namespace stripsmith {
 using netcheck::Hole;
 using netcheck::edit::ElementRef;
 
-void undo(EditorApp& app) {
-    const std::string label = app.doc.history().undoLabel();
-    if (app.doc.undo()) {
-        app.selection.clear();
-        app.say("Undid: " + label);
-    }
+void undo(const EditContext& c) {
+    if (c.commands.undo()) c.selection.clear();
 }
 
-void redo(EditorApp& app) {
-    const std::string label = app.doc.history().redoLabel();
-    if (app.doc.redo()) {
-        app.selection.clear();
-        app.say("Redid: " + label);
-    }
+void redo(const EditContext& c) {
+    if (c.commands.redo()) c.selection.clear();
 }
 
-void deleteSelection(EditorApp& app) {
-    if (app.selection.empty()) return;
-    std::vector<ElementRef> refs(app.selection.begin(), app.selection.end());
-    if (app.perform(netcheck::edit::deleteElements(app.doc.board(), refs))) app.selection.clear();
+void deleteSelection(const EditContext& c) {
+    if (c.selection.empty()) return;
+    std::vector<ElementRef> refs(c.selection.begin(), c.selection.end());
+    if (c.commands.perform(netcheck::edit::deleteElements(c.doc.board(), refs))) c.selection.clear();
 }
 
-void rotateSelection(EditorApp& app) {
-    const auto& board = app.doc.board();
+void rotateSelection(const EditContext& c) {
+    const auto& board = c.doc.board();
     std::vector<std::unique_ptr<netcheck::edit::Command>> members;
-    for (const ElementRef& ref : app.selection) {
+    for (const ElementRef& ref : c.selection) {
         if (ref.kind != ElementRef::Kind::Part) continue;
         const netcheck::Part turned = rotatePart(board.parts[ref.index]);
         if (!fitsOnBoard(turned, board)) continue;
         members.push_back(std::make_unique<netcheck::edit::ReplacePart>(board, ref.index, turned, "Rotate " + turned.ref));
     }
     if (members.empty()) return;
-    if (members.size() == 1) app.perform(std::move(members.front()));
-    else app.perform(std::make_unique<netcheck::edit::CompoundCommand>("Rotate parts", std::move(members)));
+    if (members.size() == 1) c.commands.perform(std::move(members.front()));
+    else c.commands.perform(std::make_unique<netcheck::edit::CompoundCommand>("Rotate parts", std::move(members)));
 }
 
-void nudgeSelection(EditorApp& app, int rows, int cols) {
-    const auto& board = app.doc.board();
-    for (const ElementRef& ref : app.selection)
+void nudgeSelection(const EditContext& c, int rows, int cols) {
+    const auto& board = c.doc.board();
+    for (const ElementRef& ref : c.selection)
         for (const Hole& h : holesOf(board, ref))
             if (!board.contains({h.row + rows, h.col + cols})) return;
-    app.perform(moveCommand(board, app.selection, rows, cols), kMergeArrowMove);
+    c.commands.perform(moveCommand(board, c.selection, rows, cols), kMergeArrowMove);
 }
 
 std::unique_ptr<netcheck::edit::Command> moveCommand(const netcheck::Board& board, const Selected& selection,
@@ -146,48 +138,48 @@ std::unique_ptr<netcheck::edit::Command> pasteCommand(const netcheck::Board& boa
     return std::make_unique<netcheck::edit::CompoundCommand>("Paste", std::move(members));
 }
 
-void copySelection(EditorApp& app) {
-    app.clipboard = copyOf(app.doc.board(), app.selection);
-    if (!app.clipboard.empty()) app.say("Copied");
+void copySelection(const EditContext& c) {
+    c.clipboard = copyOf(c.doc.board(), c.selection);
+    if (!c.clipboard.empty()) c.commands.say("Copied");
 }
 
-void paste(EditorApp& app, std::optional<Hole> at) {
-    if (app.clipboard.empty()) return;
+void paste(const EditContext& c, std::optional<Hole> at) {
+    if (c.clipboard.empty()) return;
     const Hole where = at.value_or(Hole{1, 1});
     std::string reason;
-    auto command = pasteCommand(app.doc.board(), app.clipboard, where, &reason);
+    auto command = pasteCommand(c.doc.board(), c.clipboard, where, &reason);
     if (!command) {
-        if (!reason.empty()) app.say(reason);
+        if (!reason.empty()) c.commands.say(reason);
         return;
     }
-    const auto& board = app.doc.board();
+    const auto& board = c.doc.board();
     const std::size_t parts = board.parts.size(), links = board.links.size(), cuts = board.cuts.size();
-    if (!app.perform(std::move(command))) return;
-    app.selection.clear();
-    const auto& after = app.doc.board();
-    for (std::size_t i = parts; i < after.parts.size(); ++i) app.selection.insert({ElementRef::Kind::Part, i});
-    for (std::size_t i = links; i < after.links.size(); ++i) app.selection.insert({ElementRef::Kind::Link, i});
-    for (std::size_t i = cuts; i < after.cuts.size(); ++i) app.selection.insert({ElementRef::Kind::Cut, i});
+    if (!c.commands.perform(std::move(command))) return;
+    c.selection.clear();
+    const auto& after = c.doc.board();
+    for (std::size_t i = parts; i < after.parts.size(); ++i) c.selection.insert({ElementRef::Kind::Part, i});
+    for (std::size_t i = links; i < after.links.size(); ++i) c.selection.insert({ElementRef::Kind::Link, i});
+    for (std::size_t i = cuts; i < after.cuts.size(); ++i) c.selection.insert({ElementRef::Kind::Cut, i});
 }
 
-void duplicateSelection(EditorApp& app) {
-    const auto& board = app.doc.board();
+void duplicateSelection(const EditContext& c) {
+    const auto& board = c.doc.board();
     Hole corner{INT_MAX, INT_MAX};
-    for (const ElementRef& ref : app.selection)
+    for (const ElementRef& ref : c.selection)
         for (const Hole& h : holesOf(board, ref)) corner = {std::min(corner.row, h.row), std::min(corner.col, h.col)};
     if (corner.row == INT_MAX) return;
-    app.clipboard = copyOf(board, app.selection);
-    paste(app, Hole{corner.row + 1, corner.col + 1});
+    c.clipboard = copyOf(board, c.selection);
+    paste(c, Hole{corner.row + 1, corner.col + 1});
 }
 
-void selectAll(EditorApp& app) {
-    const auto& b = app.doc.board();
-    app.selection.clear();
-    for (std::size_t i = 0; i < b.parts.size(); ++i) app.selection.insert({ElementRef::Kind::Part, i});
-    for (std::size_t i = 0; i < b.links.size(); ++i) app.selection.insert({ElementRef::Kind::Link, i});
-    for (std::size_t i = 0; i < b.cuts.size(); ++i) app.selection.insert({ElementRef::Kind::Cut, i});
-    for (std::size_t i = 0; i < b.wires.size(); ++i) app.selection.insert({ElementRef::Kind::Wire, i});
-    for (std::size_t i = 0; i < b.offboard.size(); ++i) app.selection.insert({ElementRef::Kind::Offboard, i});
+void selectAll(const EditContext& c) {
+    const auto& b = c.doc.board();
+    c.selection.clear();
+    for (std::size_t i = 0; i < b.parts.size(); ++i) c.selection.insert({ElementRef::Kind::Part, i});
+    for (std::size_t i = 0; i < b.links.size(); ++i) c.selection.insert({ElementRef::Kind::Link, i});
+    for (std::size_t i = 0; i < b.cuts.size(); ++i) c.selection.insert({ElementRef::Kind::Cut, i});
+    for (std::size_t i = 0; i < b.wires.size(); ++i) c.selection.insert({ElementRef::Kind::Wire, i});
+    for (std::size_t i = 0; i < b.offboard.size(); ++i) c.selection.insert({ElementRef::Kind::Offboard, i});
 }
 
 }  // namespace stripsmith

@@ -1,0 +1,24 @@
+// Modal dialogs waiting to be shown: errors, notices, "save changes?", the crash recovery offer.
+#pragma once
+
+#include <optional>
+#include <string>
+
+#include "editor/files/recovery.hpp"
+
+namespace stripsmith {
+
+/// What to do once the maker has answered "save changes?".
+enum class PendingAction { None, New, Open, OpenPath, Quit };
+
+struct Dialogs {
+    std::string errorTitle;  ///< non-empty: show an error message
+    std::string errorText;
+    PendingAction pending = PendingAction::None;  ///< non-None: ask about unsaved changes
+    std::string pendingPath;
+    bool askUnsaved = false;
+    std::optional<RecoveryFile> recovery;  ///< offer to restore after a crash
+    std::string notice;                    ///< informational message (read-only file ...)
+};
+
+}  // namespace stripsmith
