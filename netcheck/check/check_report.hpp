@@ -41,11 +41,14 @@ struct FindingTypeInfo {
     std::string_view id;       ///< as written in reports, e.g. "pin-on-cut"
     Severity severity;
     std::string_view meaning;  ///< one line, for the docs and the editor's tooltips
+    std::string_view fields;   ///< the JSON report's fields for this type, in Markdown
 };
 
 /// The whole table, in report order (errors first).
 std::span<const FindingTypeInfo> findingTypes();
 const FindingTypeInfo& findingTypeInfo(FindingType type);
+/// The table as the README prints it (Markdown, one row per type).
+std::string findingTypesMarkdown();
 /// "short", "pin-on-cut" ...
 std::string_view findingId(FindingType type);
 /// The type of an id; nullopt for an unknown one.
