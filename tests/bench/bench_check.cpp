@@ -2,7 +2,7 @@
 // there are no findings to locate) on generated boards from 10x10 to 1000x1000 holes, with parts,
 // cuts and links in proportion to the holes (the 60x40 board with 100 parts sets the density), and
 // Boost.Graph's connected_components over the same hole graph as a baseline, in the same run.
-// The same boards are also re-checked by one Checker kept between checks (as the editor does),
+// The same boards are also re-checked through a Checker (as the editor does, keeping the copper),
 // checked after a round trip through the board file (as the CLI and the editor hold them), and
 // read field by field with no check at all (the floor).
 //   build-release/bin/bench_check --benchmark_counters_tabular=true
@@ -145,7 +145,7 @@ void readModel(benchmark::State& state) {
     setCounters(state, board);
 }
 
-// The editor's case: one Checker re-checks the board after every edit, reusing its memory.
+// The editor's case: one Checker re-checks the board after every edit, keeping the copper it traced.
 void recheck(benchmark::State& state) {
     const Board board = boardOfSide(static_cast<int>(state.range(0)));
     Checker checker;
