@@ -8,7 +8,7 @@
 
 #include "netcheck/file/board_file.hpp"
 #include "netcheck/check/check.hpp"
-#include "netcheck/file/circuit_loader.hpp"
+#include "netcheck/spice/circuit_loader.hpp"
 #include "netcheck/file/file_io.hpp"
 #include "netcheck/check/report_format.hpp"
 

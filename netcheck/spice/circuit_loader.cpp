@@ -1,5 +1,5 @@
 // The one place that decides how a circuit file is read.
-#include "netcheck/file/circuit_loader.hpp"
+#include "netcheck/spice/circuit_loader.hpp"
 
 namespace netcheck {
 
