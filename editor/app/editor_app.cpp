@@ -42,4 +42,14 @@ void EditorApp::logItem(const std::string& name) {
     std::fprintf(stderr, "STRIPSMITH_E2E item %s %s\n", name.c_str(), where);
 }
 
+void EditorApp::logFrame(unsigned long keysTaken, unsigned long buttonsTaken) {
+    if (!logHoles) return;
+    ++loggedFrames;
+    char mouse[32] = "- -";
+    if (const ImVec2 at = ImGui::GetIO().MousePos; ImGui::IsMousePosValid(&at))
+        std::snprintf(mouse, sizeof mouse, "%.0f %.0f", static_cast<double>(at.x), static_cast<double>(at.y));
+    std::fprintf(stderr, "STRIPSMITH_E2E frame %lu revision %u keys %lu buttons %lu mouse %s\n", loggedFrames,
+                 doc.revision(), keysTaken, buttonsTaken, mouse);
+}
+
 }  // namespace stripsmith

@@ -67,6 +67,7 @@ struct EditorApp {
     bool logHoles = false;                ///< STRIPSMITH_E2E_LOG: print hole screen positions
     std::string lastLoggedView;
     std::map<std::string, std::string> loggedItems;
+    unsigned long loggedFrames = 0;
     std::string chosenForPanel;           ///< a circuit or sheet path picked in the chooser
     CircuitPanelState circuitPanel;       ///< the Circuit panel's typed text and choices
 
@@ -75,6 +76,12 @@ struct EditorApp {
     /// With STRIPSMITH_E2E_LOG set: prints the last ImGui item's centre as "STRIPSMITH_E2E item
     /// NAME X Y" when it moves, so scripted tests know where to click (they still click).
     void logItem(const std::string& name);
+    /// With STRIPSMITH_E2E_LOG set: prints "STRIPSMITH_E2E frame N revision R keys K buttons B
+    /// mouse X Y" at the end of every frame: frames done, the document's revision, how many key
+    /// presses (modifiers aside) and mouse-button presses and releases the editor has taken in so
+    /// far, and where it last saw the mouse ("- -": outside the window). Scripted tests wait for
+    /// what they sent to be taken before they look for its effect (or send it again).
+    void logFrame(unsigned long keysTaken, unsigned long buttonsTaken);
     /// Message for the status bar.
     void say(std::string message);
 };
