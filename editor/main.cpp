@@ -153,6 +153,29 @@ bool saveScreenshot(unsigned width, unsigned height, const std::string& path) {
 
 // ---- main loop -------------------------------------------------------------------------------------
 
+// Key presses (modifiers aside) and mouse-button presses and releases in the input queue. What feeding the
+// queue removes from it is what a frame took in; the STRIPSMITH_E2E frame line reports the sums.
+struct InputCount {
+    unsigned long keys = 0;
+    unsigned long buttons = 0;
+};
+
+InputCount countInput(const std::deque<sf::Event>& queue) {
+    using K = sf::Keyboard;
+    InputCount count;
+    for (const sf::Event& event : queue) {
+        if (event.type == sf::Event::MouseButtonPressed || event.type == sf::Event::MouseButtonReleased)
+            ++count.buttons;
+        if (event.type != sf::Event::KeyPressed) continue;
+        const K::Key key = event.key.code;
+        const bool modifier = key == K::LControl || key == K::RControl || key == K::LShift ||
+                              key == K::RShift || key == K::LAlt || key == K::RAlt ||
+                              key == K::LSystem || key == K::RSystem;
+        if (!modifier) ++count.keys;
+    }
+    return count;
+}
+
 int run(const Options& options) {
     ImGui::CreateContext();
     ImGui::GetIO().IniFilename = nullptr;  // the layout is fixed; nothing to remember
@@ -199,12 +222,19 @@ int run(const Options& options) {
     }
 
     std::deque<sf::Event> queue;
+    InputCount taken;
     std::string title;
     auto last = std::chrono::steady_clock::now();
     while (!screenshot && !app.quitNow && window.isOpen()) {
         for (sf::Event event; window.pollEvent(event);) queue.push_back(event);
         bool closeRequested = false;
+        const InputCount waiting = app.log.on() ? countInput(queue) : InputCount{};
         platform::feedEvents(queue, closeRequested);
+        if (app.log.on()) {
+            const InputCount left = countInput(queue);
+            taken.keys += waiting.keys - left.keys;
+            taken.buttons += waiting.buttons - left.buttons;
+        }
         if (closeRequested) app.quitRequested = true;
         const auto now = std::chrono::steady_clock::now();
         const float dt = std::chrono::duration<float>(now - last).count();
@@ -216,6 +246,7 @@ int run(const Options& options) {
             title = t;
             window.setTitle(title);
         }
+        app.log.frame(app.doc.revision(), taken.keys, taken.buttons);
     }
     if (!screenshot) endSession(app);
 

@@ -34,6 +34,16 @@ void TestLog::view(ImVec2 a1, float pitch, bool mirrored, int rows, int cols) co
     line(text);
 }
 
+void TestLog::frame(unsigned revision, unsigned long keysTaken, unsigned long buttonsTaken) {
+    if (!on_) return;
+    ++frames_;
+    char mouse[32] = "- -";
+    if (const ImVec2 at = ImGui::GetIO().MousePos; ImGui::IsMousePosValid(&at))
+        std::snprintf(mouse, sizeof mouse, "%.0f %.0f", static_cast<double>(at.x), static_cast<double>(at.y));
+    line("frame " + std::to_string(frames_) + " revision " + std::to_string(revision) + " keys " +
+         std::to_string(keysTaken) + " buttons " + std::to_string(buttonsTaken) + " mouse " + mouse);
+}
+
 void TestLog::line(const std::string& text) const {
     if (on_) std::fprintf(stderr, "STRIPSMITH_E2E %s\n", text.c_str());
 }

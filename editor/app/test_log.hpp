@@ -44,6 +44,12 @@ public:
     void lug(const std::string& ref, const std::string& pin, ImVec2 at) const {
         line("lug " + ref + "." + pin + " " + xy(at));
     }
+    /// At the end of every frame: "frame N revision R keys K buttons B mouse X Y": frames done,
+    /// the document's revision, how many key presses (modifiers aside) and mouse-button presses
+    /// and releases the editor has taken in so far, and where it last saw the mouse ("- -":
+    /// outside the window). Scripts wait for what they sent to be taken before they look for its
+    /// effect (or send it again).
+    void frame(unsigned revision, unsigned long keysTaken, unsigned long buttonsTaken);
 
 private:
     void line(const std::string& text) const;
@@ -51,6 +57,7 @@ private:
 
     bool on_ = false;
     std::map<std::string, std::string> last_;
+    unsigned long frames_ = 0;
 };
 
 }  // namespace stripsmith

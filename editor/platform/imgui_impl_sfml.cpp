@@ -94,9 +94,16 @@ void updateModifiers(ImGuiIO& io) {
     io.KeySuper = io.KeysDown[K::LSystem] || io.KeysDown[K::RSystem];
 }
 
+bool isModifier(sf::Keyboard::Key key) {
+    using K = sf::Keyboard;
+    return key == K::LControl || key == K::RControl || key == K::LShift || key == K::RShift ||
+           key == K::LAlt || key == K::RAlt || key == K::LSystem || key == K::RSystem;
+}
+
 // Keys and buttons already changed this frame: a second change waits for the next frame.
 struct FrameChanges {
     std::array<bool, 512> keys{};
+    bool keyWentDown = false;  ///< a key other than a modifier was pressed this frame
     std::array<bool, sf::Mouse::ButtonCount> buttons{};
 };
 
@@ -115,7 +122,11 @@ bool applyEvent(const sf::Event& event, FrameChanges& changed, BackendData& bd, 
         const bool down = event.type == sf::Event::KeyPressed;
         if (io.KeysDown[k] == down) return true;  // auto-repeat or duplicate
         if (changed.keys[k]) return false;
+        // Ctrl let go in the frame S went down would take Ctrl+S apart (fast fingers, and xdotool,
+        // let go of the modifier first): the release waits for the next frame.
+        if (!down && isModifier(key) && changed.keyWentDown) return false;
         changed.keys[k] = true;
+        if (down && !isModifier(key)) changed.keyWentDown = true;
         io.KeysDown[k] = down;
         updateModifiers(io);
         return true;

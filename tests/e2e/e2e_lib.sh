@@ -34,118 +34,216 @@ check() {  # check "what" command...
     fi
 }
 
+# finish: the script's verdict. A run in which no check ran (a script cut short, a helper that
+# ended it early) is a failure too, never a silent pass.
 finish() {
-    if [ "$FAILED" -ne 0 ]; then
+    if [ "$FAILED" -ne 0 ] || [ "$PASSED" -eq 0 ]; then
         echo "--- what the editor did:"
         grep "STRIPSMITH_E2E status" "$LOG" || true
     fi
     echo "$PASSED passed, $FAILED failed"
-    [ "$FAILED" -eq 0 ]
+    [ "$FAILED" -eq 0 ] && [ "$PASSED" -gt 0 ]
 }
 
-# start_editor [ARGS...]: a 1400x900 window at the top-left corner, fitted to the board.
-start_editor() {
-    : >"$LOG"
-    STRIPSMITH_E2E_LOG=1 STRIPSMITH_RECOVERY_DIR="$WORK/recovery" XDG_CONFIG_HOME="$WORK/config" \
-        "$STRIPSMITH_BIN/stripsmith" --size 1400x900 "$@" 2>"$LOG" &
-    EDITOR_PID=$!
-    timeout 30 xdotool search --sync --name "Stripsmith" >/dev/null
-    wait_for_log "STRIPSMITH_E2E view A1"
-    sleep 0.5
+# ---- waiting on the editor's state ---------------------------------------------------------------
+# Nothing here sleeps to pace the test: every action waits for what it must produce (a log line, a
+# file on disk, a window title). The editor ends every frame with "STRIPSMITH_E2E frame N revision
+# R keys K buttons B mouse X Y": K key presses (modifiers aside) and B mouse-button presses and
+# releases taken in so far, and where it last saw the mouse.
+
+WAIT_SECONDS=${STRIPSMITH_E2E_WAIT:-30}  # the longest any one state may take on a loaded machine
+
+wait_until() {  # wait_until COMMAND...: polls COMMAND until it succeeds or WAIT_SECONDS pass
+    local deadline=$((SECONDS + WAIT_SECONDS))
+    until "$@" >/dev/null 2>&1; do
+        if [ "$SECONDS" -ge "$deadline" ]; then return 1; fi
+        sleep 0.05
+    done
 }
+
+eventually() { wait_until "$@"; }
+
+show_log() {  # the editor's log for a failure report, without the frame lines
+    grep -v "STRIPSMITH_E2E frame " "$LOG" >&2 || true
+    grep "STRIPSMITH_E2E frame " "$LOG" | tail -1 >&2 || true
+}
+
+in_log() { grep -q -- "$1" "$LOG"; }
 
 wait_for_log() {  # wait_for_log PATTERN
-    for _ in $(seq 1 100); do
-        if grep -q "$1" "$LOG"; then return 0; fi
-        sleep 0.1
-    done
+    if wait_until in_log "$1"; then return 0; fi
     echo "timed out waiting for \"$1\" in the editor log" >&2
-    cat "$LOG" >&2
+    show_log
     return 1
 }
 
-# hole_xy ROW COL (zero-based): screen position of a hole centre from the last view line.
+wait_for_file() { wait_until test -s "$1"; }
+
+frame_field() {  # frame_field frame|revision|keys|buttons: from the last frame line (0 before any)
+    awk -v f="$1" '$1 == "STRIPSMITH_E2E" && $2 == "frame" { for (i = 2; i < NF; i += 2) if ($i == f) v = $(i + 1) }
+        END { print v + 0 }' "$LOG"
+}
+
+# taken KEYS BUTTONS: the editor has taken in at least KEYS key presses and BUTTONS button changes,
+# and ended two more frames since (what a key opens is drawn, and logged, on the next frame), or
+# has ended altogether after taking them (a click on "Don't save" when quitting).
+taken() {
+    local running=1
+    kill -0 "$EDITOR_PID" 2>/dev/null || running=0
+    awk -v k="$1" -v b="$2" -v running="$running" '$1 == "STRIPSMITH_E2E" && $2 == "frame" {
+            if (!at && $7 >= k && $9 >= b) at = $3
+            last = $3 }
+        END { exit !(at && (last >= at + 2 || !running)) }' "$LOG"
+}
+
+wait_taken() {  # wait_taken KEYS BUTTONS WHAT
+    if wait_until taken "$1" "$2"; then return 0; fi
+    echo "the editor never took $3 (keys $(frame_field keys) of $1, buttons $(frame_field buttons) of $2)" >&2
+    return 1
+}
+
+frames_after() {  # frames_after FRAME COUNT: COUNT frames have ended after frame FRAME
+    [ "$(frame_field frame)" -ge $(($1 + $2)) ]
+}
+
+wait_frames() {  # wait_frames COUNT: the editor ends COUNT more frames (time as the editor sees it)
+    wait_until frames_after "$(frame_field frame)" "$1"
+}
+
+# settled PATTERN: the last line matching PATTERN is followed by three frames without another; an
+# auto-sized window or popup is placed again on its second frame, a fitted view once its size is
+# known, so a position read after that is where a click lands.
+settled() {
+    awk -v p="$1" '$0 ~ p { at = -1; next }
+        $1 == "STRIPSMITH_E2E" && $2 == "frame" && at != "" { if (at < 0) at = $3; last = $3 }
+        END { exit !(at != "" && at > 0 && last >= at + 3) }' "$LOG"
+}
+
+wait_settled() {  # wait_settled PATTERN
+    wait_for_log "$1" >/dev/null || return 1
+    if wait_until settled "$1"; then return 0; fi
+    echo "\"$1\" never settled" >&2
+    return 1
+}
+
+# ---- the editor ----------------------------------------------------------------------------------
+
+# start_editor [ARGS...]: a 1400x900 window at the top-left corner, fitted to the board; returns
+# once the board view has settled. It runs in WORK, so the file chooser starts there (a file name
+# typed in it is a few keys, not a long path: the editor takes about one typed key per frame).
+start_editor() {
+    : >"$LOG"
+    (cd "$WORK" && STRIPSMITH_E2E_LOG=1 STRIPSMITH_RECOVERY_DIR="$WORK/recovery" XDG_CONFIG_HOME="$WORK/config" \
+        exec "$STRIPSMITH_BIN/stripsmith" --size 1400x900 "$@" 2>"$LOG") &
+    EDITOR_PID=$!
+    timeout "$WAIT_SECONDS" xdotool search --sync --name "Stripsmith" >/dev/null
+    wait_settled "STRIPSMITH_E2E view A1"
+}
+
+view_line() {  # the board view once settled: "STRIPSMITH_E2E view A1 X Y pitch P ..."
+    wait_settled "STRIPSMITH_E2E view A1" >/dev/null || return 1
+    grep "STRIPSMITH_E2E view A1" "$LOG" | tail -1
+}
+
+# hole_xy ROW COL (zero-based): screen position of a hole centre.
 hole_xy() {
-    grep "STRIPSMITH_E2E view A1" "$LOG" | tail -1 |
-        awk -v r="$1" -v c="$2" '{ printf "%d %d\n", $4 + c * $7, $5 + r * ($7 < 0 ? -$7 : $7) }'
+    view_line | awk -v r="$1" -v c="$2" '{ printf "%d %d\n", $4 + c * $7, $5 + r * ($7 < 0 ? -$7 : $7) }'
 }
 
 # gap_xy ROW COL: the gap between hole COL and COL+1 on a strip.
 gap_xy() {
-    grep "STRIPSMITH_E2E view A1" "$LOG" | tail -1 |
-        awk -v r="$1" -v c="$2" '{ printf "%d %d\n", $4 + (c + 0.5) * $7, $5 + r * ($7 < 0 ? -$7 : $7) }'
+    view_line | awk -v r="$1" -v c="$2" '{ printf "%d %d\n", $4 + (c + 0.5) * $7, $5 + r * ($7 < 0 ? -$7 : $7) }'
 }
 
-item_xy() {  # item_xy NAME
-    wait_for_log "STRIPSMITH_E2E item $1 " >/dev/null
+item_xy() {  # item_xy NAME: where a named button or field is, once its window has settled
+    wait_settled "STRIPSMITH_E2E item $1 " >/dev/null || return 1
     grep "STRIPSMITH_E2E item $1 " "$LOG" | tail -1 | awk '{ print $4, $5 }'
 }
 
+# ---- input: every helper returns once the editor has taken what it sent -----------------------------
+
+mouse_at() {  # mouse_at X Y: the editor has seen the mouse at X Y
+    awk -v x="$1" -v y="$2" '$1 == "STRIPSMITH_E2E" && $2 == "frame" { at = ($11 == x && $12 == y) }
+        END { exit !at }' "$LOG"
+}
+
+move_to() {  # move_to X Y (by way of the next pixel: a move onto where the mouse is sends nothing)
+    xdotool mousemove "$(($1 + 1))" "$2" mousemove "$1" "$2"
+    if wait_until mouse_at "$1" "$2"; then return 0; fi
+    echo "the editor never saw the mouse at $1 $2" >&2
+    return 1
+}
+
 click_at() {  # click_at X Y
-    xdotool mousemove "$1" "$2"
-    sleep 0.2
+    [ $# -eq 2 ] || { echo "click_at: no position" >&2; return 1; }
+    move_to "$1" "$2" || return 1
+    local buttons
+    buttons=$(frame_field buttons)
     xdotool click 1
-    sleep 0.4
+    wait_taken 0 $((buttons + 2)) "the click at $1 $2"
 }
 
-drag() {  # drag X1 Y1 X2 Y2
-    xdotool mousemove "$1" "$2"
-    sleep 0.2
+drag() {  # drag X1 Y1 X2 Y2: press, two moves, release, each taken before the next
+    [ $# -eq 4 ] || { echo "drag: no positions" >&2; return 1; }
+    move_to "$1" "$2" || return 1
+    local buttons
+    buttons=$(frame_field buttons)
     xdotool mousedown 1
-    sleep 0.2
-    xdotool mousemove "$(( ($1 + $3) / 2 ))" "$(( ($2 + $4) / 2 ))"
-    sleep 0.2
-    xdotool mousemove "$3" "$4"
-    sleep 0.2
+    wait_taken 0 $((buttons + 1)) "the press at $1 $2" || return 1
+    move_to "$(( ($1 + $3) / 2 ))" "$(( ($2 + $4) / 2 ))" || return 1
+    move_to "$3" "$4" || return 1
     xdotool mouseup 1
-    sleep 0.4
+    wait_taken 0 $((buttons + 2)) "the release at $3 $4"
 }
 
-keys() {  # keys KEY... (xdotool key names, e.g. ctrl+s Return)
-    xdotool key --delay 120 "$@"
-    sleep 0.4
+keys() {  # keys KEY... (xdotool key names, e.g. ctrl+s Return): each chord has one key press
+    local keys
+    keys=$(frame_field keys)
+    xdotool key "$@"
+    wait_taken $((keys + $#)) 0 "the keys $*"
 }
 
-# shortcut KEY PATTERN: presses KEY until the editor reports a new status line matching PATTERN
-# (up to three presses). On a heavily loaded machine the X server now and then drops a synthetic
-# key event before the window sees it; the editor's own reaction is what the test waits for.
-shortcut() {
-    local before
-    before=$(grep -c "STRIPSMITH_E2E status .*$2" "$LOG" || true)
+type_text() {  # type_text TEXT: one key press per character
+    local keys
+    keys=$(frame_field keys)
+    xdotool type --delay 20 "$1"
+    wait_taken $((keys + ${#1})) 0 "the text $1"
+}
+
+# press_until KEY COMMAND...: presses KEY until COMMAND succeeds once the editor has taken the key
+# (up to three presses). A shortcut the editor took but ignored (one that came while a popup was
+# closing) is pressed again; the editor's own reaction decides, never a delay.
+press_until() {
+    local key=$1
+    shift
     for _ in 1 2 3; do
-        keys "$1"
-        for _ in $(seq 1 25); do
-            if [ "$(grep -c "STRIPSMITH_E2E status .*$2" "$LOG" || true)" -gt "$before" ]; then return 0; fi
-            sleep 0.2
-        done
-        echo "no \"$2\" after $1; pressing it again" >&2
+        if keys "$key" && "$@"; then return 0; fi
+        echo "no effect after $key; pressing it again" >&2
     done
     return 1
 }
 
-type_text() {
-    xdotool type --delay 60 "$1"
-    sleep 0.3
+status_count() { grep -c "STRIPSMITH_E2E status" "$LOG" || true; }
+
+status_after() {  # status_after COUNT PATTERN: a status line after the first COUNT ones matches
+    grep "STRIPSMITH_E2E status" "$LOG" | tail -n +"$(($1 + 1))" | grep -q -- "$2"
 }
+
+wait_status_after() { wait_until status_after "$@"; }
+
+# shortcut KEY PATTERN: presses KEY until the editor reports a new status line matching PATTERN.
+shortcut() {
+    press_until "$1" status_after "$(status_count)" "$2"
+}
+
+last_dialogs() { grep "STRIPSMITH_E2E dialogs" "$LOG" | tail -1 | cut -d' ' -f3-; }
+
+dialogs_match() { last_dialogs | grep -q -- "$1"; }
+
+wait_dialogs() { wait_until dialogs_match "$1"; }  # wait_dialogs PATTERN: the open dialogs match
 
 screenshot() {  # screenshot NAME
     import -window root "$ART/$1.png" 2>/dev/null || xwd -root -silent >"$ART/$1.xwd"
-}
-
-eventually() {  # eventually COMMAND...: retries for up to 10 s (frames are slow on a busy machine)
-    for _ in $(seq 1 50); do
-        if "$@" >/dev/null 2>&1; then return 0; fi
-        sleep 0.2
-    done
-    return 1
-}
-
-wait_for_file() {
-    for _ in $(seq 1 50); do
-        if [ -s "$1" ]; then return 0; fi
-        sleep 0.1
-    done
-    return 1
 }
 
 # Under its own X server: each script re-runs itself inside xvfb-run.

@@ -14,7 +14,8 @@ keys l
 click_at $(hole_xy 2 9)
 click_at $(hole_xy 6 9)
 check "an autosave appeared in the recovery folder" eventually test -s "$WORK/recovery/recovery.board.json"
-sleep 1.5
+# The autosave runs once a second: wait for the one that holds the link, the last thing drawn.
+check "the autosave holds the link to G10" eventually grep -q '"G10"' "$WORK/recovery/recovery.board.json"
 screenshot recovery-0-before-kill
 kill -KILL "$EDITOR_PID"
 wait "$EDITOR_PID" 2>/dev/null || true
@@ -23,11 +24,12 @@ start_editor
 screenshot recovery-1-offer
 click_at $(item_xy restore)
 screenshot recovery-2-restored
-keys ctrl+s
+# The restored board has no file yet: Ctrl+S opens the chooser; type the path and press Enter.
+check "Ctrl+S on the restored board opens the file chooser" press_until ctrl+s dialogs_match "^chooser$"
 keys ctrl+a
-type_text "$out"
+type_text "$(basename "$out")"
 keys Return
-check "the restored board was saved" eventually test -s "$out"
+check "the restored board was saved" wait_for_file "$out"
 check "the restored board holds the resistor C4-C8 and the link C10-G10" python3 - "$out" <<'PY'
 import json, sys
 b = json.load(open(sys.argv[1]))

@@ -25,57 +25,15 @@ bad_line=$(grep -n '"E95"' "$broken" | cut -d: -f1)
 check "the broken file is refused by the netcheck CLI too (exit status 2)" \
     bash -c "'$STRIPSMITH_BIN/netcheck' '$broken' >/dev/null 2>&1; [ \$? -eq 2 ]"
 
-# ---- helpers for the dialogs (the editor logs "STRIPSMITH_E2E dialogs ..." when they change) ----
+# ---- helpers -----------------------------------------------------------------------------------
 
-last_dialogs() { grep "STRIPSMITH_E2E dialogs" "$LOG" | tail -1 | cut -d' ' -f3-; }
-
-dialogs_match() { last_dialogs | grep -q -- "$1"; }
-
-wait_dialogs() {  # wait_dialogs PATTERN: up to 10 s for the open dialogs to match PATTERN
-    eventually dialogs_match "$1"
-}
-
-# press_for_dialog KEY PATTERN: presses KEY until the open dialogs match PATTERN (three tries; a
-# synthetic key event is now and then dropped on a loaded machine).
-press_for_dialog() {
-    for _ in 1 2 3; do
-        keys "$1"
-        if wait_dialogs "$2"; then return 0; fi
-        echo "no dialog \"$2\" after $1; pressing it again" >&2
-    done
-    return 1
-}
-
-# settled_item_xy NAME: an item's position once the popup holding it has stopped moving (an
-# auto-sized popup is placed again on its second frame).
-settled_item_xy() {
-    wait_for_log "STRIPSMITH_E2E item $1 " >/dev/null
-    local before=-1 now
-    for _ in $(seq 1 20); do
-        now=$(grep -c "STRIPSMITH_E2E item $1 " "$LOG" || true)
-        if [ "$now" = "$before" ]; then break; fi
-        before=$now
-        sleep 0.4
-    done
-    item_xy "$1"
-}
+# press_for_dialog KEY PATTERN: presses KEY until the open dialogs match PATTERN.
+press_for_dialog() { press_until "$1" dialogs_match "$2"; }
 
 click_item() {  # click_item NAME: a click on a dialog button once its popup has settled
     local xy
-    xy=$(settled_item_xy "$1") || return 1
+    xy=$(item_xy "$1") || return 1
     click_at $xy
-}
-
-status_count() { grep -c "STRIPSMITH_E2E status" "$LOG" || true; }
-
-wait_status_after() {  # wait_status_after COUNT PATTERN: a status line after the first COUNT ones
-    for _ in $(seq 1 50); do
-        if grep "STRIPSMITH_E2E status" "$LOG" | tail -n +"$(($1 + 1))" | grep -q -- "$2"; then
-            return 0
-        fi
-        sleep 0.2
-    done
-    return 1
 }
 
 # cut_gap ROW COL NAME: the cut tool, then a click on the gap after hole COL (zero-based) of strip
@@ -84,9 +42,8 @@ cut_gap() {
     local before
     for _ in 1 2; do
         before=$(status_count)
-        keys x
-        click_at $(gap_xy "$1" "$2")
-        if wait_status_after "$before" "Add cut $3\$"; then return 0; fi
+        keys x && click_at $(gap_xy "$1" "$2") || continue
+        if status_after "$before" "Add cut $3\$"; then return 0; fi
     done
     return 1
 }
@@ -134,18 +91,14 @@ x11.XCloseDisplay(display)
 PY
 }
 
+editor_ended() { ! editor_running; }
+
 EXIT_STATUS=""
-wait_exit() {  # wait_exit: up to 10 s for the editor to end; sets EXIT_STATUS
+wait_exit() {  # wait_exit: for the editor to end; sets EXIT_STATUS
     EXIT_STATUS="still running"
-    for _ in $(seq 1 50); do
-        if ! editor_running; then
-            EXIT_STATUS=0
-            wait "$EDITOR_PID" 2>/dev/null || EXIT_STATUS=$?
-            return 0
-        fi
-        sleep 0.2
-    done
-    return 1
+    wait_until editor_ended || return 1
+    EXIT_STATUS=0
+    wait "$EDITOR_PID" 2>/dev/null || EXIT_STATUS=$?
 }
 
 # ---- 1. a broken file does not replace the open board ----------------------------------------
@@ -161,13 +114,13 @@ check "Ctrl+O with an unsaved edit asks about the changes" press_for_dialog ctrl
 screenshot safety-2-ask-before-open
 check "\"Don't save\" is clicked" click_item unsaved-dont-save
 check "\"Don't save\" goes on to the file chooser" wait_dialogs "^chooser$"
-type_text "$broken"
+type_text "$(basename "$broken")"  # the chooser starts in the open board's folder
 keys Return
 check "the error names the file and line: $broken:$bad_line" \
     wait_dialogs "error .*$broken:$bad_line"
 check "the error says what is wrong (the hole E95)" dialogs_match "E95"
-sleep 1
-check "the error stays up until it is dismissed" dialogs_match "error "
+wait_frames 30
+check "the error stays up for 30 frames, until it is dismissed" dialogs_match "error "
 screenshot safety-3-error
 check "the window still shows the first board, with the change mark" \
     title_is "Stripsmith - flasher.board.json *"
@@ -175,9 +128,7 @@ check "the error's OK button is clicked" click_item message-ok
 check "OK closes the error" wait_dialogs "^-$"
 check "the broken file was not touched" cmp -s "$broken" <(sed 's/"E15"/"E95"/' "$sample")
 
-before=$(status_count)
-keys ctrl+s
-check "Ctrl+S saves the board that stayed open" wait_status_after "$before" "Saved $board"
+check "Ctrl+S saves the board that stayed open" shortcut ctrl+s "Saved $board"
 screenshot safety-4-saved
 
 check "the saved file is the original board plus the one cut" python3 - "$sample" "$board" <<'PY'
@@ -213,12 +164,12 @@ saved_sum=$(sha256sum <"$board")
 check "the cut tool made a second cut at I17|I18" cut_gap 8 16 "I17|I18"
 check "Ctrl+Q with an unsaved edit asks about the changes" press_for_dialog ctrl+q unsaved
 screenshot safety-5-ask-before-quit
-sleep 0.5
+wait_frames 10
 check "the editor is still running while it asks" editor_running
 check "Cancel is clicked" click_item unsaved-cancel
 check "Cancel closes the question" wait_dialogs "^-$"
-sleep 1
-check "after Cancel the editor keeps running" editor_running
+wait_frames 30
+check "after Cancel the editor keeps running (30 frames on)" editor_running
 check "after Cancel the edit is still there, unsaved" \
     eventually title_is "Stripsmith - flasher.board.json *"
 check "after Cancel the file on disk is unchanged" test "$(sha256sum <"$board")" = "$saved_sum"
@@ -226,7 +177,7 @@ screenshot safety-6-cancelled
 
 close_window
 check "closing the window with an unsaved edit asks about the changes" wait_dialogs unsaved
-sleep 0.5
+wait_frames 10
 check "the editor is still running while it asks" editor_running
 screenshot safety-7-ask-before-close
 check "\"Don't save\" is clicked" click_item unsaved-dont-save

@@ -25,9 +25,9 @@ click_at $(gap_xy 1 2)
 screenshot draw-1-drawn
 
 # Save: Ctrl+S opens the chooser on an untitled board; type the path and press Enter.
-keys ctrl+s
+check "Ctrl+S on an untitled board opens the file chooser" press_until ctrl+s dialogs_match "^chooser$"
 keys ctrl+a
-type_text "$out"
+type_text "$(basename "$out")"
 keys Return
 check "the board was saved through the chooser" wait_for_file "$out"
 screenshot draw-2-saved

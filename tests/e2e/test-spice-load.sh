@@ -8,7 +8,8 @@ source "$(dirname "$0")/e2e_lib.sh"
 run_under_xvfb "$0"
 
 sample="$STRIPSMITH_SOURCE/samples/flasher-missing-cut.board.json"
-deck="$STRIPSMITH_SOURCE/samples/spice/flasher.cir"
+deck="$WORK/flasher.cir"  # beside the board: the chooser starts in the board's folder
+cp "$STRIPSMITH_SOURCE/samples/spice/flasher.cir" "$deck"
 board="$WORK/flasher.board.json"
 python3 - "$sample" "$board" <<'PY'
 import json, sys
@@ -41,22 +42,21 @@ screenshot spice-1-panel
 
 # A malformed deck first: refused with its line, nothing loaded.
 click_at $(item_xy load-circuit)
-type_text "$WORK/broken.cir"
+type_text broken.cir
 keys Return
 check "the malformed deck is refused, naming file and line" \
     eventually grep -q "STRIPSMITH_E2E status Cannot load the circuit: .*broken.cir:2" "$LOG"
 screenshot spice-2-refused
-keys Return  # close the error message
+check "Enter closes the error message" press_until Return dialogs_match "^-$"
 check "the refused deck left the board without a circuit" bash -c "! grep -q 'STRIPSMITH_E2E status Load circuit' '$LOG'"
 
 # Now the real deck.
 click_at $(item_xy load-circuit)
-type_text "$deck"
+type_text "$(basename "$deck")"
 keys Return
 check "the deck was loaded as one command" eventually grep -q "STRIPSMITH_E2E status Load circuit flasher.cir" "$LOG"
 check "the editor's check finds the short between DIS and THR" \
     eventually grep -q "STRIPSMITH_E2E finding short DIS, THR" "$LOG"
-sleep 0.5
 screenshot spice-3-loaded
 
 # The side-by-side comparison tab.

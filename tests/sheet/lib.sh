@@ -43,13 +43,12 @@ finish() {
 # The documented command.
 sheet() { "$STRIPSMITH_BIN/stripsmith" --sheet "$@"; }
 
-# A number from a board file: rows, cols or the number of cuts.
-board_fact() {
+# board_facts FILE: "ROWS COLS CUTS PITCH" of a board file, read in one go.
+board_facts() {
   python3 -c '
 import json, sys
 b = json.load(open(sys.argv[1]))
-print({"rows": b["board"]["rows"], "cols": b["board"]["cols"],
-       "cuts": len(b.get("cuts", [])), "pitch": b["board"].get("pitch_mm", 2.54)}[sys.argv[2]])' "$1" "$2"
+print(b["board"]["rows"], b["board"]["cols"], len(b.get("cuts", [])), b["board"].get("pitch_mm", 2.54))' "$1"
 }
 
 # Page size of page 1 in points, "W H", from pdfinfo.

@@ -10,6 +10,7 @@ Prints one "PASS name" or "FAIL name: detail" line per check.
 """
 import argparse
 import html
+import json
 import re
 import sys
 
@@ -240,6 +241,13 @@ def measure_svg(args):
         check('SVG holes where the PDF has them', ok)
 
 
+def board_facts(path):
+    """Rows, columns, pitch and number of cuts of a board file."""
+    board = json.load(open(path, encoding='utf-8'))
+    return {'rows': board['board']['rows'], 'cols': board['board']['cols'],
+            'pitch': board['board'].get('pitch_mm', 2.54), 'cuts': len(board.get('cuts', []))}
+
+
 def main():
     parser = argparse.ArgumentParser()
     sub = parser.add_subparsers(dest='mode', required=True)
@@ -254,11 +262,20 @@ def main():
     svg.add_argument('--paper-width', type=float, required=True)
     svg.add_argument('--same-as')
     for p in (pdf, svg):
-        p.add_argument('--rows', type=int, required=True)
-        p.add_argument('--cols', type=int, required=True)
-        p.add_argument('--pitch', type=float, default=2.54)
-        p.add_argument('--cuts', type=int, required=True)
+        # The board's size, pitch and number of cuts: given one by one, or read from its file.
+        p.add_argument('--board')
+        p.add_argument('--rows', type=int)
+        p.add_argument('--cols', type=int)
+        p.add_argument('--pitch', type=float)
+        p.add_argument('--cuts', type=int)
     args = parser.parse_args()
+    if args.mode in ('pdf', 'svg'):
+        facts = board_facts(args.board) if args.board else {}
+        for name, default in (('rows', None), ('cols', None), ('cuts', None), ('pitch', 2.54)):
+            if getattr(args, name) is None:
+                setattr(args, name, facts.get(name, default))
+            if getattr(args, name) is None:
+                parser.error('--%s or --board is needed' % name)
     {'pdf': measure_pdf, 'svg': measure_svg, 'pitch': measure_pitch}[args.mode](args)
     for name, ok, detail in results:
         print(('PASS ' if ok else 'FAIL ') + name + ('' if ok or not detail else ': ' + detail))

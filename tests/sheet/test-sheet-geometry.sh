@@ -6,10 +6,7 @@ source "$(dirname "$0")/lib.sh"
 work=$STRIPSMITH_ARTIFACTS/sheet/geometry
 mkdir -p "$work"
 board=$STRIPSMITH_SOURCE/tests/sheet/boards/booster.board.json
-rows=$(board_fact "$board" rows)
-cols=$(board_fact "$board" cols)
-cuts=$(board_fact "$board" cuts)
-pitch=$(board_fact "$board" pitch)
+read -r rows cols cuts pitch < <(board_facts "$board")
 
 for paper in a4 letter; do
   pdf=$work/booster-$paper.pdf

@@ -25,7 +25,7 @@ for r in range(0, 90, 3):
 json.dump({"format": "stripsmith-board", "version": 1, "title": "Big split board",
            "board": {"rows": 90, "cols": 100}, "cuts": cuts, "parts": parts}, open(sys.argv[1], "w"))
 PY
-cuts=$(board_fact "$board" cuts)
+read -r _ _ cuts _ < <(board_facts "$board")
 pdf=$work/big.pdf
 expect "sheet written" sheet "$pdf" "$board"
 pages=$(page_count "$pdf")
@@ -37,20 +37,24 @@ expect "copper pages captioned as mirrored" grep -q "MIRRORED" <<<"$text"
 
 marks=0
 board_pages=0
+uneven_pages=0
 for ((page = 1; page <= pages; page++)); do
   # Board pages carry a side caption; the rest are the lists.
   pdftotext -f "$page" -l "$page" "$pdf" - | grep -q "SIDE —" || continue
   board_pages=$((board_pages + 1))
   pdftocairo -svg -noshrink -nocenter -f "$page" -l "$page" "$pdf" "$work/page$page.svg"
   out=$(python3 "$here/sheet_measure.py" pitch "$work/page$page.svg" 2>&1)
-  grep -q "^FAIL" <<<"$out" && fail "page $page: $out"
+  if grep -q "^FAIL" <<<"$out"; then
+    echo "  page $page: $out"
+    uneven_pages=$((uneven_pages + 1))
+  fi
   n=$(sed -n 's/.*cut marks \([0-9]*\).*/\1/p' <<<"$out")
   marks=$((marks + ${n:-0}))
 done
 expect "both sides split over several pages ($board_pages)" test "$board_pages" -ge 4
-pass "holes one pitch apart on every page"
+expect "holes one pitch apart on every page ($uneven_pages pages not)" test "$uneven_pages" -eq 0
 # Cuts in an overlap are drawn on both pages, so at least one mark per cut.
 expect "every cut marked ($marks marks for $cuts cuts)" test "$marks" -ge "$cuts"
-pdftoppm -r 50 -png -f 1 -l 2 "$pdf" "$work/big"
+if [ "${STRIPSMITH_SHEET_PNGS:-}" = 1 ]; then pdftoppm -r 50 -png -f 1 -l 2 "$pdf" "$work/big"; fi
 
 finish
