@@ -122,7 +122,8 @@ ReadResult<Circuit> importSpice(std::string_view text, std::string_view fileName
         for (const auto& [line, remark] : deck.notes) context.note(line, remark);
         context.modelNames = modelNames(deck);
         const spice::DeckScopes scopes =
-            spice::collectScopes(deck, context, options.sources == SpiceOptions::Sources::Offboard);
+            spice::collectScopes(deck, context, options.sources == SpiceOptions::Sources::Offboard,
+                                 limits);
         spice::checkCalls(scopes, limits);
         spice::NodeNames names;
         std::map<std::string, std::string> overrides;
