@@ -155,9 +155,10 @@ TEST_CASE("board file") {
         for (const std::string& number : spellings) {
             CAPTURE(number);
             const std::string text = minimal(R"(, "future": )" + number +
-                                                 R"(, "parts": [{"ref": "R1", "kind": "resistor",
+                                             R"(, "parts": [{"ref": "R1", "kind": "resistor",
                                                  "pins": {"1": "A1", "2": "A5"},
-                                                 "sizes": {"list": [1, )" + number + "]}}]");
+                                                 "sizes": {"list": [1, )" +
+                                             number + "]}}]");
             const std::string written = writeBoard(readOk(text));
             CHECK(written.find("\"future\": " + number + "\n") != std::string::npos);
             CHECK(written.find("          " + number + "\n") != std::string::npos);

@@ -39,11 +39,15 @@ std::string refusal(const std::string& text) {
 TEST_CASE("printing escapes control characters") {
     CHECK(escapeControls(kRetitleAndClear) == "\\x1b]0;x\\x07\\x1b[2J");
     CHECK(escapeControls("tab\there\nDEL\x7f") == "tab\\x09here\\x0aDEL\\x7f");
-    CHECK(escapeControls("C1 \xc2\x9b" "2J") == "C1 \\u009b2J");  // U+009B, the 8-bit CSI
+    CHECK(escapeControls("C1 \xc2\x9b"
+                         "2J") == "C1 \\u009b2J");  // U+009B, the 8-bit CSI
     CHECK(escapeControls("broken \xff byte") == "broken \\xff byte");
     CHECK(escapeControls(std::string("nul\0x", 5)) == "nul\\x00x");
     // Ordinary text prints unchanged: ohms, micro, backslashes, no-break spaces.
-    CHECK(escapeControls("4.7 k\xce\xa9 100\xc2\xb5" "F C:\\x") == "4.7 k\xce\xa9 100\xc2\xb5" "F C:\\x");
+    CHECK(escapeControls("4.7 k\xce\xa9 100\xc2\xb5"
+                         "F C:\\x") ==
+          "4.7 k\xce\xa9 100\xc2\xb5"
+          "F C:\\x");
     CHECK(escapeControlsKeepingLines("a\x1b\nb\n") == "a\\x1b\nb\n");
 }
 
@@ -68,8 +72,9 @@ TEST_CASE("refs, kinds and values refuse control characters") {
         const std::string text =
             R"({"format": "stripsmith-board", "version": 1, "board": {"rows": 4, "cols": 6},
   "circuit": {"parts": {"R1": {"kind": "resistor", "value": "\u001b[2J"}}}})";
-        CHECK(refusal(text) == "c.board.json:2:61: circuit.parts.R1.value: value "
-                               "\"\\u001b[2J\" holds a control character (U+001B)");
+        CHECK(refusal(text) ==
+              "c.board.json:2:61: circuit.parts.R1.value: value "
+              "\"\\u001b[2J\" holds a control character (U+001B)");
     }
     SUBCASE("the message itself never carries the raw character") {
         const std::string said = refusal(boardWith("R1", "resistor", "1k\\u009b2J"));
@@ -80,15 +85,21 @@ TEST_CASE("refs, kinds and values refuse control characters") {
 
 TEST_CASE("refs have no blanks of any kind") {
     CHECK(refProblem("R 1") == "may not contain blanks");
-    CHECK(refProblem("R\xc2\xa0" "1") == "may not contain blanks (U+00A0 is a blank too)");
-    CHECK(refProblem("R\xe2\x80\x8b" "1") == "may not contain blanks (U+200B is a blank too)");
-    CHECK(refProblem("R\xef\xbb\xbf" "1") == "may not contain blanks (U+FEFF is a blank too)");
+    CHECK(refProblem("R\xc2\xa0"
+                     "1") == "may not contain blanks (U+00A0 is a blank too)");
+    CHECK(refProblem("R\xe2\x80\x8b"
+                     "1") == "may not contain blanks (U+200B is a blank too)");
+    CHECK(refProblem("R\xef\xbb\xbf"
+                     "1") == "may not contain blanks (U+FEFF is a blank too)");
     CHECK(refProblem("R\t1") == "may not contain blanks");
     CHECK(refProblem("") == "is empty");
     CHECK_FALSE(refProblem("X1.R3").has_value());
-    CHECK_FALSE(refProblem("R\xce\xa9" "1").has_value());  // letters of any script are fine
+    CHECK_FALSE(refProblem("R\xce\xa9"
+                           "1")
+                    .has_value());  // letters of any script are fine
     CHECK(refusal(boardWith("R\\u00a01", "resistor", "1k"))
-              .ends_with("ref \"R\xc2\xa0" "1\" may not contain blanks (U+00A0 is a blank too)"));
+              .ends_with("ref \"R\xc2\xa0"
+                         "1\" may not contain blanks (U+00A0 is a blank too)"));
     CHECK(refusal(boardWith("R\\u200b1", "resistor", "1k")).ends_with("(U+200B is a blank too)"));
 }
 
@@ -106,8 +117,9 @@ TEST_CASE("refs that differ only in case are one part") {
         const std::string text =
             R"({"format": "stripsmith-board", "version": 1, "board": {"rows": 4, "cols": 6},
   "circuit": {"parts": {"Q1": {"kind": "bjt"}, "q1": {"kind": "bjt"}}}})";
-        CHECK(refusal(text).ends_with("circuit.parts.q1: duplicate ref \"q1\" (also \"Q1\"; refs "
-                                      "that differ only in case are one part)"));
+        CHECK(
+            refusal(text).ends_with("circuit.parts.q1: duplicate ref \"q1\" (also \"Q1\"; refs "
+                                    "that differ only in case are one part)"));
     }
     CHECK(refIdentity("q1") == refIdentity("Q1"));
     CHECK(refIdentity("R1") != refIdentity("R11"));
@@ -119,9 +131,12 @@ TEST_CASE("SPICE decks are held to the same rules") {
         REQUIRE_FALSE(result.ok());
         return result.error->describe();
     };
-    CHECK(problem("t\nR\xc2\xa0" "1 a b 1k\n") ==
-          "deck.cir:2: part ref R\xc2\xa0" "1 may not contain blanks (U+00A0 is a blank too)");
-    CHECK(problem("t\nR\xc2\x9b" "1 a b 1k\n") ==
+    CHECK(problem("t\nR\xc2\xa0"
+                  "1 a b 1k\n") ==
+          "deck.cir:2: part ref R\xc2\xa0"
+          "1 may not contain blanks (U+00A0 is a blank too)");
+    CHECK(problem("t\nR\xc2\x9b"
+                  "1 a b 1k\n") ==
           "deck.cir:2: part ref R\\u009b1 holds a control character (U+009B)");
 }
 

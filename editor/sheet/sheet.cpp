@@ -175,9 +175,8 @@ cairo_status_t appendBytes(void* closure, const unsigned char* data, unsigned in
 cairo_surface_t* createSurface(Format format, std::string& bytes, const SheetData& data) {
     const PaperSize& paper = data.plan.paper;
     if (format == Format::Pdf) {
-        return cairo_pdf_surface_create_for_stream(appendBytes, &bytes,
-                                                   paper.widthMm * kPointsPerMm,
-                                                   paper.heightMm * kPointsPerMm);
+        return cairo_pdf_surface_create_for_stream(
+            appendBytes, &bytes, paper.widthMm * kPointsPerMm, paper.heightMm * kPointsPerMm);
     }
     // Sized in millimetres so width/height read "210mm" and user units are millimetres.
     cairo_surface_t* surface = cairo_svg_surface_create_for_stream(
@@ -220,9 +219,8 @@ std::optional<std::string> exportSheet(const Board& board, const SheetOptions& o
     const netcheck::ReadLimits limits;
     if (!(board.pitchMm >= limits.minPitchMm && board.pitchMm <= limits.maxPitchMm)) {
         std::ostringstream message;
-        message << "cannot draw the sheet \"" << outPath << "\": the hole pitch "
-                << board.pitchMm << " mm is outside " << limits.minPitchMm << " to "
-                << limits.maxPitchMm << " mm";
+        message << "cannot draw the sheet \"" << outPath << "\": the hole pitch " << board.pitchMm
+                << " mm is outside " << limits.minPitchMm << " to " << limits.maxPitchMm << " mm";
         return message.str();
     }
     SheetData data{board, planSheet(board, options), netcheck::check(board), numberedCuts(board)};

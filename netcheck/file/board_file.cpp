@@ -40,8 +40,8 @@ public:
             const auto step = r_.enter("circuit");
             board_.circuit = readCircuitObject(r_, *circuit, limits_);
         }
-        board_.extra = r_.extras(root, {"format", "version", "title", "board", "cuts",
-                                                 "parts", "links", "offboard", "wires", "circuit"});
+        board_.extra = r_.extras(root, {"format", "version", "title", "board", "cuts", "parts",
+                                        "links", "offboard", "wires", "circuit"});
         return std::move(board_);
     }
 
@@ -95,8 +95,8 @@ private:
             board_.pitchMm = pitch->get<double>();
             if (board_.pitchMm < limits_.minPitchMm || board_.pitchMm > limits_.maxPitchMm) {
                 r_.fail("pitch_mm " + pitch->dump() + " is outside " +
-                        millimetres(limits_.minPitchMm) + " to " +
-                        millimetres(limits_.maxPitchMm) + " mm (stripboard is 2.54 mm)");
+                        millimetres(limits_.minPitchMm) + " to " + millimetres(limits_.maxPitchMm) +
+                        " mm (stripboard is 2.54 mm)");
             }
         }
         const std::string copper = r_.stringMember(grid, "copper", false);
@@ -311,7 +311,7 @@ private:
         std::string where;  // path
     };
     std::unordered_map<std::string, RefSeen> refWhere_;  // ref identity -> where first seen
-    std::map<std::string, std::string> cutWhere_;  // cut name -> path where first seen
+    std::map<std::string, std::string> cutWhere_;        // cut name -> path where first seen
 };
 
 Json gridToJson(const Board& board) {

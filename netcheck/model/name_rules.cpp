@@ -62,9 +62,9 @@ std::optional<std::string> refProblem(std::string_view ref) {
     for (std::size_t at = 0; at < ref.size();) {
         const CodePoint c = codePointAt(ref, at);
         if (c.wellFormed && isBlank(c.value)) {
-            return c.value < 0x80 ? std::string("may not contain blanks")
-                                  : "may not contain blanks (" + codePointName(c.value) +
-                                        " is a blank too)";
+            return c.value < 0x80
+                       ? std::string("may not contain blanks")
+                       : "may not contain blanks (" + codePointName(c.value) + " is a blank too)";
         }
         at += c.length;
     }

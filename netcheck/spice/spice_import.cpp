@@ -53,7 +53,7 @@ Circuit buildCircuit(const std::vector<ElementPart>& parts, const spice::NodeNam
                      const SpiceOptions& options) {
     Circuit circuit;
     std::unordered_map<std::string, int> refLines;  // ref identity -> line
-    std::map<std::string, std::string> keyOfNet;  // net name -> node key, to catch clashes
+    std::map<std::string, std::string> keyOfNet;    // net name -> node key, to catch clashes
     for (const ElementPart& part : parts) {
         requireUsableNames(part);
         if (const auto [first, fresh] = refLines.emplace(refIdentity(part.ref), part.line);
@@ -136,9 +136,8 @@ ReadResult<Circuit> importSpice(std::string_view text, std::string_view fileName
         const spice::Deck deck = spice::readDeck(text);
         for (const auto& [line, remark] : deck.notes) context.note(line, remark);
         context.modelNames = modelNames(deck);
-        const spice::DeckScopes scopes =
-            spice::collectScopes(deck, context, options.sources == SpiceOptions::Sources::Offboard,
-                                 limits);
+        const spice::DeckScopes scopes = spice::collectScopes(
+            deck, context, options.sources == SpiceOptions::Sources::Offboard, limits);
         spice::checkCalls(scopes, limits);
         spice::NodeNames names;
         std::map<std::string, std::string> overrides;

@@ -7,8 +7,8 @@
 #include <cstdlib>
 #include <string>
 
-#include "netcheck/model/name_rules.hpp"
 #include "netcheck/file/detail/number_spellings.hpp"
+#include "netcheck/model/name_rules.hpp"
 
 namespace netcheck {
 

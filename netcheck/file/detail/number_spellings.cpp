@@ -51,8 +51,7 @@ private:
     void object(const OrderedJson& json, int depth, const OrderedJson* spellings,
                 const std::string& pointer) {
         const auto own = json.find(kSpellingsKey);
-        const OrderedJson* ownSpellings =
-            own != json.end() && own->is_object() ? &*own : nullptr;
+        const OrderedJson* ownSpellings = own != json.end() && own->is_object() ? &*own : nullptr;
         bool first = true;
         for (const auto& [key, member] : json.items()) {
             if (key == kSpellingsKey) continue;
