@@ -147,6 +147,40 @@ TEST_CASE("board file") {
         CHECK(readOk(writeBoard(board)) == board);
     }
 
+    SUBCASE("numbers of unknown keys keep their spelling, byte for byte") {
+        // Each of these reads as a double or an integer that would be written otherwise:
+        // 1.2345678901234568e+29, 0, 100.0, 2.54, 1e-07.
+        const std::string spellings[] = {"123456789012345678901234567890", "-0", "1E2", "2.540",
+                                         "0.0000001"};
+        for (const std::string& number : spellings) {
+            CAPTURE(number);
+            const std::string text = minimal(R"(, "future": )" + number +
+                                             R"(, "parts": [{"ref": "R1", "kind": "resistor",
+                                                 "pins": {"1": "A1", "2": "A5"},
+                                                 "sizes": {"list": [1, )" +
+                                             number + "]}}]");
+            const std::string written = writeBoard(readOk(text));
+            CHECK(written.find("\"future\": " + number + "\n") != std::string::npos);
+            CHECK(written.find("          " + number + "\n") != std::string::npos);
+            CHECK(writeBoard(readOk(written)) == written);
+        }
+    }
+
+    SUBCASE("an unknown number changed after reading is written as its new value") {
+        Board board = readOk(minimal(R"(, "future": 1E2, "other": 1E2)"));
+        CHECK(board.extra["future"] == 100.0);  // still a number for whoever reads it
+        board.extra["future"] = 3;
+        const std::string written = writeBoard(board);
+        CHECK(written.find("\"future\": 3,") != std::string::npos);
+        CHECK(written.find("\"other\": 1E2\n") != std::string::npos);
+    }
+
+    SUBCASE("the key that keeps spellings cannot come from a file") {
+        const ReadResult<Board> result = readBoard(minimal(R"(, "\u0000spellings": 1)"), "r.json");
+        REQUIRE(result.error.has_value());
+        CHECK(result.error->message == "this key is reserved");
+    }
+
     SUBCASE("optional members take their defaults") {
         const Board board = readOk(minimal(""));
         CHECK(board.title.empty());

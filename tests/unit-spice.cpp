@@ -378,6 +378,20 @@ TEST_CASE("spice errors") {
             SpiceOptions{"GND", true}, limits);
         CHECK_FALSE(many.ok());
     }
+    SUBCASE("the part limit is checked as the elements are read, on the line that passes it") {
+        netcheck::ReadLimits limits;
+        limits.maxParts = 3;
+        const auto result = netcheck::importSpice(
+            "t\nR1 a b 1k\nR2 a b 1k\nR3 a b 1k\nR4 a b 1k\nR5 a b 1k\n", "deck.cir", {}, limits);
+        REQUIRE(result.error.has_value());
+        CHECK(result.error->describe() == "deck.cir:5: more than 3 elements in the deck");
+    }
+    SUBCASE("100,000 elements: a duplicate name on the last line is found") {
+        std::string deck = "t\n";
+        for (int i = 1; i <= 99999; ++i) deck += "R" + std::to_string(i) + " a b 1k\n";
+        deck += "r77 a b 1k\n";  // element names are case-insensitive (ngspice manual)
+        CHECK(errorOf(deck) == "deck.cir:100001: duplicate element name r77 (first on line 78)");
+    }
 }
 
 TEST_CASE("spice flattening") {

@@ -5,6 +5,7 @@
 #include <algorithm>
 #include <cctype>
 #include <functional>
+#include <sstream>
 
 #include <cairo-pdf.h>
 #include <cairo-svg.h>
@@ -15,6 +16,7 @@
 #include "cautions.hpp"
 #include "check_banner.hpp"
 #include "netcheck/check/check.hpp"
+#include "netcheck/file/file_io.hpp"
 #include "page_flow.hpp"
 #include "page_layout.hpp"
 #include "page_map.hpp"
@@ -163,15 +165,22 @@ private:
     double pageHeightMm_;
 };
 
-cairo_surface_t* createSurface(Format format, const std::string& path, const SheetData& data) {
+// Cairo hands the finished bytes over piece by piece; they are kept in memory and saved in one
+// atomic step, so a failure never leaves a partial sheet behind.
+cairo_status_t appendBytes(void* closure, const unsigned char* data, unsigned int length) {
+    static_cast<std::string*>(closure)->append(reinterpret_cast<const char*>(data), length);
+    return CAIRO_STATUS_SUCCESS;
+}
+
+cairo_surface_t* createSurface(Format format, std::string& bytes, const SheetData& data) {
     const PaperSize& paper = data.plan.paper;
     if (format == Format::Pdf) {
-        return cairo_pdf_surface_create(path.c_str(), paper.widthMm * kPointsPerMm,
-                                        paper.heightMm * kPointsPerMm);
+        return cairo_pdf_surface_create_for_stream(
+            appendBytes, &bytes, paper.widthMm * kPointsPerMm, paper.heightMm * kPointsPerMm);
     }
     // Sized in millimetres so width/height read "210mm" and user units are millimetres.
-    cairo_surface_t* surface =
-        cairo_svg_surface_create(path.c_str(), paper.widthMm, paper.heightMm * data.pageCount);
+    cairo_surface_t* surface = cairo_svg_surface_create_for_stream(
+        appendBytes, &bytes, paper.widthMm, paper.heightMm * data.pageCount);
     cairo_svg_surface_set_document_unit(surface, CAIRO_SVG_UNIT_MM);
     return surface;
 }
@@ -205,9 +214,19 @@ std::optional<std::string> exportSheet(const Board& board, const SheetOptions& o
                                        const std::string& outPath) {
     auto format = formatOf(outPath);
     if (!format) return "cannot tell the sheet format of \"" + outPath + "\": use .pdf or .svg";
+    // Files are refused such a pitch when read; a board made in memory is held to the same
+    // bounds, since cairo spends minutes on (or fails half-way through) a board metres wide.
+    const netcheck::ReadLimits limits;
+    if (!(board.pitchMm >= limits.minPitchMm && board.pitchMm <= limits.maxPitchMm)) {
+        std::ostringstream message;
+        message << "cannot draw the sheet \"" << outPath << "\": the hole pitch " << board.pitchMm
+                << " mm is outside " << limits.minPitchMm << " to " << limits.maxPitchMm << " mm";
+        return message.str();
+    }
     SheetData data{board, planSheet(board, options), netcheck::check(board), numberedCuts(board)};
     data.pageCount = data.plan.boardPageCount + countListPages(data);
-    cairo_surface_t* surface = createSurface(*format, outPath, data);
+    std::string bytes;
+    cairo_surface_t* surface = createSurface(*format, bytes, data);
     cairo_t* cr = cairo_create(surface);
     prepareText(cr);
     drawSheet(cr, *format, data);
@@ -217,10 +236,11 @@ std::optional<std::string> exportSheet(const Board& board, const SheetOptions& o
     if (status == CAIRO_STATUS_SUCCESS) status = cairo_surface_status(surface);
     cairo_surface_destroy(surface);
     if (status != CAIRO_STATUS_SUCCESS) {
-        return "cannot write the sheet \"" + outPath + "\": " + statusText(status) +
-               " (does the folder exist, and may it be written?)";
+        return "cannot draw the sheet \"" + outPath + "\": " + statusText(status);
     }
-    return std::nullopt;
+    netcheck::SaveOptions save;
+    save.keepBackup = false;  // a sheet is made again from the board at any time
+    return netcheck::saveFileAtomically(outPath, bytes, save);
 }
 
 }  // namespace sheet

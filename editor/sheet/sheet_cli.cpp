@@ -1,14 +1,12 @@
 #include "sheet_cli.hpp"
 
-#include <cerrno>
-#include <cstring>
-#include <fstream>
 #include <iostream>
-#include <sstream>
 #include <string>
 #include <string_view>
 
 #include "netcheck/file/board_file.hpp"
+#include "netcheck/file/file_io.hpp"
+#include "netcheck/model/printable.hpp"
 #include "paper.hpp"
 #include "sheet.hpp"
 
@@ -29,7 +27,7 @@ struct SheetArgs {
 std::optional<SheetArgs> parseArgs(int argc, char** argv) {
     SheetArgs args;
     auto fail = [](const std::string& message) {
-        std::cerr << "stripsmith: " << message << "\n" << kUsage;
+        std::cerr << "stripsmith: " << netcheck::escapeControls(message) << "\n" << kUsage;
         return std::nullopt;
     };
     for (int i = 1; i < argc; ++i) {
@@ -62,15 +60,6 @@ std::optional<SheetArgs> parseArgs(int argc, char** argv) {
     return args;
 }
 
-std::optional<std::string> readFile(const std::string& path) {
-    std::ifstream in(path, std::ios::binary);
-    if (!in) return std::nullopt;
-    std::ostringstream text;
-    text << in.rdbuf();
-    if (in.bad()) return std::nullopt;
-    return text.str();
-}
-
 }  // namespace
 
 bool wantsSheetCommand(int argc, char** argv) {
@@ -83,20 +72,24 @@ bool wantsSheetCommand(int argc, char** argv) {
 int runSheetCommand(int argc, char** argv) {
     auto args = parseArgs(argc, argv);
     if (!args) return 2;
-    auto text = readFile(args->board);
-    if (!text) {
-        std::cerr << "stripsmith: " << args->board
-                  << ": cannot read the board file: " << std::strerror(errno) << "\n";
+    // The same size-limited reader as every other: it refuses folders, FIFOs and devices and
+    // files over the limit before reading them.
+    const netcheck::ReadLimits limits;
+    auto text = netcheck::readFileLimited(args->board, limits.maxBytes);
+    if (!text.ok()) {
+        std::cerr << "stripsmith: " << text.error->describe() << "\n";
         return 2;
     }
-    auto board = netcheck::readBoard(*text, args->board);
+    auto board = netcheck::readBoard(*text.value, args->board, limits);
     if (!board.ok()) {
         std::cerr << "stripsmith: " << board.error->describe() << "\n";
         return 2;
     }
-    for (const std::string& note : board.notes) std::cerr << "stripsmith: note: " << note << "\n";
+    for (const std::string& note : board.notes) {
+        std::cerr << "stripsmith: note: " << netcheck::escapeControls(note) << "\n";
+    }
     if (auto error = exportSheet(*board.value, args->options, args->out)) {
-        std::cerr << "stripsmith: " << *error << "\n";
+        std::cerr << "stripsmith: " << netcheck::escapeControls(*error) << "\n";
         return 1;
     }
     return 0;

@@ -2,6 +2,8 @@
 
 #include <string>
 
+#include "netcheck/model/printable.hpp"
+
 namespace sheet {
 
 void setColour(cairo_t* cr, Rgb colour) {
@@ -24,14 +26,16 @@ void setFont(cairo_t* cr, double sizeMm, Weight weight) {
 }
 
 double textWidth(cairo_t* cr, std::string_view text) {
-    const std::string owned(text);
+    const std::string owned = netcheck::escapeControls(text);
     cairo_text_extents_t extents;
     cairo_text_extents(cr, owned.c_str(), &extents);
     return extents.x_advance;
 }
 
 void drawText(cairo_t* cr, double x, double y, std::string_view text, Align align) {
-    const std::string owned(text);
+    // Text from the board file: control characters would draw as nothing (or end the string at
+    // a NUL), so they are written out as escapes, as every other output does.
+    const std::string owned = netcheck::escapeControls(text);
     double width = align == Align::Left ? 0.0 : textWidth(cr, owned);
     double left = align == Align::Left ? x : align == Align::Centre ? x - width / 2 : x - width;
     cairo_move_to(cr, left, y);

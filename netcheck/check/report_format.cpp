@@ -3,6 +3,8 @@
 // something.
 #include "netcheck/check/report_format.hpp"
 
+#include "netcheck/model/printable.hpp"
+
 namespace netcheck {
 
 namespace {
@@ -15,7 +17,9 @@ std::string findingLine(const Finding& finding) {
     std::string line = (finding.severity() == Severity::Error ? "error " : "warning ") +
                        std::string(finding.id()) + " " + finding.message;
     if (!finding.fix.empty()) line += "; " + finding.fix;
-    return line;
+    // Messages quote refs, values and net names from the files: shown raw, an escape sequence
+    // among them would act on the terminal.
+    return escapeControls(line);
 }
 
 // "R1.2 (A9)" for on-board pins, the bare name for off-board lugs.
@@ -36,7 +40,7 @@ std::string islandLine(const Board& board, const Island& island) {
     for (std::size_t i = 0; i < island.pins.size(); ++i) {
         line += (i == 0 ? " " : ", ") + pinWithHole(board, island.pins[i]);
     }
-    return line;
+    return escapeControls(line);
 }
 
 nlohmann::ordered_json pinNames(const std::vector<PinRef>& pins) {
@@ -125,7 +129,7 @@ std::string formatNetsText(const Board& board) {
     std::string text;
     for (const auto& group : boardNets(board)) {
         for (std::size_t i = 0; i < group.size(); ++i) {
-            text += (i == 0 ? "" : " ") + group[i].name();
+            text += (i == 0 ? "" : " ") + escapeControls(group[i].name());
         }
         text += "\n";
     }

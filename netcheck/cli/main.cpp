@@ -1,9 +1,12 @@
 // netcheck: checks a board file against its intended circuit, or prints the board's netlist.
-// Exit status: 0 the board matches (warnings allowed), 1 errors found, 2 the input is unusable.
+// Exit status: 0 the board matches (warnings allowed), 1 errors found, 2 the input is unusable
+// or the report could not be written.
+#include <cerrno>
 #include <exception>
 #include <iostream>
 #include <optional>
 #include <string>
+#include <system_error>
 #include <vector>
 
 #include "netcheck/file/board_file.hpp"
@@ -11,6 +14,7 @@
 #include "netcheck/spice/circuit_loader.hpp"
 #include "netcheck/file/file_io.hpp"
 #include "netcheck/check/report_format.hpp"
+#include "netcheck/model/printable.hpp"
 
 namespace {
 
@@ -24,7 +28,8 @@ constexpr const char* kUsage =
     "Checks a stripboard layout (BOARD, a .board.json file) against its intended circuit: the\n"
     "circuit embedded in the board file, or FILE. Prints every short, open and part mismatch with\n"
     "the holes concerned and a suggested fix. --nets prints the board's own connectivity instead.\n"
-    "Exit status: 0 the board matches (warnings allowed), 1 errors found, 2 unusable input.\n"
+    "Exit status: 0 the board matches (warnings allowed), 1 errors found, 2 unusable input\n"
+    "or the report could not be written.\n"
     "\n"
     "SPICE decks as FILE (.cir, .sp, .spice, .net, .ckt):\n"
     "  --ground NAME            net name of node 0 (default GND)\n"
@@ -101,17 +106,36 @@ auto load(const std::string& path, Reader reader)
     const netcheck::ReadLimits limits;
     netcheck::ReadResult<std::string> text = netcheck::readFileLimited(path, limits.maxBytes);
     if (!text.ok()) {
-        std::cerr << "netcheck: " << (text.error ? text.error->describe() : path) << "\n";
+        std::cerr << "netcheck: "
+                  << (text.error ? text.error->describe() : netcheck::escapeControls(path)) << "\n";
         return std::nullopt;
     }
     auto result = reader(*text.value, path);
     if (!result.ok()) {
         std::cerr << "netcheck: "
-                  << (result.error ? result.error->describe() : path + ": unreadable") << "\n";
+                  << (result.error ? result.error->describe()
+                                   : netcheck::escapeControls(path) + ": unreadable")
+                  << "\n";
         return std::nullopt;
     }
-    for (const std::string& note : result.notes) std::cerr << "netcheck: note: " << note << "\n";
+    for (const std::string& note : result.notes) {
+        std::cerr << "netcheck: note: " << netcheck::escapeControls(note) << "\n";
+    }
     return std::move(result.value);
+}
+
+/// Writes the report (or netlist) to standard output and makes sure it arrived: a full disk or a
+/// closed output must not pass for an empty report with a success status.
+bool emit(const std::string& text) {
+    errno = 0;
+    std::cout << text;
+    std::cout.flush();
+    if (std::cout.good()) return true;
+    const int error = errno;
+    std::cerr << "netcheck: cannot write the report to standard output"
+              << (error != 0 ? ": " + std::generic_category().message(error) : std::string())
+              << "\n";
+    return false;
 }
 
 Exit run(const Options& options) {
@@ -121,9 +145,9 @@ Exit run(const Options& options) {
         });
     if (!board) return Exit::BadInput;
     if (options.nets) {
-        std::cout << (options.json ? netcheck::netsJson(*board).dump(2) + "\n"
-                                   : netcheck::formatNetsText(*board));
-        return Exit::Match;
+        const bool written = emit(options.json ? netcheck::netsJson(*board).dump(2) + "\n"
+                                               : netcheck::formatNetsText(*board));
+        return written ? Exit::Match : Exit::BadInput;
     }
     std::optional<netcheck::Circuit> circuit;
     if (options.circuitFile) {
@@ -133,8 +157,10 @@ Exit run(const Options& options) {
         if (!circuit) return Exit::BadInput;
     }
     const netcheck::CheckReport report = netcheck::check(*board, circuit ? &*circuit : nullptr);
-    std::cout << (options.json ? netcheck::reportJson(report).dump(2) + "\n"
-                               : netcheck::formatReportText(report, *board));
+    if (!emit(options.json ? netcheck::reportJson(report).dump(2) + "\n"
+                           : netcheck::formatReportText(report, *board))) {
+        return Exit::BadInput;
+    }
     return report.ok() ? Exit::Match : Exit::Errors;
 }
 
@@ -143,19 +169,17 @@ Exit run(const Options& options) {
 int main(int argc, char** argv) {
     try {
         const Options options = parseArgs(std::vector<std::string>(argv + 1, argv + argc));
-        if (options.help) {
-            std::cout << kUsage;
-            return 0;
-        }
+        if (options.help) return emit(kUsage) ? 0 : static_cast<int>(Exit::BadInput);
         if (options.version) {
-            std::cout << "netcheck " << kVersion << "\n";
-            return 0;
+            return emit(std::string("netcheck ") + kVersion + "\n")
+                       ? 0
+                       : static_cast<int>(Exit::BadInput);
         }
         return static_cast<int>(run(options));
     } catch (const UsageError& error) {
-        std::cerr << "netcheck: " << error.message << "\n" << kUsage;
+        std::cerr << "netcheck: " << netcheck::escapeControls(error.message) << "\n" << kUsage;
     } catch (const std::exception& error) {
-        std::cerr << "netcheck: cannot check: " << error.what() << "\n";
+        std::cerr << "netcheck: cannot check: " << netcheck::escapeControls(error.what()) << "\n";
     }
     return static_cast<int>(Exit::BadInput);
 }

@@ -4,13 +4,23 @@
 
 #include <map>
 #include <set>
+#include <sstream>
+#include <unordered_map>
 
 #include "netcheck/file/circuit_json.hpp"
 #include "netcheck/file/detail/json_reader.hpp"
+#include "netcheck/model/name_rules.hpp"
 
 namespace netcheck {
 
 namespace {
+
+// "0.5", "10": a bound as a maker writes it.
+std::string millimetres(double mm) {
+    std::ostringstream text;
+    text << mm;
+    return text.str();
+}
 
 /// Reads one parsed document into a Board, failing at the first problem.
 class BoardReader {
@@ -30,8 +40,8 @@ public:
             const auto step = r_.enter("circuit");
             board_.circuit = readCircuitObject(r_, *circuit, limits_);
         }
-        board_.extra = JsonReader::extras(root, {"format", "version", "title", "board", "cuts",
-                                                 "parts", "links", "offboard", "wires", "circuit"});
+        board_.extra = r_.extras(root, {"format", "version", "title", "board", "cuts", "parts",
+                                        "links", "offboard", "wires", "circuit"});
         return std::move(board_);
     }
 
@@ -83,6 +93,11 @@ private:
                 r_.fail("pitch_mm must be a positive number of millimetres");
             }
             board_.pitchMm = pitch->get<double>();
+            if (board_.pitchMm < limits_.minPitchMm || board_.pitchMm > limits_.maxPitchMm) {
+                r_.fail("pitch_mm " + pitch->dump() + " is outside " +
+                        millimetres(limits_.minPitchMm) + " to " + millimetres(limits_.maxPitchMm) +
+                        " mm (stripboard is 2.54 mm)");
+            }
         }
         const std::string copper = r_.stringMember(grid, "copper", false);
         if (copper == "pads") {
@@ -93,7 +108,7 @@ private:
             const auto at = r_.enter("copper");
             r_.fail("copper " + inQuotes(copper) + " is not known (use \"strips\" or \"pads\")");
         }
-        board_.boardExtra = JsonReader::extras(grid, {"rows", "cols", "pitch_mm", "copper"});
+        board_.boardExtra = r_.extras(grid, {"rows", "cols", "pitch_mm", "copper"});
     }
 
     template <class ReadItem>
@@ -170,8 +185,14 @@ private:
         const std::string where = r_.pathText();
         const auto step = r_.enter("ref");
         r_.expectRef(ref);
-        const auto [it, fresh] = refWhere_.emplace(ref, where);
-        if (!fresh) r_.fail("duplicate ref " + inQuotes(ref) + " (also at " + it->second + ")");
+        const auto [it, fresh] = refWhere_.emplace(refIdentity(ref), RefSeen{ref, where});
+        if (!fresh) {
+            const RefSeen& first = it->second;
+            r_.fail("duplicate ref " + inQuotes(ref) + " (also at " + first.where +
+                    (first.ref == ref ? ")"
+                                      : " as " + inQuotes(first.ref) +
+                                            "; refs that differ only in case are one part)"));
+        }
         if (refWhere_.size() > limits_.maxParts) {
             r_.fail("more than " + std::to_string(limits_.maxParts) + " parts");
         }
@@ -182,8 +203,9 @@ private:
         r_.expectObject(object);
         Part part;
         part.ref = readRef(object);
-        part.kind = r_.stringMember(object, "kind", true);
-        part.value = r_.stringMember(object, "value", false);
+        part.kind = r_.textMember(object, "kind", true);
+        part.value = r_.textMember(object, "value", false);
+        part.extra = r_.extras(object, {"ref", "kind", "value", "pins"});
         const Json& pins = r_.require(object, "pins");
         const auto step = r_.enter("pins");
         r_.expectObject(pins);
@@ -192,7 +214,6 @@ private:
             r_.expectPinName(name, "pin name");
             part.pins.push_back(Pin{name, holeAt(hole)});
         }
-        part.extra = JsonReader::extras(object, {"ref", "kind", "value", "pins"});
         board_.parts.push_back(std::move(part));
     }
 
@@ -213,7 +234,7 @@ private:
             if (!it->is_boolean()) r_.fail("insulated must be true or false");
             link.insulated = it->get<bool>();
         }
-        link.extra = JsonReader::extras(object, {"from", "to", "side", "insulated"});
+        link.extra = r_.extras(object, {"from", "to", "side", "insulated"});
         board_.links.push_back(std::move(link));
     }
 
@@ -221,8 +242,9 @@ private:
         r_.expectObject(object);
         OffboardPart part;
         part.ref = readRef(object);
-        part.kind = r_.stringMember(object, "kind", true);
-        part.value = r_.stringMember(object, "value", false);
+        part.kind = r_.textMember(object, "kind", true);
+        part.value = r_.textMember(object, "value", false);
+        part.extra = r_.extras(object, {"ref", "kind", "value", "pins"});
         const Json& pins = r_.require(object, "pins");
         const auto step = r_.enter("pins");
         part.pins = r_.asStringArray(pins);
@@ -234,7 +256,6 @@ private:
                 r_.fail("lug " + inQuotes(part.pins[i]) + " is listed twice");
             }
         }
-        part.extra = JsonReader::extras(object, {"ref", "kind", "value", "pins"});
         board_.offboard.push_back(std::move(part));
     }
 
@@ -277,16 +298,20 @@ private:
         wire.from = endpointMember(object, "from");
         wire.to = endpointMember(object, "to");
         if (wire.from == wire.to) r_.fail("wire joins " + wire.from.name() + " to itself");
-        wire.color = r_.stringMember(object, "color", false);
-        wire.extra = JsonReader::extras(object, {"from", "to", "color"});
+        wire.color = r_.textMember(object, "color", false);
+        wire.extra = r_.extras(object, {"from", "to", "color"});
         board_.wires.push_back(std::move(wire));
     }
 
     JsonReader& r_;
     const ReadLimits& limits_;
     Board board_;
-    std::map<std::string, std::string> refWhere_;  // ref -> path where first seen
-    std::map<std::string, std::string> cutWhere_;  // cut name -> path where first seen
+    struct RefSeen {
+        std::string ref;    // as written
+        std::string where;  // path
+    };
+    std::unordered_map<std::string, RefSeen> refWhere_;  // ref identity -> where first seen
+    std::map<std::string, std::string> cutWhere_;        // cut name -> path where first seen
 };
 
 Json gridToJson(const Board& board) {

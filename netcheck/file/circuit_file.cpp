@@ -1,8 +1,10 @@
 // Reading and writing the intended circuit: {"parts": {...}, "nets": {...}}.
 #include <map>
+#include <unordered_map>
 
 #include "netcheck/file/board_file.hpp"
 #include "netcheck/file/circuit_json.hpp"
+#include "netcheck/model/name_rules.hpp"
 
 namespace netcheck {
 
@@ -11,8 +13,8 @@ namespace {
 CircuitPart readCircuitPart(JsonReader& reader, const Json& object) {
     reader.expectObject(object);
     CircuitPart part;
-    part.kind = reader.stringMember(object, "kind", true);
-    part.value = reader.stringMember(object, "value", false);
+    part.kind = reader.textMember(object, "kind", true);
+    part.value = reader.textMember(object, "value", false);
     if (const Json* pins = JsonReader::find(object, "pins")) {
         const auto step = reader.enter("pins");
         part.pins = reader.asStringArray(*pins);
@@ -21,7 +23,7 @@ CircuitPart readCircuitPart(JsonReader& reader, const Json& object) {
             reader.expectPinName(part.pins[i], "pin name");
         }
     }
-    part.extra = JsonReader::extras(object, {"kind", "value", "pins"});
+    part.extra = reader.extras(object, {"kind", "value", "pins"});
     return part;
 }
 
@@ -30,9 +32,15 @@ void readParts(JsonReader& reader, const Json& parts, const ReadLimits& limits, 
     if (parts.size() > limits.maxParts) {
         reader.fail("more than " + std::to_string(limits.maxParts) + " parts");
     }
+    std::unordered_map<std::string, std::string> spelling;  // ref identity -> ref as written
     for (const auto& [ref, object] : parts.items()) {
         const auto step = reader.enter(ref);
         reader.expectRef(ref);
+        const auto [first, fresh] = spelling.emplace(refIdentity(ref), ref);
+        if (!fresh) {
+            reader.fail("duplicate ref " + inQuotes(ref) + " (also " + inQuotes(first->second) +
+                        "; refs that differ only in case are one part)");
+        }
         circuit.parts[ref] = readCircuitPart(reader, object);
     }
 }
@@ -75,7 +83,7 @@ Circuit readCircuitObject(JsonReader& reader, const Json& object, const ReadLimi
         const auto step = reader.enter("nets");
         readNets(reader, *nets, circuit);
     }
-    circuit.extra = JsonReader::extras(object, {"parts", "nets"});
+    circuit.extra = reader.extras(object, {"parts", "nets"});
     return circuit;
 }
 

@@ -1,6 +1,8 @@
 // Formatting a file error the way compilers do, so editors and terminals can jump to it.
 #include "netcheck/file/file_error.hpp"
 
+#include "netcheck/model/printable.hpp"
+
 namespace netcheck {
 
 std::string FileError::describe() const {
@@ -12,7 +14,9 @@ std::string FileError::describe() const {
     }
     text.append(": ");
     if (!path.empty()) text.append(path).append(": ");
-    return text.append(message);
+    // The file name and the message may quote text from the file: shown on a terminal, an
+    // escape sequence in it must not act.
+    return escapeControls(text.append(message));
 }
 
 }  // namespace netcheck

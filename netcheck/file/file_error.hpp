@@ -16,7 +16,8 @@ struct FileError {
     /// Set when the file was written by a newer program version than this one reads; the editor
     /// may offer to open such a file read-only instead of treating it as damaged.
     bool newerVersion = false;
-    /// "board.json:12:5: parts[3].pins.2: hole "Z99" is outside a 10x24 board".
+    /// "board.json:12:5: parts[3].pins.2: hole "Z99" is outside a 10x24 board", with control
+    /// characters escaped (escapeControls) so that it is safe to print.
     std::string describe() const;
 };
 

@@ -122,6 +122,14 @@ int fillTemporary(Descriptor& file, std::string_view contents, const SaveOptions
     return file.close();
 }
 
+// What kind of special file this is, in a maker's words.
+std::string fileKind(const struct stat& info) {
+    if (S_ISFIFO(info.st_mode)) return "a pipe or FIFO";
+    if (S_ISSOCK(info.st_mode)) return "a socket";
+    if (S_ISCHR(info.st_mode) || S_ISBLK(info.st_mode)) return "a device";
+    return "a special file";
+}
+
 }  // namespace
 
 int writeAll(int fd, std::string_view bytes) {
@@ -181,7 +189,9 @@ ReadResult<std::string> readFileLimited(const std::string& path, std::size_t max
         result.error = FileError{path, 0, 0, "", std::move(message)};
         return result;
     };
-    const int fd = ::open(path.c_str(), O_RDONLY | O_CLOEXEC);
+    // Non-blocking so that opening a FIFO with no writer returns at once instead of waiting
+    // forever; such a file is refused below before anything is read.
+    const int fd = ::open(path.c_str(), O_RDONLY | O_CLOEXEC | O_NONBLOCK | O_NOCTTY);
     if (fd < 0) {
         if (errno == ENOENT) return fail("no such file");
         if (errno == EACCES) return fail("no permission to read this file");
@@ -191,24 +201,27 @@ ReadResult<std::string> readFileLimited(const std::string& path, std::size_t max
     struct stat info {};
     if (::fstat(fd, &info) != 0) return fail(std::generic_category().message(errno));
     if (S_ISDIR(info.st_mode)) return fail("this is a folder, not a file");
-    const std::string limit = "the limit is " + std::to_string(maxBytes) + " bytes";
-    if (S_ISREG(info.st_mode) && static_cast<std::size_t>(info.st_size) > maxBytes) {
-        return fail("the file is " + std::to_string(info.st_size) + " bytes, too large (" + limit +
-                    ")");
+    // Pipes, FIFOs, sockets and devices can block or never end: only plain files are read.
+    if (!S_ISREG(info.st_mode)) return fail("this is not a plain file (" + fileKind(info) + ")");
+    if (static_cast<std::size_t>(info.st_size) > maxBytes) {
+        return fail("the file is " + std::to_string(info.st_size) + " bytes, too large (the " +
+                    "limit is " + std::to_string(maxBytes) + " bytes)");
     }
-    // Pipes and devices have no size: read at most one byte past the limit to tell.
+    // The size may still grow while reading: read at most one byte past the limit to tell.
     std::string text;
     char buffer[65536];
     for (;;) {
         const ssize_t got = ::read(fd, buffer, sizeof buffer);
         if (got < 0) {
             if (errno == EINTR) continue;
-            if (errno == EISDIR) return fail("this is a folder, not a file");
             return fail("cannot read: " + std::generic_category().message(errno));
         }
         if (got == 0) break;
         text.append(buffer, static_cast<std::size_t>(got));
-        if (text.size() > maxBytes) return fail("the input is too large (" + limit + ")");
+        if (text.size() > maxBytes) {
+            return fail("the file grew past the limit while being read (the limit is " +
+                        std::to_string(maxBytes) + " bytes)");
+        }
     }
     result.value = std::move(text);
     return result;

@@ -33,9 +33,10 @@ struct SaveOptions {
 std::optional<std::string> saveFileAtomically(const std::string& path, std::string_view contents,
                                               const SaveOptions& options = {});
 
-/// Reads a whole file of at most `maxBytes` bytes. Missing files, folders, unreadable files and
-/// files over the limit give an error naming the file (a regular file over the limit is refused
-/// before reading it).
+/// Reads a whole file of at most `maxBytes` bytes. Missing files, folders, unreadable files,
+/// files that are not plain files (FIFOs, pipes, sockets, devices: they may block or never end)
+/// and files over the limit give an error naming the file; all of these are refused before
+/// anything is read.
 ReadResult<std::string> readFileLimited(const std::string& path, std::size_t maxBytes);
 
 }  // namespace netcheck

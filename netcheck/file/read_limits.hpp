@@ -12,6 +12,11 @@ struct ReadLimits {
     std::size_t maxBytes = 64u * 1024u * 1024u;
     std::size_t maxParts = 100000;  ///< on-board plus off-board parts, and circuit parts
     int maxDepth = 64;              ///< JSON nesting
+    /// Hole pitch in millimetres. Stripboard and perfboard exist from 1.27 mm (0.05 in) to
+    /// 5.08 mm (0.2 in); the bounds leave room around those and keep the drawing and the sheet
+    /// in sizes they can handle (a pitch of 1e308 mm made the board infinitely large).
+    double minPitchMm = 0.5;
+    double maxPitchMm = 10.0;
 };
 
 }  // namespace netcheck

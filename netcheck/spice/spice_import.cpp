@@ -4,7 +4,9 @@
 
 #include <algorithm>
 #include <cctype>
+#include <unordered_map>
 
+#include "netcheck/model/name_rules.hpp"
 #include "netcheck/spice/detail/spice_deck.hpp"
 #include "netcheck/spice/detail/spice_elements.hpp"
 #include "netcheck/spice/detail/spice_subckt.hpp"
@@ -35,17 +37,30 @@ std::string netName(const std::string& key, const spice::NodeNames& names,
     return names.shown.at(key);
 }
 
+// The deck's own syntax already keeps out blanks and most control characters; C1 controls and
+// no-break or zero-width spaces are well-formed UTF-8 and arrive here.
+void requireUsableNames(const ElementPart& part) {
+    if (const auto problem = refProblem(part.ref)) {
+        throw DeckError{part.line, "part ref " + part.ref + " " + *problem};
+    }
+    if (const auto problem = textProblem(part.value)) {
+        throw DeckError{part.line, "the value of " + part.ref + " " + *problem};
+    }
+}
+
 Circuit buildCircuit(const std::vector<ElementPart>& parts, const spice::NodeNames& names,
                      const std::map<std::string, std::string>& overrides,
                      const SpiceOptions& options) {
     Circuit circuit;
-    std::map<std::string, int> refLines;
-    std::map<std::string, std::string> keyOfNet;  // net name -> node key, to catch clashes
+    std::unordered_map<std::string, int> refLines;  // ref identity -> line
+    std::map<std::string, std::string> keyOfNet;    // net name -> node key, to catch clashes
     for (const ElementPart& part : parts) {
-        if (!refLines.emplace(part.ref, part.line).second) {
+        requireUsableNames(part);
+        if (const auto [first, fresh] = refLines.emplace(refIdentity(part.ref), part.line);
+            !fresh) {
             throw DeckError{part.line, "part ref " + part.ref + " (from " + part.name +
                                            ") is used twice (also line " +
-                                           std::to_string(refLines.at(part.ref)) + ")"};
+                                           std::to_string(first->second) + ")"};
         }
         circuit.parts[part.ref] =
             CircuitPart{part.kind, part.value, part.pins, nlohmann::json::object()};
@@ -121,8 +136,8 @@ ReadResult<Circuit> importSpice(std::string_view text, std::string_view fileName
         const spice::Deck deck = spice::readDeck(text);
         for (const auto& [line, remark] : deck.notes) context.note(line, remark);
         context.modelNames = modelNames(deck);
-        const spice::DeckScopes scopes =
-            spice::collectScopes(deck, context, options.sources == SpiceOptions::Sources::Offboard);
+        const spice::DeckScopes scopes = spice::collectScopes(
+            deck, context, options.sources == SpiceOptions::Sources::Offboard, limits);
         spice::checkCalls(scopes, limits);
         spice::NodeNames names;
         std::map<std::string, std::string> overrides;

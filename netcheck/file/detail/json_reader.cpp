@@ -7,6 +7,9 @@
 #include <cstdlib>
 #include <string>
 
+#include "netcheck/file/detail/number_spellings.hpp"
+#include "netcheck/model/name_rules.hpp"
+
 namespace netcheck {
 
 namespace {
@@ -67,15 +70,21 @@ std::string syntaxMessage(const nlohmann::json::parse_error& e) {
 // Builds the document like nlohmann's own DOM parser, but appends object members instead of
 // looking each key up first: ordered objects search linearly, which made large objects (a
 // circuit with thousands of parts) quadratic. Duplicate keys are found by a separate scan.
+//
+// It also notes the spelling of every number that would be written back differently (see
+// number_spellings.hpp), by the number's JSON pointer.
 class AppendingBuilder {
 public:
-    explicit AppendingBuilder(Json& root) : root_(root) {}
+    AppendingBuilder(Json& root, std::string_view text, NumberSpellings& spellings)
+        : root_(root), numbers_(text), spellings_(spellings) {}
 
     bool null() { return add(nullptr); }
     bool boolean(bool value) { return add(value); }
-    bool number_integer(Json::number_integer_t value) { return add(value); }
-    bool number_unsigned(Json::number_unsigned_t value) { return add(value); }
-    bool number_float(Json::number_float_t value, const std::string&) { return add(value); }
+    bool number_integer(Json::number_integer_t value) { return number(Json(value)); }
+    bool number_unsigned(Json::number_unsigned_t value) { return number(Json(value)); }
+    bool number_float(Json::number_float_t value, const std::string&) {
+        return number(Json(value));
+    }
     bool string(std::string& value) { return add(std::move(value)); }
     bool binary(Json::binary_t& value) { return add(Json::binary(std::move(value))); }
     bool key(std::string& name) {
@@ -100,13 +109,28 @@ private:
         place(Json(std::forward<Value>(value)));
         return true;
     }
+    bool number(Json value) {
+        // nlohmann gives no text for integers, and "-0" arrives as 0: the token is found anew.
+        const std::string_view spelling = numbers_.next();
+        if (value.dump() != spelling) spellings_.record(nextPointer(), spelling);
+        return add(std::move(value));
+    }
     bool open(Json container) {
+        pointers_.push_back(nextPointer());
         open_.push_back(place(std::move(container)));
         return true;
     }
     bool close() {
         open_.pop_back();
+        pointers_.pop_back();
         return true;
+    }
+    // The JSON pointer of the value about to be placed.
+    std::string nextPointer() const {
+        if (open_.empty()) return "";
+        const Json& parent = *open_.back();
+        return pointers_.back() + "/" +
+               (parent.is_array() ? std::to_string(parent.size()) : pointerToken(key_));
     }
     Json* place(Json value) {
         if (open_.empty()) {
@@ -126,7 +150,10 @@ private:
 
     Json& root_;
     std::vector<Json*> open_;
+    std::vector<std::string> pointers_;  // JSON pointer of each open container
     std::string key_;
+    NumberTokens numbers_;
+    NumberSpellings& spellings_;
 };
 
 std::string typeName(const Json& value) {
@@ -146,7 +173,7 @@ std::string inQuotes(std::string_view text) {
 }
 
 ReadResult<Json> parseJsonText(std::string_view text, std::string_view fileName,
-                               const ReadLimits& limits) {
+                               const ReadLimits& limits, NumberSpellings& spellings) {
     ReadResult<Json> result;
     if (text.size() > limits.maxBytes) {
         result.error =
@@ -171,7 +198,7 @@ ReadResult<Json> parseJsonText(std::string_view text, std::string_view fileName,
     }
     try {
         Json document;
-        AppendingBuilder builder(document);
+        AppendingBuilder builder(document, text, spellings);
         Json::sax_parse(text.begin(), text.end(), &builder);
         if (!document.is_object()) {
             result.error = errorAt(text, fileName, findValue(text, {}).value_or(0),
@@ -274,34 +301,44 @@ std::vector<std::string> JsonReader::asStringArray(const Json& value) {
 }
 
 void JsonReader::expectRef(std::string_view ref) const {
-    if (ref.empty()) fail("ref is empty");
     // A '.' is allowed: "X1.R1.2" still splits at the last '.' (flattened subcircuit parts).
-    for (char c : ref) {
-        if (std::isspace(static_cast<unsigned char>(c)) ||
-            std::iscntrl(static_cast<unsigned char>(c))) {
-            fail("ref " + inQuotes(ref) + " may not contain blanks");
-        }
+    if (const auto problem = refProblem(ref)) {
+        fail(ref.empty() ? "ref " + *problem : "ref " + inQuotes(ref) + " " + *problem);
     }
 }
 
 void JsonReader::expectPinName(std::string_view name, std::string_view what) const {
     if (name.empty()) fail(std::string(what) + " is empty");
-    for (char c : name) {
-        if (c == '.' || std::isspace(static_cast<unsigned char>(c)) ||
-            std::iscntrl(static_cast<unsigned char>(c))) {
-            fail(std::string(what) + " " + inQuotes(name) + " may not contain blanks or '.'");
-        }
+    const std::string named = std::string(what) + " " + inQuotes(name);
+    if (name.find('.') != std::string_view::npos) fail(named + " may not contain blanks or '.'");
+    if (const auto problem = refProblem(name)) fail(named + " " + *problem);
+}
+
+std::string JsonReader::textMember(const Json& object, std::string_view key, bool required) {
+    const Json* member = required ? &require(object, key) : find(object, key);
+    if (!member) return {};
+    const auto step = enter(std::string(key));
+    std::string text = asString(*member);
+    if (const auto problem = textProblem(text)) {
+        fail(std::string(key) + " " + inQuotes(text) + " " + *problem);
     }
+    return text;
 }
 
 nlohmann::json JsonReader::extras(const Json& object,
                                   std::initializer_list<std::string_view> known) {
     nlohmann::json kept = nlohmann::json::object();
+    nlohmann::json spellings = nlohmann::json::object();
     for (const auto& [key, value] : object.items()) {
-        if (std::find(known.begin(), known.end(), key) == known.end()) {
-            kept[key] = nlohmann::json(value);
-        }
+        if (std::find(known.begin(), known.end(), key) != known.end()) continue;
+        const auto step = enter(key);
+        if (key == kSpellingsKey) fail("this key is reserved");
+        kept[key] = nlohmann::json(value);
+        if (spellings_.empty()) continue;
+        nlohmann::json inside = spellings_.inside(jsonPointer(path_));
+        if (!inside.empty()) spellings[key] = std::move(inside);
     }
+    if (!spellings.empty()) kept[kSpellingsKey] = std::move(spellings);
     return kept;
 }
 
@@ -317,7 +354,7 @@ void appendExtras(Json& out, const nlohmann::json& extra) {
 }
 
 std::string dumpDocument(const Json& document) {
-    return document.dump(2, ' ', false, nlohmann::json::error_handler_t::replace) + "\n";
+    return writeJsonText(document);
 }
 
 }  // namespace netcheck

@@ -12,6 +12,7 @@
 #include "netcheck/file/board_file.hpp"
 #include "netcheck/file/file_error.hpp"
 #include "netcheck/file/detail/json_locator.hpp"
+#include "netcheck/file/detail/number_spellings.hpp"
 #include "netcheck/file/read_limits.hpp"
 
 namespace netcheck {
@@ -27,9 +28,10 @@ struct InvalidInput {
 };
 
 /// Parses text as JSON after the size, emptiness and nesting checks; syntax errors carry the
-/// line and column. The result is an object (other top-level values are an error).
+/// line and column. The result is an object (other top-level values are an error). Numbers
+/// that would be written back with another spelling are noted in `spellings`.
 ReadResult<Json> parseJsonText(std::string_view text, std::string_view fileName,
-                               const ReadLimits& limits);
+                               const ReadLimits& limits, NumberSpellings& spellings);
 
 /// The located error for a problem found while reading `text`.
 FileError locateError(std::string_view text, std::string_view fileName,
@@ -50,6 +52,9 @@ public:
     private:
         JsonPath& path_;
     };
+
+    /// `spellings`: of the numbers in the document being read, kept with unknown members.
+    explicit JsonReader(NumberSpellings spellings = {}) : spellings_(std::move(spellings)) {}
 
     [[nodiscard]] Step enter(std::string key);
     [[nodiscard]] Step enter(std::size_t index);
@@ -73,17 +78,23 @@ public:
     long long asInteger(const Json& value) const;
     /// Array of strings at the current path.
     std::vector<std::string> asStringArray(const Json& value);
-    /// Fails unless `ref` is a usable reference designator (non-empty, no blanks).
+    /// Member `key` as a string that holds no control characters (kinds, values, colours):
+    /// "" when absent and not required.
+    std::string textMember(const Json& object, std::string_view key, bool required);
+    /// Fails unless `ref` is a usable reference designator (refProblem: non-empty, no blanks,
+    /// no control characters).
     void expectRef(std::string_view ref) const;
     /// Fails unless `name` is a usable pin or lug name (non-empty, no blanks, no '.', since
     /// "REF.PIN" splits at the last '.').
     void expectPinName(std::string_view name, std::string_view what) const;
 
-    /// Unknown members of an object, kept for writing back.
-    static nlohmann::json extras(const Json& object, std::initializer_list<std::string_view> known);
+    /// Unknown members of the object at the current path, kept for writing back, with the
+    /// original spelling of their numbers (number_spellings.hpp).
+    nlohmann::json extras(const Json& object, std::initializer_list<std::string_view> known);
 
 private:
     JsonPath path_;
+    NumberSpellings spellings_;
 };
 
 /// Parses `text` and reads the document with `read(JsonReader&, const Json&)`, turning the first
@@ -92,13 +103,14 @@ template <class T, class ReadDocument>
 ReadResult<T> readDocument(std::string_view text, std::string_view fileName,
                            const ReadLimits& limits, ReadDocument read) {
     ReadResult<T> result;
-    ReadResult<Json> parsed = parseJsonText(text, fileName, limits);
+    NumberSpellings spellings;
+    ReadResult<Json> parsed = parseJsonText(text, fileName, limits, spellings);
     if (!parsed.ok()) {
         result.error = std::move(parsed.error);
         return result;
     }
     try {
-        JsonReader reader;
+        JsonReader reader(std::move(spellings));
         result.value = read(reader, *parsed.value);
     } catch (const InvalidInput& problem) {
         result.error = locateError(text, fileName, problem);
@@ -113,10 +125,12 @@ std::string inQuotes(std::string_view text);
 /// of ordered objects.
 void appendMember(Json& object, std::string key, Json value);
 
-/// Appends `extra` members that do not clash with keys already in `out`.
+/// Appends `extra` members that do not clash with keys already in `out` (with the spellings of
+/// their numbers, which dumpDocument uses).
 void appendExtras(Json& out, const nlohmann::json& extra);
 
-/// JSON text with 2-space indent and a final newline; invalid UTF-8 replaced rather than thrown.
+/// JSON text with 2-space indent and a final newline; invalid UTF-8 replaced rather than thrown;
+/// numbers of unknown members spelled as they were read (writeJsonText).
 std::string dumpDocument(const Json& document);
 
 }  // namespace netcheck

@@ -38,11 +38,10 @@ Scope openSubckt(const DeckLine& line) {
 }
 
 void addElement(Scope& scope, ElementPart part) {
-    for (const ElementPart& other : scope.elements) {
-        if (lower(other.name) == lower(part.name)) {
-            throw DeckError{part.line, "duplicate element name " + part.name + " (first on line " +
-                                           lineText(other.line) + ")"};
-        }
+    const auto [first, fresh] = scope.elementLines.emplace(lower(part.name), part.line);
+    if (!fresh) {
+        throw DeckError{part.line, "duplicate element name " + part.name + " (first on line " +
+                                       lineText(first->second) + ")"};
     }
     scope.elements.push_back(std::move(part));
 }
@@ -201,8 +200,10 @@ private:
 
 }  // namespace
 
-DeckScopes collectScopes(const Deck& deck, const ReadContext& context, bool sourcesAsParts) {
+DeckScopes collectScopes(const Deck& deck, const ReadContext& context, bool sourcesAsParts,
+                         const ReadLimits& limits) {
     DeckScopes scopes;
+    std::size_t elementCount = 0;
     std::vector<Scope> open;  // open[0] is the top level; nested definitions stack above it
     open.emplace_back();
     for (const DeckLine& line : deck.lines) {
@@ -210,6 +211,10 @@ DeckScopes collectScopes(const Deck& deck, const ReadContext& context, bool sour
         if (line.type == DeckLine::Type::Annotation) {
             current.annotations.push_back(line);
         } else if (line.type == DeckLine::Type::Element) {
+            if (++elementCount > limits.maxParts) {
+                throw DeckError{line.line, "more than " + std::to_string(limits.maxParts) +
+                                               " elements in the deck"};
+            }
             if (auto part = readElement(line, context, sourcesAsParts)) addElement(current, *part);
         } else if (isCommand(line, ".subckt")) {
             open.push_back(openSubckt(line));

@@ -5,6 +5,7 @@
 #include <map>
 #include <set>
 #include <string>
+#include <unordered_map>
 #include <vector>
 
 #include "netcheck/file/read_limits.hpp"
@@ -19,6 +20,8 @@ struct Scope {
     std::vector<std::string> ports;     ///< as written
     int line = 0;                       ///< the .subckt line
     std::vector<ElementPart> elements;  ///< in deck order
+    /// Lower-case element name -> its line: finds a duplicate name in one look-up.
+    std::unordered_map<std::string, int> elementLines;
     std::vector<DeckLine> annotations;  ///< `*@` lines inside this scope
 };
 
@@ -30,8 +33,10 @@ struct DeckScopes {
 };
 
 /// Splits the deck into scopes, reads every element and notes ignored dot-commands. Throws
-/// DeckError for an unterminated `.subckt`, a stray `.ends`, duplicate names in a scope.
-DeckScopes collectScopes(const Deck& deck, const ReadContext& context, bool sourcesAsParts);
+/// DeckError for an unterminated `.subckt`, a stray `.ends`, duplicate names in a scope, and
+/// more elements than `limits.maxParts` (counted as they are read, before any other work).
+DeckScopes collectScopes(const Deck& deck, const ReadContext& context, bool sourcesAsParts,
+                         const ReadLimits& limits);
 
 /// Checks every subcircuit call: the subcircuit exists, the node count matches its ports, and no
 /// definition calls itself, directly or through others (up to `limits.maxDepth` deep).
