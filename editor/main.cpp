@@ -29,6 +29,7 @@
 #include "editor/platform/draw_data_split.hpp"
 #include "editor/platform/imgui_impl_sfml.hpp"
 #include "editor/platform/x11_errors.hpp"
+#include "netcheck/model/printable.hpp"
 #include "editor/sheet/sheet_cli.hpp"
 
 namespace {
@@ -128,7 +129,9 @@ void renderFrame(sf::Window& window, EditorApp& app, float dt, platform::DrawDat
 
 std::string windowTitle(const EditorApp& app) {
     const std::string& path = app.doc.path();
-    std::string name = path.empty() ? "untitled" : path.substr(path.find_last_of('/') + 1);
+    // A file name may hold control characters; the window manager must not act on them.
+    const std::string name =
+        path.empty() ? "untitled" : netcheck::escapeControls(path.substr(path.find_last_of('/') + 1));
     return "Stripsmith - " + name + (app.doc.modified() ? " *" : "");
 }
 
