@@ -55,22 +55,23 @@ Finding placedPartFinding(FindingType type, const MatchedPart& part, const std::
     return finding;
 }
 
-// The ref's part as placed: its pins with their nodes and islands, no net yet.
-void placePart(const CheckedBoard& checked, MatchedPart& matched) {
+// The ref's part as placed: its pins, appended to `pins`, with their nodes and islands, no net yet.
+void placePart(const CheckedBoard& checked, MatchedPart& matched, std::vector<MatchedPin>& pins) {
     const Connectivity& copper = checked.copper();
-    matched.pins.reserve(matched.part ? matched.part->pins.size() : matched.offboard->pins.size());
+    const std::size_t first = pins.size();
     if (matched.part) {
         for (const Pin& pin : matched.part->pins) {
             const bool on = checked.board().contains(pin.hole);
             const int node = on ? checked.holeIndex(pin.hole) : -1;
-            matched.pins.push_back({pin.name, pin.name, node, copper.islandOfNode(node), -1});
+            pins.push_back({pin.name, pin.name, node, copper.islandOfNode(node), -1});
         }
     } else {
         for (const std::string& lug : matched.offboard->pins) {
             const int node = copper.lugNode(PinRef{std::string(matched.ref), lug});
-            matched.pins.push_back({lug, lug, node, copper.islandOfNode(node), -1});
+            pins.push_back({lug, lug, node, copper.islandOfNode(node), -1});
         }
     }
+    matched.pins = std::span<MatchedPin>(pins).subspan(first);
 }
 
 class Matcher {
@@ -80,6 +81,11 @@ public:
         const Board& board = checked.board();
         refs_.reserve(board.parts.size() + board.offboard.size() + circuit.parts.size());
         match_.parts.reserve(circuit.parts.size());
+        // Each board part is placed at most once, so its pins fit without the array moving.
+        std::size_t pins = 0;
+        for (const Part& part : board.parts) pins += part.pins.size();
+        for (const OffboardPart& part : board.offboard) pins += part.pins.size();
+        match_.pins.reserve(pins);
         for (const Part& part : board.parts) refs_.emplace(part.ref, Ref{&part, nullptr});
         for (const OffboardPart& part : board.offboard) refs_.emplace(part.ref, Ref{nullptr, &part});
     }
@@ -121,7 +127,7 @@ private:
         matched.ref = ref;
         matched.part = named.part;
         matched.offboard = named.offboard;
-        if (matched.found()) placePart(checked_, matched);
+        if (matched.found()) placePart(checked_, matched, match_.pins);
         return matched;
     }
 
@@ -231,22 +237,31 @@ private:
     CircuitMatch match_;
 };
 
-// The pins of every net, in ref order, each part's pins in board order.
+// The pins of every net, in ref order, each part's pins in board order: counted per net first, so
+// each net's pins are one stretch of match.netPins.
 void placeNets(CircuitMatch& match) {
-    std::vector<std::size_t> pinsOfNet(match.nets.size(), 0);
+    auto placed = [](const MatchedPart& part, const MatchedPin& pin) {
+        return part.found() && part.unknownPins.empty() && pin.net >= 0 && pin.node >= 0;
+    };
+    std::vector<std::size_t> start(match.nets.size() + 1, 0);
     for (const MatchedPart& part : match.parts) {
         for (const MatchedPin& pin : part.pins) {
-            if (pin.net >= 0) ++pinsOfNet[static_cast<std::size_t>(pin.net)];
+            if (placed(part, pin)) ++start[static_cast<std::size_t>(pin.net) + 1];
         }
     }
-    for (std::size_t n = 0; n < match.nets.size(); ++n) match.nets[n].pins.reserve(pinsOfNet[n]);
+    for (std::size_t n = 0; n < match.nets.size(); ++n) start[n + 1] += start[n];
+    match.netPins.resize(start.back());
+    std::vector<std::size_t> next(start.begin(), start.end() - 1);
     for (const MatchedPart& part : match.parts) {
-        if (!part.found() || !part.unknownPins.empty()) continue;
         for (const MatchedPin& pin : part.pins) {
-            if (pin.net < 0 || pin.node < 0) continue;
-            match.nets[static_cast<std::size_t>(pin.net)].pins.push_back(
-                NetPin{part.ref, pin.meant, pin.node, pin.island});
+            if (!placed(part, pin)) continue;
+            match.netPins[next[static_cast<std::size_t>(pin.net)]++] =
+                NetPin{part.ref, pin.meant, pin.node, pin.island};
         }
+    }
+    for (std::size_t n = 0; n < match.nets.size(); ++n) {
+        match.nets[n].pins =
+            std::span<const NetPin>(match.netPins).subspan(start[n], start[n + 1] - start[n]);
     }
 }
 

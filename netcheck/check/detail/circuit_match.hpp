@@ -2,6 +2,7 @@
 // checker; the board-versus-circuit view reads it through board_vs_circuit.hpp).
 #pragma once
 
+#include <span>
 #include <string>
 #include <string_view>
 #include <vector>
@@ -28,7 +29,7 @@ struct MatchedPart {
     const Part* part = nullptr;             ///< on the board
     const OffboardPart* offboard = nullptr;  ///< off the board
     const CircuitPart* declared = nullptr;   ///< null when the ref appears only in nets
-    std::vector<MatchedPin> pins;            ///< the board part's pins, in its order
+    std::span<MatchedPin> pins;              ///< the board part's pins, in its order (in CircuitMatch)
     std::vector<std::string> unknownPins;    ///< pins the circuit uses that the part lacks, sorted
 
     bool found() const { return part != nullptr || offboard != nullptr; }
@@ -60,14 +61,25 @@ struct NetPin {
 /// not fit the circuit, and outside the board left out), in ref order.
 struct Net {
     std::string_view name;
-    std::vector<NetPin> pins;
+    std::span<const NetPin> pins;  ///< in CircuitMatch::netPins
 };
 
+/// The pins of all parts, and of all nets, each lie in one array (two allocations for a whole board
+/// rather than one per part and per net); parts and nets hold their stretch of it. Moving a match
+/// keeps the stretches valid, copying would not.
 struct CircuitMatch {
     std::vector<MatchedPart> parts;  ///< every ref the circuit names, by ref
     std::vector<Net> nets;           ///< in the circuit's order (by name)
+    std::vector<MatchedPin> pins;    ///< the parts' pins, part after part
+    std::vector<NetPin> netPins;     ///< the nets' pins, net after net
     std::vector<Finding> errors;     ///< part findings: missing, extra, pins, values, reversed
     std::vector<Finding> warnings;   ///< value-differs, pot-reversed
+
+    CircuitMatch() = default;
+    CircuitMatch(CircuitMatch&&) = default;
+    CircuitMatch& operator=(CircuitMatch&&) = default;
+    CircuitMatch(const CircuitMatch&) = delete;
+    CircuitMatch& operator=(const CircuitMatch&) = delete;
 };
 
 /// Matches the board's parts and pins to `circuit`, orients the parts that may sit either way

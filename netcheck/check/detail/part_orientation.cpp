@@ -222,7 +222,7 @@ std::string pinList(const MatchedPart& part, const std::array<std::size_t, 3>& o
 // Three-pin transistors and regulators: every order of the pins is tried.
 void checkPolarised3(MatchedPart& part, NetCounts& counts, std::vector<Finding>& errors) {
     counts.add(part, -1);
-    const std::vector<MatchedPin> placedPins = part.pins;
+    const std::vector<MatchedPin> placedPins(part.pins.begin(), part.pins.end());
     const int placed = counts.score(part);
     std::array<std::size_t, 3> order{0, 1, 2};
     std::array<std::size_t, 3> best = order;
@@ -234,7 +234,7 @@ void checkPolarised3(MatchedPart& part, NetCounts& counts, std::vector<Finding>&
             best = order;
         }
     }
-    part.pins = placedPins;
+    std::copy(placedPins.begin(), placedPins.end(), part.pins.begin());
     counts.add(part, +1);
     if (!clearlyBetter(bestScore, placed)) return;
     errors.push_back(partFinding(FindingType::ReversedPart, part,
