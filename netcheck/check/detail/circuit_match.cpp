@@ -35,6 +35,22 @@ std::string joinNames(const std::vector<std::string>& names) {
     return text;
 }
 
+std::vector<std::string> pinNames(std::span<const MatchedPin> pins) {
+    std::vector<std::string> names;
+    for (const MatchedPin& pin : pins) names.emplace_back(pin.name);
+    return names;
+}
+
+// A declared pin list (empty: whatever the nets name) against the board part's, in any order.
+bool samePinNames(const std::vector<std::string>& declared, std::span<const MatchedPin> pins) {
+    if (declared.empty()) return true;
+    std::vector<std::string> present = pinNames(pins);
+    std::vector<std::string> wanted = declared;
+    std::sort(present.begin(), present.end());
+    std::sort(wanted.begin(), wanted.end());
+    return present == wanted;
+}
+
 Finding partFinding(FindingType type, std::string_view ref, std::string message) {
     Finding finding;
     finding.type = type;
@@ -191,23 +207,15 @@ private:
 
     void checkPins(const MatchedPart& part) {
         if (!part.found()) return;
-        std::vector<std::string> onBoard;
-        for (const MatchedPin& pin : part.pins) onBoard.emplace_back(pin.name);
         std::string problem;
         if (!part.unknownPins.empty()) {
             problem = "the circuit uses pin" + std::string(part.unknownPins.size() > 1 ? "s " : " ") +
-                      joinNames(part.unknownPins) + ", but the board part has " + joinNames(onBoard);
-        } else if (part.declared && !part.declared->pins.empty()) {
-            std::vector<std::string> declared = part.declared->pins;
-            std::vector<std::string> present = onBoard;
-            std::sort(declared.begin(), declared.end());
-            std::sort(present.begin(), present.end());
-            if (declared != present) {
-                problem = "the circuit declares pins " + joinNames(part.declared->pins) +
-                          ", but the board part has " + joinNames(onBoard);
-            }
+                      joinNames(part.unknownPins);
+        } else if (part.declared && !samePinNames(part.declared->pins, part.pins)) {
+            problem = "the circuit declares pins " + joinNames(part.declared->pins);
         }
         if (problem.empty()) return;
+        problem += ", but the board part has " + joinNames(pinNames(part.pins));
         match_.errors.push_back(placedPartFinding(FindingType::PinMismatch, part,
                                                   std::string(part.ref) + ": " + problem));
     }
