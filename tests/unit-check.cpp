@@ -6,7 +6,7 @@
 #include <random>
 
 #include "netcheck/check/check.hpp"
-#include "netcheck/check/report_format.hpp"
+#include "netcheck/report/report_format.hpp"
 #include "test_support.hpp"
 
 using namespace netcheck;

@@ -7,7 +7,7 @@
 #include <string>
 
 #include "netcheck/check/check.hpp"
-#include "netcheck/check/report_format.hpp"
+#include "netcheck/report/report_format.hpp"
 #include "netcheck/file/board_file.hpp"
 #include "netcheck/model/name_rules.hpp"
 #include "netcheck/model/printable.hpp"

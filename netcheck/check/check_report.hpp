@@ -67,7 +67,9 @@ struct Finding {
     std::vector<Hole> holes;                  ///< every hole worth highlighting
     std::optional<Cut> suggestedCut;          ///< short: one cut that separates without opening
     std::vector<Link> suggestedLinks;         ///< open: links that join the pieces
+    std::optional<Cut> cutToRemove;           ///< open: an existing cut whose removal mends it
     std::string fix;                          ///< the suggested fix in words (may be empty)
+    int repairStep = -1;  ///< the repair plan's step (0-based) that clears it; -1: none
 
     Severity severity() const { return findingTypeInfo(type).severity; }
     std::string_view id() const { return findingId(type); }

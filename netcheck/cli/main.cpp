@@ -13,21 +13,26 @@
 #include "netcheck/check/check.hpp"
 #include "netcheck/spice/circuit_loader.hpp"
 #include "netcheck/file/file_io.hpp"
-#include "netcheck/check/report_format.hpp"
+#include "netcheck/report/report_format.hpp"
 #include "netcheck/model/printable.hpp"
+#include "netcheck/repair/repair_plan.hpp"
 
 namespace {
 
 constexpr const char* kVersion = "0.1.0";
 
 constexpr const char* kUsage =
-    "usage: netcheck [--circuit FILE] [--json] BOARD\n"
+    "usage: netcheck [--circuit FILE] [--json] [--repair OUT] BOARD\n"
     "       netcheck --nets [--json] BOARD\n"
     "       netcheck --help | --version\n"
     "\n"
     "Checks a stripboard layout (BOARD, a .board.json file) against its intended circuit: the\n"
     "circuit embedded in the board file, or FILE. Prints every short, open and part mismatch with\n"
-    "the holes concerned and a suggested fix. --nets prints the board's own connectivity instead.\n"
+    "the holes concerned, and a repair plan: the fewest edits (cuts, links, leads) that bring the\n"
+    "board back to the circuit, each verified to make nothing worse. --nets prints the board's own\n"
+    "connectivity instead.\n"
+    "  --repair OUT             also write the board with the whole plan done to OUT; the exit\n"
+    "                           status then tells whether errors remain on the repaired board\n"
     "Exit status: 0 the board matches (warnings allowed), 1 errors found, 2 unusable input\n"
     "or the report could not be written.\n"
     "\n"
@@ -41,6 +46,7 @@ enum class Exit { Match = 0, Errors = 1, BadInput = 2 };
 struct Options {
     std::string boardFile;
     std::optional<std::string> circuitFile;
+    std::optional<std::string> repairedFile;
     netcheck::SpiceOptions spice;
     bool json = false;
     bool nets = false;
@@ -67,6 +73,9 @@ Options parseArgs(const std::vector<std::string>& args) {
         } else if (arg == "--circuit") {
             if (i + 1 >= args.size()) throw UsageError{"--circuit needs a file name"};
             options.circuitFile = args[++i];
+        } else if (arg == "--repair") {
+            if (i + 1 >= args.size() || args[i + 1].empty()) throw UsageError{"--repair needs an output file name"};
+            options.repairedFile = args[++i];
         } else if (arg == "--ground") {
             if (i + 1 >= args.size() || args[i + 1].empty())
                 throw UsageError{"--ground needs a net name"};
@@ -96,6 +105,7 @@ Options parseArgs(const std::vector<std::string>& args) {
     if (options.nets && options.circuitFile) {
         throw UsageError{"--nets prints the board's own netlist and takes no --circuit"};
     }
+    if (options.nets && options.repairedFile) throw UsageError{"--nets and --repair do not go together"};
     return options;
 }
 
@@ -138,6 +148,17 @@ bool emit(const std::string& text) {
     return false;
 }
 
+// The board with the plan done, saved atomically; the status tells whether errors remain on it.
+Exit writeRepaired(const std::string& path, const netcheck::Board& board, const netcheck::RepairPlan& plan,
+                   const netcheck::Circuit* circuit) {
+    const netcheck::Board repaired = netcheck::repairedBoard(board, plan);
+    if (auto problem = netcheck::saveFileAtomically(path, netcheck::writeBoard(repaired))) {
+        std::cerr << "netcheck: " << netcheck::escapeControls(*problem) << "\n";
+        return Exit::BadInput;
+    }
+    return netcheck::check(repaired, circuit).ok() ? Exit::Match : Exit::Errors;
+}
+
 Exit run(const Options& options) {
     std::optional<netcheck::Board> board =
         load(options.boardFile, [](std::string_view text, std::string_view name) {
@@ -156,11 +177,15 @@ Exit run(const Options& options) {
         });
         if (!circuit) return Exit::BadInput;
     }
-    const netcheck::CheckReport report = netcheck::check(*board, circuit ? &*circuit : nullptr);
-    if (!emit(options.json ? netcheck::reportJson(report).dump(2) + "\n"
-                           : netcheck::formatReportText(report, *board))) {
+    const netcheck::Circuit* against = circuit ? &*circuit : nullptr;
+    netcheck::CheckReport report = netcheck::check(*board, against);
+    const netcheck::RepairPlan plan = netcheck::planRepair(*board, against);
+    netcheck::attachPlan(report, plan, *board, against);
+    if (!emit(options.json ? netcheck::reportJson(report, &plan).dump(2) + "\n"
+                           : netcheck::formatReportText(report, *board, &plan))) {
         return Exit::BadInput;
     }
+    if (options.repairedFile) return writeRepaired(*options.repairedFile, *board, plan, against);
     return report.ok() ? Exit::Match : Exit::Errors;
 }
 

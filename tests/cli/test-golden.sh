@@ -48,12 +48,17 @@ for line in sys.argv[2].splitlines():
     base, want = line.split()
     report = json.load(open("%s/%s.json" % (sys.argv[1], base)))
     print("ok" if report["ok"] == (want == "0") else "FAIL %s.json: ok flag" % base)
+    # Each faulty sample holds one mistake: its repair plan is one step that clears every error.
+    if want == "1":
+        plan = report.get("repair", {})
+        one = len(plan.get("steps", [])) == 1 and plan.get("errors_after") == 0
+        print("ok" if one else "FAIL %s.json: not one root cause that clears all" % base)
 PY
 )
 while read -r flag; do
     if [ "$flag" = ok ]; then passed=$((passed + 1)); else echo "$flag"; failed=$((failed + 1)); fi
 done <<<"$flags"
-[ "$(grep -c . <<<"$flags")" -eq ${#samples[@]} ] || { echo "FAIL: ok flags unreadable"; failed=$((failed + 1)); }
+[ "$(grep -c . <<<"$flags")" -eq $(( ${#samples[@]} + $(grep -c ' 1$' <<<"$wants") )) ] || { echo "FAIL: ok flags unreadable"; failed=$((failed + 1)); }
 (cd "$src/samples" && "$bin/netcheck" --nets --json flasher.board.json) > "$out/flasher-nets.json" 2>&1
 check "flasher-nets.json" 0 $? "$out/flasher-nets.json"
 (cd "$src/samples" && "$bin/netcheck" --nets headphone-amp.board.json) > "$out/headphone-amp-nets.txt" 2>&1

@@ -210,6 +210,7 @@ Finding locateOpen(const CheckedBoard& checked, const Net& net,
     finding.message = std::string(net.name) + " is in " + std::to_string(pieces.size()) +
                       " pieces: " + piecesText(checked, pieces);
     if (const std::optional<Cut> cut = misplacedCut(checked, net, repaired)) {
+        finding.cutToRemove = *cut;
         finding.fix = "remove the cut at " + cutName(*cut);
         return finding;
     }

@@ -1,7 +1,9 @@
 // Report printing. Text is for people at the bench: one line per finding, every line naming holes,
-// then a summary. JSON is the CLI contract: stable key order, fields only where they mean
+// then a summary; a repair plan first, each step over the errors it clears. JSON is the CLI contract: stable key order, fields only where they mean
 // something.
-#include "netcheck/check/report_format.hpp"
+#include "netcheck/report/report_format.hpp"
+
+#include "netcheck/check/connectivity.hpp"
 
 #include "netcheck/model/printable.hpp"
 
@@ -78,7 +80,49 @@ nlohmann::ordered_json findingJson(const Finding& finding) {
     if (!finding.holes.empty()) entry["holes"] = holeNames(finding.holes);
     entry["message"] = finding.message;
     if (!finding.fix.empty()) entry["fix"] = finding.fix;
+    if (finding.repairStep >= 0) entry["repair_step"] = finding.repairStep + 1;
     return entry;
+}
+
+std::string stepLine(std::size_t k, const RepairStep& step) {
+    return escapeControls("step " + std::to_string(k + 1) + ": " + step.words() + " (clears " +
+                          plural(step.clears.size(), "error") + ")");
+}
+
+std::string planText(const CheckReport& report, const RepairPlan& plan) {
+    if (report.errors.empty()) return "";
+    if (plan.steps.empty()) return "repair plan: no safe edit clears any error\n";
+    const int cleared = plan.errorsBefore - plan.errorsAfter;
+    std::string text = "repair plan: " + plural(plan.steps.size(), "step") + " clear" +
+                       (plan.steps.size() == 1 ? "s " : " ") + std::to_string(cleared) + " of " +
+                       plural(static_cast<std::size_t>(plan.errorsBefore), "error") + "\n";
+    for (std::size_t k = 0; k < plan.steps.size(); ++k) {
+        text += stepLine(k, plan.steps[k]) + "\n";
+        for (const Finding& error : report.errors) {
+            if (error.repairStep == static_cast<int>(k)) text += "  " + findingLine(error) + "\n";
+        }
+    }
+    return text;
+}
+
+nlohmann::ordered_json planJson(const RepairPlan& plan) {
+    nlohmann::ordered_json json;
+    json["errors_before"] = plan.errorsBefore;
+    json["errors_after"] = plan.errorsAfter;
+    json["steps"] = nlohmann::ordered_json::array();
+    for (std::size_t k = 0; k < plan.steps.size(); ++k) {
+        const RepairStep& step = plan.steps[k];
+        nlohmann::ordered_json entry;
+        entry["step"] = k + 1;
+        entry["action"] = repairActionId(step.action);
+        if (!step.ref.empty()) entry["ref"] = step.ref;
+        entry["holes"] = holeNames(step.holes());
+        entry["words"] = step.words();
+        entry["clears"] = step.clears;
+        json["steps"].push_back(std::move(entry));
+    }
+    json["remaining"] = plan.remaining;
+    return json;
 }
 
 nlohmann::ordered_json findingsJson(const std::vector<Finding>& findings) {
@@ -89,21 +133,23 @@ nlohmann::ordered_json findingsJson(const std::vector<Finding>& findings) {
 
 }  // namespace
 
-std::string formatReportText(const CheckReport& report, const Board& board) {
-    std::string text;
+std::string formatReportText(const CheckReport& report, const Board& board, const RepairPlan* plan) {
+    std::string text = plan ? planText(report, *plan) : "";
     if (!report.hasCircuit) {
         text += "no circuit to compare with; " + plural(report.islands.size(), "island") +
                 (report.islands.size() == 1 ? " holds" : " hold") + " pins:\n";
         for (const Island& island : report.islands) text += islandLine(board, island) + "\n";
     }
-    for (const Finding& finding : report.errors) text += findingLine(finding) + "\n";
+    for (const Finding& finding : report.errors) {
+        if (finding.repairStep < 0) text += findingLine(finding) + "\n";
+    }
     for (const Finding& finding : report.warnings) text += findingLine(finding) + "\n";
     text += plural(report.errors.size(), "error") + ", " +
             plural(report.warnings.size(), "warning") + "\n";
     return text;
 }
 
-nlohmann::ordered_json reportJson(const CheckReport& report) {
+nlohmann::ordered_json reportJson(const CheckReport& report, const RepairPlan* plan) {
     nlohmann::ordered_json json;
     json["ok"] = report.ok();
     json["errors"] = findingsJson(report.errors);
@@ -115,6 +161,7 @@ nlohmann::ordered_json reportJson(const CheckReport& report) {
                 {{"pins", pinNames(island.pins)}, {"holes", holeNames(island.holes)}});
         }
     }
+    if (plan && !report.errors.empty()) json["repair"] = planJson(*plan);
     return json;
 }
 
