@@ -169,8 +169,8 @@ double RepairStep::cost() const {
         case RepairAction::RemoveWire:
         case RepairAction::TurnPart: return 1;
         case RepairAction::ReorderPins: return 1.5;
-        case RepairAction::MoveCut:
-        case RepairAction::RemoveCut: return 2;
+        case RepairAction::RemoveCut: return 1.5;
+        case RepairAction::MoveCut: return 2;
         case RepairAction::MoveLead: return 3;
         case RepairAction::AddCut: return 4;
         case RepairAction::AddLink:

@@ -208,6 +208,9 @@ private:
         for (const Link& link : board_.links) {
             if (link.from == hole || link.to == hole) add(RepairStep::removeLink(link));
         }
+        for (const Wire& wire : board_.wires) {
+            if (wire.from.hole == hole || wire.to.hole == hole) add(RepairStep::removeWire(wire));
+        }
     }
 
     void forLeadOnCut(Hole hole) {
