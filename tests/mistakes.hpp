@@ -6,6 +6,7 @@
 #include <algorithm>
 #include <functional>
 #include <optional>
+#include <set>
 #include <random>
 #include <string>
 #include <vector>
@@ -14,6 +15,7 @@
 #include "netcheck/check/connectivity.hpp"
 #include "netcheck/model/board.hpp"
 #include "netcheck/model/part_kinds.hpp"
+#include "netcheck/repair/repair_plan.hpp"
 
 namespace mistakes {
 
@@ -255,6 +257,61 @@ inline std::optional<Mistake> makeMistakes(std::mt19937& rng, const Board& board
         if (done && !netcheck::check(made).ok()) return Mistake{names, std::move(made)};
     }
     return std::nullopt;
+}
+
+// ---- the rule, checked with the plain check alone ---------------------------------------------
+
+/// The faults that must never appear where they were not: shorts by their nets, opens by their
+/// net, shared holes and leads on cuts by their hole, part findings by their ref.
+inline std::multiset<std::string> faults(const netcheck::CheckReport& report) {
+    std::multiset<std::string> found;
+    for (const netcheck::Finding& error : report.errors) {
+        std::string key(error.id());
+        for (const std::string& net : error.nets) key += " " + net;
+        key += " " + error.net + " " + error.ref;
+        if (error.hole) key += " " + netcheck::holeName(*error.hole);
+        found.insert(key);
+    }
+    return found;
+}
+
+/// Whether an edit from `before` to `after` helps: fewer errors and no fault that was not there.
+inline bool helps(const netcheck::CheckReport& before, const netcheck::CheckReport& after) {
+    const auto was = faults(before);
+    const auto is = faults(after);
+    return after.errors.size() < before.errors.size() && std::includes(was.begin(), was.end(), is.begin(), is.end());
+}
+
+/// Each step of the plan, done in order, helps.
+inline bool everyStepHelps(const Board& board, const netcheck::RepairPlan& plan) {
+    Board edited = board;
+    netcheck::CheckReport before = netcheck::check(edited);
+    for (const netcheck::RepairStep& step : plan.steps) {
+        auto command = step.command(edited);
+        if (!command) return false;
+        command->apply(edited);
+        netcheck::CheckReport after = netcheck::check(edited);
+        if (!helps(before, after)) return false;
+        before = std::move(after);
+    }
+    return true;
+}
+
+/// The number of own fixes left on the findings of `report` (the plan attached) that do not help.
+inline int harmfulOwnFixes(const Board& board, const netcheck::CheckReport& report) {
+    int harmful = 0;
+    for (const netcheck::Finding& error : report.errors) {
+        Board fixed = board;
+        bool any = false;
+        if (error.suggestedCut) fixed.cuts.push_back(*error.suggestedCut), any = true;
+        for (const auto& link : error.suggestedLinks) fixed.links.push_back(link), any = true;
+        if (error.cutToRemove) {
+            std::erase(fixed.cuts, *error.cutToRemove);
+            any = true;
+        }
+        if (any && !helps(report, netcheck::check(fixed))) ++harmful;
+    }
+    return harmful;
 }
 
 }  // namespace mistakes

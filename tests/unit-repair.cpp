@@ -5,8 +5,6 @@
 // check, and no step may add an error, a short, an open or a shared hole.
 #include <doctest/doctest.h>
 
-#include <map>
-#include <set>
 
 #include "mistakes.hpp"
 #include "netcheck/check/check.hpp"
@@ -33,42 +31,13 @@ Part& partOf(Board& board, const std::string& ref) {
     throw;
 }
 
-// The faults that must never appear where they were not: shorts by their nets, opens by their
-// net, shared holes and leads on cuts by their hole (read from the plain check's report).
-std::multiset<std::string> faults(const CheckReport& report) {
-    std::multiset<std::string> found;
-    for (const Finding& error : report.errors) {
-        std::string key(error.id());
-        for (const std::string& net : error.nets) key += " " + net;
-        key += " " + error.net + " " + error.ref;
-        if (error.hole) key += " " + holeName(*error.hole);
-        found.insert(key);
-    }
-    return found;
-}
-
-bool includes(const std::multiset<std::string>& before, const std::multiset<std::string>& after) {
-    return std::includes(before.begin(), before.end(), after.begin(), after.end());
-}
-
-// Each step, done in order, lowers the error count and brings no fault that was not there.
-bool everyStepHelps(const Board& board, const RepairPlan& plan) {
-    Board edited = board;
-    CheckReport before = check(edited);
-    for (const RepairStep& step : plan.steps) {
-        auto command = step.command(edited);
-        if (!command) return false;
-        command->apply(edited);
-        CheckReport after = check(edited);
-        if (after.errors.size() >= before.errors.size() || !includes(faults(before), faults(after))) return false;
-        before = std::move(after);
-    }
-    return true;
-}
-
+// The plan, with the rule checked on it and on every fix the report still offers beside it.
 RepairPlan planFor(const Board& board) {
     RepairPlan plan = planRepair(board);
-    CHECK(everyStepHelps(board, plan));
+    CHECK(mistakes::everyStepHelps(board, plan));
+    CheckReport report = check(board);
+    attachPlan(report, plan, board);
+    CHECK(mistakes::harmfulOwnFixes(board, report) == 0);
     return plan;
 }
 

@@ -61,7 +61,7 @@ namespace {
 // holding a pin meant to join another (for dangling-lead: a pin the circuit leaves unconnected,
 // or the only pin of its net, is meant to be alone).
 std::vector<Finding> findShorts(const CheckedBoard& checked, const std::vector<Net>& nets,
-                                std::vector<char>& meantToJoin) {
+                                std::vector<char>& meantToJoin, bool locate) {
     const auto islands = static_cast<std::size_t>(checked.copper().islandCount());
     meantToJoin.assign(islands, 0);
     std::vector<const Net*> firstNet(islands, nullptr);
@@ -79,7 +79,13 @@ std::vector<Finding> findShorts(const CheckedBoard& checked, const std::vector<N
     }
     std::vector<Finding> shorts;
     for (const auto& [island, islandNets] : shorted) {
-        shorts.push_back(locateShort(checked, island, islandNets));
+        if (locate) {
+            shorts.push_back(locateShort(checked, island, islandNets));
+            continue;
+        }
+        Finding& named = shorts.emplace_back();
+        named.type = FindingType::Short;
+        for (const Net* net : islandNets) named.nets.emplace_back(net->name);
     }
     return shorts;
 }
@@ -87,7 +93,7 @@ std::vector<Finding> findShorts(const CheckedBoard& checked, const std::vector<N
 // The opens, one per net whose pins lie in two or more islands, mended on the board as it would
 // be with every short's cut made.
 std::vector<Finding> findOpens(const CheckedBoard& checked, const std::vector<Net>& nets,
-                               const std::vector<Finding>& shorts) {
+                               const std::vector<Finding>& shorts, bool locate) {
     std::vector<const Net*> open;
     for (const Net& net : nets) {
         for (const NetPin& pin : net.pins) {
@@ -98,6 +104,14 @@ std::vector<Finding> findOpens(const CheckedBoard& checked, const std::vector<Ne
         }
     }
     if (open.empty()) return {};
+    if (!locate) {
+        std::vector<Finding> named(open.size());
+        for (std::size_t i = 0; i < open.size(); ++i) {
+            named[i].type = FindingType::Open;
+            named[i].net = std::string(open[i]->name);
+        }
+        return named;
+    }
     Board repaired = checked.board();
     for (const Finding& finding : shorts) {
         if (finding.suggestedCut) repaired.cuts.push_back(*finding.suggestedCut);
@@ -142,7 +156,7 @@ std::vector<Island> pinIslands(const CheckedBoard& checked) {
     return islands;
 }
 
-CheckReport checkBoard(const CheckedBoard& checked, const Circuit* circuit) {
+CheckReport checkBoard(const CheckedBoard& checked, const Circuit* circuit, const CheckOptions& options) {
     if (circuit == nullptr && checked.board().circuit) circuit = &*checked.board().circuit;
     CheckReport report;
     report.hasCircuit = circuit != nullptr;
@@ -151,8 +165,9 @@ CheckReport checkBoard(const CheckedBoard& checked, const Circuit* circuit) {
         CircuitMatch match = matchCircuit(checked, *circuit);
         report.errors = std::move(match.errors);
         report.warnings = std::move(match.warnings);
-        const std::vector<Finding> shorts = findShorts(checked, match.nets, meantToJoin);
-        const std::vector<Finding> opens = findOpens(checked, match.nets, shorts);
+        const std::vector<Finding> shorts =
+            findShorts(checked, match.nets, meantToJoin, options.locateFaults);
+        const std::vector<Finding> opens = findOpens(checked, match.nets, shorts, options.locateFaults);
         report.errors.insert(report.errors.end(), shorts.begin(), shorts.end());
         report.errors.insert(report.errors.end(), opens.begin(), opens.end());
     }
@@ -168,13 +183,13 @@ CheckReport checkBoard(const CheckedBoard& checked, const Circuit* circuit) {
 
 }  // namespace
 
-CheckReport check(const Board& board, const Circuit* circuit) {
-    return checkBoard(CheckedBoard(board), circuit);
+CheckReport check(const Board& board, const Circuit* circuit, const CheckOptions& options) {
+    return checkBoard(CheckedBoard(board), circuit, options);
 }
 
-CheckReport Checker::check(const Board& board, const Circuit* circuit) {
+CheckReport Checker::check(const Board& board, const Circuit* circuit, const CheckOptions& options) {
     const CheckedBoard checked(board);
-    CheckReport report = checkBoard(checked, circuit);
+    CheckReport report = checkBoard(checked, circuit, options);
     copper_.emplace(checked.copper());
     return report;
 }

@@ -18,6 +18,9 @@ namespace netcheck {
 
 namespace {
 
+// The search compares faults by name; where they lie matters only for the plans it goes on with.
+constexpr CheckOptions kNamesOnly{.locateFaults = false};
+
 struct Trial {
     std::vector<RepairStep> steps;
     int errors = 0;
@@ -53,7 +56,7 @@ public:
         : board_(board), circuit_(circuit), limits_(limits) {}
 
     Trial run() {
-        Trial best{{}, BoardHealth(checker_.check(board_, circuit_)).errorCount(), 0};
+        Trial best{{}, BoardHealth(check(board_, circuit_)).errorCount(), 0};
         std::vector<Trial> kept{best};
         for (int depth = 1; depth <= limits_.maxSteps && best.errors > 0 && !kept.empty(); ++depth) {
             std::vector<Trial> next;
@@ -72,7 +75,7 @@ private:
     // Every candidate edit after `trial` that obeys the rule and clears an error.
     void extend(const Trial& trial, std::vector<Trial>& next) {
         Board board = withSteps(board_, trial.steps);
-        const CheckReport report = checker_.check(board, circuit_);
+        const CheckReport report = check(board, circuit_);
         const BoardHealth health(report);
         for (RepairStep& step : candidateSteps(board, report)) {
             if (checks_ >= limits_.maxChecks) return;
@@ -83,7 +86,7 @@ private:
             const auto command = step.command(board);
             if (!command) continue;
             command->apply(board);
-            const BoardHealth after(checker_.check(board, circuit_));
+            const BoardHealth after(check(board, circuit_, kNamesOnly));
             ++checks_;
             command->revert(board);
             if (!after.noWorseThan(health) || after.errorCount() >= health.errorCount()) continue;
@@ -95,7 +98,6 @@ private:
     const Board& board_;
     const Circuit* circuit_;
     RepairLimits limits_;
-    Checker checker_;
     std::set<std::vector<std::string>> tried_;
     int checks_ = 0;
 };

@@ -25,7 +25,7 @@ namespace netcheck {
 struct RepairLimits {
     int maxSteps = 3;
     int keep = 6;
-    int maxChecks = 6000;
+    int maxChecks = 4000;
 };
 
 struct RepairPlan {
