@@ -45,6 +45,9 @@ void Document::markSaved(std::string path) {
 void Document::recheck() {
     // The checker keeps a pointer to the board it traced; board_ never moves.
     report_ = checker_.check(board_);
+    // The plan is searched only for a board with errors: a clean board costs nothing more.
+    plan_ = report_.ok() ? netcheck::RepairPlan{} : netcheck::planRepair(board_);
+    if (!report_.ok()) netcheck::attachPlan(report_, plan_, board_);
     ++revision_;
 }
 

@@ -11,6 +11,7 @@
 #include "netcheck/check/check_report.hpp"
 #include "netcheck/check/connectivity.hpp"
 #include "netcheck/edit/history.hpp"
+#include "netcheck/repair/repair_plan.hpp"
 
 namespace stripsmith {
 
@@ -38,6 +39,9 @@ public:
 
     /// Check result and traced copper for the present board.
     const netcheck::CheckReport& report() const { return report_; }
+    /// The repair plan for the present board (empty when it has no errors); the report's errors
+    /// carry the step that clears them.
+    const netcheck::RepairPlan& plan() const { return plan_; }
     const netcheck::Connectivity& connectivity() const { return checker_.copper(); }
     /// Holes and pins of island `id`; null when there is no such island.
     const netcheck::Island* island(int id) const;
@@ -66,6 +70,7 @@ private:
     netcheck::edit::History history_;
     netcheck::Checker checker_;  // re-checks on every edit in the same memory
     netcheck::CheckReport report_;
+    netcheck::RepairPlan plan_;
     unsigned revision_ = 0;
     mutable IslandDetails details_;
 };

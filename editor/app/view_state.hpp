@@ -21,6 +21,7 @@ struct ViewState {
     bool showCircuit = false;      ///< the Circuit panel is open
     bool showHelp = false;
     std::optional<int> focusedFinding;  ///< index into errors then warnings
+    std::optional<int> previewStep;     ///< repair plan step shown ghosted on the board
     ImVec2 canvasMin{0, 0};        ///< the canvas rectangle on screen, last frame
     ImVec2 canvasMax{0, 0};
 };

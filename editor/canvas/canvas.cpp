@@ -148,6 +148,9 @@ void drawLayers(const CanvasContext& c, const CanvasFrame& geometry) {
     f.hoveredPart = c.hover.part;
     f.hoveredIsland = c.doc.island(c.hover.island);
     f.focusedFinding = focusedFinding(c.doc.report(), c.view.focusedFinding);
+    const auto& steps = c.doc.plan().steps;
+    if (c.view.previewStep && static_cast<std::size_t>(*c.view.previewStep) < steps.size())
+        f.previewStep = &steps[static_cast<std::size_t>(*c.view.previewStep)];
     drawSubstrate(f);
     drawCopper(f);
     drawEdgeLabels(f);
@@ -160,6 +163,7 @@ void drawLayers(const CanvasContext& c, const CanvasFrame& geometry) {
     drawWires(f);
     drawFindingMarks(f);
     drawFindingHighlight(f);
+    drawRepairPreview(f);
     drawSideCaption(f);
 }
 

@@ -91,6 +91,58 @@ void drawFindingHighlight(const LayerFrame& f) {
                 f.draw->AddCircle(f.hole(pin.hole), f.t.len(0.55f), palette::kWarning, 16, 2.5f);
 }
 
+namespace {
+
+// A cross over a hole: what the step takes away.
+void crossOut(const CanvasFrame& f, ImVec2 p) {
+    const float r = f.t.len(0.4f);
+    f.draw->AddLine({p.x - r, p.y - r}, {p.x + r, p.y + r}, palette::kError, 3.0f);
+    f.draw->AddLine({p.x - r, p.y + r}, {p.x + r, p.y - r}, palette::kError, 3.0f);
+}
+
+void previewLeads(const LayerFrame& f, const netcheck::RepairStep& step) {
+    const float size = canvasTextSize(f, 0.45f);
+    for (std::size_t k = 0; k < step.pinsAfter.size() && k < step.pinsBefore.size(); ++k) {
+        const netcheck::Pin& after = step.pinsAfter[k];
+        if (after.hole == step.pinsBefore[k].hole) continue;
+        const ImVec2 p = f.hole(after.hole);
+        f.draw->AddCircleFilled(p, f.t.len(0.38f), palette::rgba(90, 200, 255, 110), 16);
+        f.draw->AddCircle(p, f.t.len(0.38f), palette::kSuggestion, 16, 2.5f);
+        if (size > 0)
+            f.draw->AddText(nullptr, size, {p.x + f.t.len(0.42f), p.y - size}, palette::kSuggestion, after.name.c_str());
+    }
+}
+
+}  // namespace
+
+void drawRepairPreview(const LayerFrame& f) {
+    if (!f.previewStep) return;
+    const netcheck::RepairStep& step = *f.previewStep;
+    using Action = netcheck::RepairAction;
+    const float width = std::max(3.0f, f.t.len(0.16f));
+    switch (step.action) {
+        case Action::AddCut: drawSuggestedCut(f, *step.cut); break;
+        case Action::MoveCut:
+            crossOut(f, f.hole(step.cut->hole));
+            drawSuggestedCut(f, *step.movedTo);
+            break;
+        case Action::RemoveCut: crossOut(f, f.hole(step.cut->hole)); break;
+        case Action::AddLink: dashedLine(f, f.hole(step.link->from), f.hole(step.link->to), palette::kSuggestion, width); break;
+        case Action::RemoveLink:
+            f.draw->AddLine(f.hole(step.link->from), f.hole(step.link->to), palette::kError, width);
+            crossOut(f, f.hole(step.link->from));
+            crossOut(f, f.hole(step.link->to));
+            break;
+        case Action::RemoveWire:
+            for (const netcheck::Endpoint* end : {&step.wire->from, &step.wire->to})
+                if (end->hole) crossOut(f, f.hole(*end->hole));
+            break;
+        case Action::TurnPart:
+        case Action::ReorderPins:
+        case Action::MoveLead: previewLeads(f, step); break;
+    }
+}
+
 void drawFindingMarks(const LayerFrame& f) {
     for (const netcheck::Finding& finding : f.report.errors) {
         if (finding.hole) f.draw->AddCircle(f.hole(*finding.hole), f.t.len(0.55f), palette::kError, 16, 2.0f);

@@ -9,6 +9,7 @@
 #include "editor/canvas/canvas_frame.hpp"
 #include "netcheck/check/check_report.hpp"
 #include "netcheck/check/connectivity.hpp"
+#include "netcheck/repair/repair_step.hpp"
 
 namespace stripsmith {
 
@@ -24,6 +25,7 @@ struct LayerFrame : CanvasFrame {
     std::optional<std::size_t> hoveredPart;           ///< its pin names are shown
     const netcheck::Island* hoveredIsland = nullptr;  ///< lit up with everything joined to it
     const netcheck::Finding* focusedFinding = nullptr;
+    const netcheck::RepairStep* previewStep = nullptr;  ///< shown ghosted before it is applied
 };
 
 /// The board outline and substrate, for the side shown.
@@ -50,6 +52,9 @@ void drawWires(const LayerFrame& f);
 void drawFindingMarks(const LayerFrame& f);
 /// The focused finding: its copper path, pieces, suggested cut or links, and its hole.
 void drawFindingHighlight(const LayerFrame& f);
+/// The repair step chosen in the Check panel, before it is applied: what goes in the suggestion
+/// colour (a new cut, link or lead position), what goes away crossed out in the error colour.
+void drawRepairPreview(const LayerFrame& f);
 /// The caption naming the side shown, over the top-left of the canvas.
 void drawSideCaption(const LayerFrame& f);
 

@@ -1,5 +1,7 @@
-// "Check": the live check's errors and warnings in the trade's words. Click one to see it on the
-// board; apply its suggested cut or link with one click (undoable).
+// "Check": the repair plan first (each step with the errors it clears under it, shown ghosted on
+// the board when chosen, applied one by one or all at once as one undo step), then the other
+// errors and warnings in the trade's words. Click a finding to see it on the board; apply a fix
+// a finding still offers with one click (undoable).
 #include <optional>
 #include <string>
 
@@ -8,6 +10,7 @@
 #include "editor/app/finding_fix.hpp"
 #include "editor/canvas/canvas.hpp"
 #include "editor/panels/panels.hpp"
+#include "netcheck/repair/repair_plan.hpp"
 
 namespace stripsmith {
 namespace {
@@ -53,6 +56,52 @@ bool findingRow(const CheckPanel& p, const netcheck::Finding& finding, int index
     return fixPressed;
 }
 
+// The plan's header, its steps with the errors each clears, and what stays. Returns the command
+// a pressed Apply button asks for.
+std::unique_ptr<netcheck::edit::Command> planRows(const CheckPanel& p, std::optional<netcheck::Finding>& toFix) {
+    const netcheck::RepairPlan& plan = p.doc.plan();
+    const auto& errors = p.doc.report().errors;
+    std::unique_ptr<netcheck::edit::Command> pressed;
+    if (plan.steps.empty()) {
+        ImGui::TextDisabled("No safe repair found.");
+    } else {
+        const int cleared = plan.errorsBefore - plan.errorsAfter;
+        ImGui::TextColored({0.55f, 0.8f, 1.0f, 1.0f}, "Repair plan: %zu step%s clear%s %d of %d error%s", plan.steps.size(),
+                           plan.steps.size() == 1 ? "" : "s", plan.steps.size() == 1 ? "s" : "", cleared, plan.errorsBefore,
+                           plan.errorsBefore == 1 ? "" : "s");
+        if (ImGui::Button(plan.steps.size() == 1 ? "Apply the repair" : "Apply all steps")) pressed = netcheck::planCommand(p.doc.board(), plan);
+        p.log.item("apply-plan");
+    }
+    for (std::size_t k = 0; k < plan.steps.size(); ++k) {
+        const netcheck::RepairStep& step = plan.steps[k];
+        ImGui::PushID(static_cast<int>(k) + 100000);
+        const bool shown = p.view.previewStep && *p.view.previewStep == static_cast<int>(k);
+        const std::string head = std::to_string(k + 1) + ". " + step.words() + " (clears " + std::to_string(step.clears.size()) + ")";
+        ImGui::PushTextWrapPos(0.0f);
+        if (ImGui::Selectable(head.c_str(), shown)) p.view.previewStep = shown ? std::nullopt : std::optional<int>(static_cast<int>(k));
+        ImGui::PopTextWrapPos();
+        p.log.item("repair-step-" + std::to_string(k + 1));
+        auto command = step.command(p.doc.board());
+        ImGui::BeginDisabled(!command);
+        if (ImGui::SmallButton("Apply this step")) pressed = std::move(command);
+        ImGui::EndDisabled();
+        p.log.item("apply-step-" + std::to_string(k + 1));
+        ImGui::Indent();
+        for (std::size_t i = 0; i < errors.size(); ++i)
+            if (errors[i].repairStep == static_cast<int>(k) && findingRow(p, errors[i], static_cast<int>(i))) toFix = errors[i];
+        ImGui::Unindent();
+        ImGui::PopID();
+    }
+    if (plan.errorsAfter > 0 && !plan.remaining.empty()) {
+        ImGui::PushTextWrapPos(0.0f);
+        ImGui::TextDisabled("What no repair of cuts, links and leads mends:");
+        for (const std::string& reason : plan.remaining) ImGui::BulletText("%s", reason.c_str());
+        ImGui::PopTextWrapPos();
+    }
+    ImGui::Separator();
+    return pressed;
+}
+
 }  // namespace
 
 void drawCheckPanel(const Document& doc, Commands commands, ViewState& view, TestLog& log, ImVec2 pos,
@@ -68,16 +117,22 @@ void drawCheckPanel(const Document& doc, Commands commands, ViewState& view, Tes
                         report.warnings.size(), report.warnings.size() == 1 ? "" : "s");
         }
         ImGui::Separator();
-        const int errors = static_cast<int>(report.errors.size());
         std::optional<netcheck::Finding> toFix;
-        for (int i = 0; i < errors; ++i)
-            if (findingRow(p, report.errors[static_cast<std::size_t>(i)], i)) toFix = report.errors[static_cast<std::size_t>(i)];
+        std::unique_ptr<netcheck::edit::Command> repair;
+        if (!report.errors.empty()) repair = planRows(p, toFix);
+        const int errors = static_cast<int>(report.errors.size());
+        for (int i = 0; i < errors; ++i) {
+            const netcheck::Finding& error = report.errors[static_cast<std::size_t>(i)];
+            if (error.repairStep < 0 && findingRow(p, error, i)) toFix = error;
+        }
         for (std::size_t i = 0; i < report.warnings.size(); ++i)
             if (findingRow(p, report.warnings[i], errors + static_cast<int>(i))) toFix = report.warnings[i];
-        // Applying re-runs the check, so only after the list is drawn.
-        if (toFix) {
-            commands.perform(fixCommand(doc.board(), *toFix));
+        // Applying re-runs the check (and the plan), so only after the list is drawn.
+        if (toFix) repair = fixCommand(doc.board(), *toFix);
+        if (repair) {
+            commands.perform(std::move(repair));
             view.focusedFinding.reset();
+            view.previewStep.reset();
         }
     }
     ImGui::End();

@@ -9,6 +9,7 @@
 #include <set>
 
 #include "netcheck/check/check.hpp"
+#include "netcheck/edit/compound_command.hpp"
 #include "netcheck/edit/cut_commands.hpp"
 #include "netcheck/edit/link_commands.hpp"
 #include "netcheck/repair/detail/board_health.hpp"
@@ -187,6 +188,19 @@ void attachPlan(CheckReport& report, const RepairPlan& plan, const Board& board,
         const BoardHealth after(check(fixed, circuit));
         if (!after.noWorseThan(before) || after.errorCount() >= before.errorCount()) withdrawFix(error);
     }
+}
+
+std::unique_ptr<edit::Command> planCommand(const Board& board, const RepairPlan& plan) {
+    Board scratch = board;  // each step's command is made on the board the steps before it left
+    std::vector<std::unique_ptr<edit::Command>> steps;
+    for (const RepairStep& step : plan.steps) {
+        auto command = step.command(scratch);
+        if (!command) return nullptr;
+        command->apply(scratch);
+        steps.push_back(std::move(command));
+    }
+    const std::string label = "Repair (" + std::to_string(steps.size()) + " step" + (steps.size() == 1 ? ")" : "s)");
+    return std::make_unique<edit::CompoundCommand>(label, std::move(steps));
 }
 
 Board repairedBoard(const Board& board, const RepairPlan& plan) { return withSteps(board, plan.steps); }

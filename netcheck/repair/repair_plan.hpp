@@ -8,6 +8,7 @@
 #pragma once
 
 #include <cstddef>
+#include <memory>
 #include <string>
 #include <vector>
 
@@ -47,6 +48,10 @@ RepairPlan planRepair(const Board& board, const Circuit* circuit = nullptr,
 /// those knock-on errors, and withdraws every other suggested fix that breaks the rule above.
 void attachPlan(CheckReport& report, const RepairPlan& plan, const Board& board,
                 const Circuit* circuit = nullptr);
+
+/// Every step of the plan as one command on `board` (one undo step); null when a step no longer
+/// fits the board.
+std::unique_ptr<edit::Command> planCommand(const Board& board, const RepairPlan& plan);
 
 /// The board with every step of the plan done.
 Board repairedBoard(const Board& board, const RepairPlan& plan);

@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
-# End to end: open a board with a forgotten track cut, apply the cut the Check panel suggests with
-# a mouse click, save with Ctrl+S, and check that netcheck now passes the board.
+# End to end: open a board with a forgotten track cut, show the repair plan's one step (a cut) on
+# the board, apply that step with a mouse click, save with Ctrl+S, and check that netcheck now
+# passes the board.
 source "$(dirname "$0")/e2e_lib.sh"
 run_under_xvfb "$0"
 
@@ -11,10 +12,12 @@ check "the sample fails its check before the fix" bash -c "! '$STRIPSMITH_BIN/ne
 
 start_editor "$board"
 screenshot fix-0-opened
-# Show the finding on the board, then apply its suggested cut.
+# Show the finding on the board, then the plan's step, then apply the step.
 click_at $(item_xy finding-0)
 screenshot fix-1-finding
-click_at $(item_xy apply-fix-0)
+click_at $(item_xy repair-step-1)
+screenshot fix-1-step-shown
+click_at $(item_xy apply-step-1)
 screenshot fix-2-applied
 shortcut ctrl+s Saved
 check "the previous version is kept as a backup" eventually test -s "$board.bak"
