@@ -35,11 +35,13 @@ for file in ./usr/bin/stripsmith ./usr/bin/netcheck ./usr/share/stripsmith/fonts
     check "the package holds $file" grep -qxF -- "$file" "$WORK/contents"
 done
 
-# Every library the programs load, by its package on this system, must be a dependency.
+# Every library the programs load, by its package on this system (the one holding it in this
+# architecture's library folder), must be a dependency.
 dpkg-deb -x "$deb" "$WORK/root"
+multiarch=$(dpkg-architecture -qDEB_HOST_MULTIARCH 2>/dev/null)
 for program in stripsmith netcheck; do
     for library in $(readelf -d "$WORK/root/usr/bin/$program" | sed -n 's/.*(NEEDED).*\[\(.*\)\]/\1/p'); do
-        owner=$(dpkg -S "*/$library" 2>/dev/null | head -1 | cut -d: -f1)
+        owner=$(dpkg -S "*/$multiarch/$library" 2>/dev/null | head -1 | cut -d: -f1)
         check "$program needs $library: its package ${owner:-(none found)} is a dependency" \
             eval '[ -n "$owner" ] && depends_on "$owner"'
     done
