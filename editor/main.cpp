@@ -5,6 +5,7 @@
 //                                            render the board as the editor shows it, then exit
 //   stripsmith --sheet OUT.pdf|OUT.svg [--paper a4|letter] BOARD
 //                                            write the printable build sheet, no window
+//   stripsmith --help | --version
 //
 // Sections: arguments | window and ImGui | screenshot | main loop.
 #include <GL/gl.h>
@@ -46,13 +47,21 @@ struct Options {
     Side side = Side::Component;
 };
 
+constexpr const char* kUsage =
+    "usage: stripsmith [--size WxH] [BOARD]\n"
+    "       stripsmith --screenshot OUT.png [--size WxH] [--view component|copper|both] BOARD\n"
+    "       stripsmith --sheet OUT.pdf|OUT.svg [--paper a4|letter] BOARD\n"
+    "       stripsmith --help | --version\n";
+
+constexpr const char* kHelp =
+    "\n"
+    "Opens BOARD (a .board.json file), or an empty board, in the stripboard layout editor.\n"
+    "--screenshot renders the board as the editor shows it to a PNG file and exits; --sheet\n"
+    "writes the printable build sheet at 1:1 (PDF or SVG) without opening a window.\n"
+    "The manual: man stripsmith.\n";
+
 int usage(const std::string& problem) {
-    std::fprintf(stderr,
-                 "stripsmith: %s\n"
-                 "usage: stripsmith [--size WxH] [BOARD]\n"
-                 "       stripsmith --screenshot OUT.png [--size WxH] [--view component|copper|both] BOARD\n"
-                 "       stripsmith --sheet OUT.pdf|OUT.svg [--paper a4|letter] BOARD\n",
-                 problem.c_str());
+    std::fprintf(stderr, "stripsmith: %s\n%s", problem.c_str(), kUsage);
     return 2;
 }
 
@@ -263,9 +272,22 @@ int run(const Options& options) {
 }  // namespace
 
 int main(int argc, char** argv) {
+    for (int i = 1; i < argc; ++i) {
+        const std::string arg = argv[i];
+        const bool help = arg == "--help" || arg == "-h";
+        if (!help && arg != "--version") continue;
+        if (help) std::printf("%s%s", kUsage, kHelp);
+        else std::printf("stripsmith %s\n", STRIPSMITH_VERSION);
+        return std::fflush(stdout) == 0 && !std::ferror(stdout) ? 0 : 2;
+    }
     if (sheet::wantsSheetCommand(argc, argv)) return sheet::runSheetCommand(argc, argv);
     std::string problem;
     const auto options = parseArgs(argc, argv, problem);
     if (!options) return usage(problem);
+    // A missing font is a clear error now, not a window with the wrong text later.
+    if (const std::string missing = missingAssets(); !missing.empty()) {
+        std::fprintf(stderr, "stripsmith: %s\n", missing.c_str());
+        return 2;
+    }
     return run(*options);
 }

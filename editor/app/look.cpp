@@ -2,14 +2,48 @@
 
 #include <cstdlib>
 #include <filesystem>
+#include <system_error>
 
 #include <imgui.h>
 
 namespace stripsmith {
 
+namespace {
+
+/// The files the editor cannot start without, relative to the assets folder.
+constexpr const char* kRequiredAssets[] = {"fonts/DejaVuSans.ttf"};
+
+/// $STRIPSMITH_ASSETS, or null when it is unset or empty.
+const char* assetsFromEnvironment() {
+    const char* dir = std::getenv("STRIPSMITH_ASSETS");
+    return dir && *dir ? dir : nullptr;
+}
+
+}  // namespace
+
 std::string assetsFolder() {
-    if (const char* dir = std::getenv("STRIPSMITH_ASSETS"); dir && *dir) return dir;
-    return STRIPSMITH_ASSETS_DIR;
+    if (const char* dir = assetsFromEnvironment()) return dir;
+    // The kernel's link to the running program: a symlink in PATH is already resolved here.
+    std::error_code error;
+    const std::filesystem::path program = std::filesystem::read_symlink("/proc/self/exe", error);
+    if (error || program.empty()) return {};
+    return (program.parent_path() / STRIPSMITH_ASSETS_FROM_BIN).lexically_normal().string();
+}
+
+std::string missingAssets() {
+    const std::string folder = assetsFolder();
+    if (folder.empty()) return "cannot find the assets: the program cannot tell where it is (/proc/self/exe)";
+    if (!std::filesystem::path(folder).is_absolute())
+        return "STRIPSMITH_ASSETS must be an absolute path, not \"" + folder + "\"";
+    for (const char* file : kRequiredAssets) {
+        const std::filesystem::path path = std::filesystem::path(folder) / file;
+        std::error_code error;
+        if (!std::filesystem::is_regular_file(path, error))
+            return "missing " + path.string() + " (the assets are looked for in " + folder +
+                   (assetsFromEnvironment() ? ", from STRIPSMITH_ASSETS)"
+                                            : ", beside the program; reinstall it)");
+    }
+    return {};
 }
 
 bool loadFonts() {

@@ -5,8 +5,15 @@
 
 namespace stripsmith {
 
-/// The assets folder: $STRIPSMITH_ASSETS when set, else the source tree's assets/.
+/// The assets folder (fonts): $STRIPSMITH_ASSETS when set (an absolute path), else
+/// share/stripsmith beside the program's own folder (bin/../share/stripsmith), which holds in the
+/// build tree (the build copies assets/ there) and in an install alike. Never the current
+/// directory. Empty when the program cannot tell where it is.
 std::string assetsFolder();
+
+/// Empty when every asset the editor needs is in assetsFolder(); else one message naming the
+/// first missing file and where it was looked for.
+std::string missingAssets();
 
 /// Adds the UI font at 1x and 2x to ImGui's atlas (before the renderer builds it). Returns false
 /// (and keeps ImGui's built-in font) when the font file is missing.

@@ -19,7 +19,7 @@
 
 namespace {
 
-constexpr const char* kVersion = "0.1.0";
+constexpr const char* kVersion = STRIPSMITH_VERSION;  // from the top CMakeLists.txt
 
 constexpr const char* kUsage =
     "usage: netcheck [--circuit FILE] [--json] [--repair OUT] BOARD\n"
