@@ -148,6 +148,10 @@ void drawLayers(const CanvasContext& c, const CanvasFrame& geometry) {
     f.hoveredPart = c.hover.part;
     f.hoveredIsland = c.doc.island(c.hover.island);
     f.focusedFinding = focusedFinding(c.doc.report(), c.view.focusedFinding);
+    if (c.view.showBenchVoltages && c.voltages) {
+        f.voltages = &c.voltages->voltages;
+        f.voltagesStale = c.voltages->revision != c.doc.revision();
+    }
     drawSubstrate(f);
     drawCopper(f);
     drawEdgeLabels(f);
@@ -160,6 +164,7 @@ void drawLayers(const CanvasContext& c, const CanvasFrame& geometry) {
     drawWires(f);
     drawFindingMarks(f);
     drawFindingHighlight(f);
+    drawBenchVoltages(f);
     drawSideCaption(f);
 }
 

@@ -9,6 +9,7 @@
 #include "editor/canvas/canvas_frame.hpp"
 #include "netcheck/check/check_report.hpp"
 #include "netcheck/check/connectivity.hpp"
+#include "netcheck/voltage/bench_voltages.hpp"
 
 namespace stripsmith {
 
@@ -24,6 +25,8 @@ struct LayerFrame : CanvasFrame {
     std::optional<std::size_t> hoveredPart;           ///< its pin names are shown
     const netcheck::Island* hoveredIsland = nullptr;  ///< lit up with everything joined to it
     const netcheck::Finding* focusedFinding = nullptr;
+    const netcheck::BenchVoltagesResult* voltages = nullptr;  ///< View > Bench voltages, when on
+    bool voltagesStale = false;  ///< the figures are for an earlier revision of the board
 };
 
 /// The board outline and substrate, for the side shown.
@@ -50,6 +53,8 @@ void drawWires(const LayerFrame& f);
 void drawFindingMarks(const LayerFrame& f);
 /// The focused finding: its copper path, pieces, suggested cut or links, and its hole.
 void drawFindingHighlight(const LayerFrame& f);
+/// The expected voltage of each net at its probe hole, and the cautions (View > Bench voltages).
+void drawBenchVoltages(const LayerFrame& f);
 /// The caption naming the side shown, over the top-left of the canvas.
 void drawSideCaption(const LayerFrame& f);
 
