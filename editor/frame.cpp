@@ -11,6 +11,7 @@
 #include "editor/platform/imgui_impl_sfml.hpp"
 #include "editor/tools/edit_actions.hpp"
 #include "editor/tools/tools.hpp"
+#include "netcheck/voltage/voltage_report.hpp"
 
 namespace stripsmith {
 
@@ -31,7 +32,29 @@ MenuContext menuContext(EditorApp& app) {
 }
 
 CanvasContext canvasContext(EditorApp& app) {
-    return {app.doc, app.selection, app.view, app.hover, app.log};
+    return {app.doc, app.selection, app.view, app.hover, app.log, app.benchVoltages.latest()};
+}
+
+/// Asks the worker for the voltages after each edit while the overlay is on; never waits. Each
+/// result as it arrives goes to the end-to-end log: "bench-voltages revision R NET V at HOLE ...".
+void requestBenchVoltages(EditorApp& app) {
+    if (!app.view.showBenchVoltages) return;
+    if (app.benchRequested != app.doc.revision()) {
+        app.benchVoltages.request(app.doc.board(), app.doc.revision());
+        app.benchRequested = app.doc.revision();
+    }
+    const auto latest = app.benchVoltages.latest();
+    if (!latest || !app.log.on()) return;
+    std::string line = "bench-voltages revision " + std::to_string(latest->revision);
+    if (!latest->voltages.value) line += " error " + latest->voltages.error;
+    for (const auto& net : latest->voltages.value ? latest->voltages.value->nets
+                                                  : std::vector<netcheck::NetReading>{}) {
+        line += " " + net.net + " " +
+                (net.state == netcheck::NetState::Known ? netcheck::formatVolts(net.nominal)
+                                                        : std::string("-")) +
+                " at " + net.probe;
+    }
+    if (app.log.changed("bench-voltages", line)) app.log.note(line);
 }
 
 CircuitPanelContext circuitPanelContext(EditorApp& app) {
@@ -182,6 +205,7 @@ void drawCanvasWindow(EditorApp& app, const PanelLayout& l) {
                  ImGuiWindowFlags_NoDecoration | ImGuiWindowFlags_NoMove |
                      ImGuiWindowFlags_NoBringToFrontOnFocus | ImGuiWindowFlags_NoScrollWithMouse |
                      ImGuiWindowFlags_NoSavedSettings);
+    requestBenchVoltages(app);
     runTool(app, drawCanvas(canvasContext(app), l.canvasPos, l.canvasSize));
     ImGui::End();
     ImGui::PopStyleVar(2);
@@ -197,8 +221,11 @@ void drawPanels(EditorApp& app, const PanelLayout& l) {
     drawPropertiesPanel(editContext(app), app.log, {rightX, top}, {l.rightWidth, height * 0.38f});
     drawCheckPanel(app.doc, app.commands(), app.view, app.log, {rightX, top + height * 0.38f},
                    {l.rightWidth, height * 0.62f});
+    const auto voltages = app.benchVoltages.latest();
+    const bool showVoltages = app.view.showBenchVoltages && voltages && voltages->voltages.value;
     drawStatusBar(app.doc, app.hover, app.tool, app.status, {0, l.display.y - l.statusHeight},
-                  {l.display.x, l.statusHeight});
+                  {l.display.x, l.statusHeight},
+                  showVoltages ? &*voltages->voltages.value : nullptr);
     drawCircuitPanel(circuitPanelContext(app));
     drawHelpWindow(app.view.showHelp);
 }

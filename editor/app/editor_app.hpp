@@ -3,8 +3,10 @@
 // and the canvas are handed only the parts they use (see editor/frame.cpp).
 #pragma once
 
+#include <optional>
 #include <string>
 
+#include "editor/app/bench_voltages_worker.hpp"
 #include "editor/app/circuit_panel_state.hpp"
 #include "editor/app/clipboard.hpp"
 #include "editor/app/commands.hpp"
@@ -43,6 +45,8 @@ struct EditorApp {
     bool quitNow = false;            ///< main loop should end
     std::string chosenForPanel;      ///< a circuit or sheet path picked in the chooser
     CircuitPanelState circuitPanel;  ///< the Circuit panel's typed text and choices
+    BenchVoltagesWorker benchVoltages;       ///< computes off the frame (View > Bench voltages)
+    std::optional<unsigned> benchRequested;  ///< the revision last asked for
 
     /// The way to change the document: commands, reported in the status line.
     Commands commands() { return Commands(doc, status, log); }

@@ -20,6 +20,7 @@ struct ViewState {
     int appliedUiScale = 0;        ///< the scale the style was last built for
     bool showCircuit = false;      ///< the Circuit panel is open
     bool showHelp = false;
+    bool showBenchVoltages = false;  ///< View > Bench voltages: expected DC voltage per net
     std::optional<int> focusedFinding;  ///< index into errors then warnings
     std::optional<int> previewStep;     ///< repair plan step shown ghosted on the board
     ImVec2 canvasMin{0, 0};        ///< the canvas rectangle on screen, last frame

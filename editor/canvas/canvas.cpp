@@ -151,6 +151,10 @@ void drawLayers(const CanvasContext& c, const CanvasFrame& geometry) {
     const auto& steps = c.doc.plan().steps;
     if (c.view.previewStep && static_cast<std::size_t>(*c.view.previewStep) < steps.size())
         f.previewStep = &steps[static_cast<std::size_t>(*c.view.previewStep)];
+    if (c.view.showBenchVoltages && c.voltages) {
+        f.voltages = &c.voltages->voltages;
+        f.voltagesStale = c.voltages->revision != c.doc.revision();
+    }
     drawSubstrate(f);
     drawCopper(f);
     drawEdgeLabels(f);
@@ -164,6 +168,7 @@ void drawLayers(const CanvasContext& c, const CanvasFrame& geometry) {
     drawFindingMarks(f);
     drawFindingHighlight(f);
     drawRepairPreview(f);
+    drawBenchVoltages(f);
     drawSideCaption(f);
 }
 

@@ -4,6 +4,7 @@
 
 #include <imgui.h>
 
+#include "editor/app/bench_voltages_worker.hpp"
 #include "editor/app/document.hpp"
 #include "editor/app/hover.hpp"
 #include "editor/app/selection.hpp"
@@ -21,6 +22,8 @@ struct CanvasContext {
     ViewState& view;
     HoverState& hover;
     TestLog& log;
+    /// The latest bench voltages, drawn when View > Bench voltages is on.
+    std::shared_ptr<const BenchVoltagesWorker::Result> voltages = nullptr;
 };
 
 /// The canvas as drawn this frame: its geometry and the mouse over it.

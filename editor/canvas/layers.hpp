@@ -10,6 +10,7 @@
 #include "netcheck/check/check_report.hpp"
 #include "netcheck/check/connectivity.hpp"
 #include "netcheck/repair/repair_step.hpp"
+#include "netcheck/voltage/bench_voltages.hpp"
 
 namespace stripsmith {
 
@@ -26,6 +27,8 @@ struct LayerFrame : CanvasFrame {
     const netcheck::Island* hoveredIsland = nullptr;  ///< lit up with everything joined to it
     const netcheck::Finding* focusedFinding = nullptr;
     const netcheck::RepairStep* previewStep = nullptr;  ///< shown ghosted before it is applied
+    const netcheck::BenchVoltagesResult* voltages = nullptr;  ///< View > Bench voltages, when on
+    bool voltagesStale = false;  ///< the figures are for an earlier revision of the board
 };
 
 /// The board outline and substrate, for the side shown.
@@ -55,6 +58,8 @@ void drawFindingHighlight(const LayerFrame& f);
 /// The repair step chosen in the Check panel, before it is applied: what goes in the suggestion
 /// colour (a new cut, link or lead position), what goes away crossed out in the error colour.
 void drawRepairPreview(const LayerFrame& f);
+/// The expected voltage of each net at its probe hole, and the cautions (View > Bench voltages).
+void drawBenchVoltages(const LayerFrame& f);
 /// The caption naming the side shown, over the top-left of the canvas.
 void drawSideCaption(const LayerFrame& f);
 

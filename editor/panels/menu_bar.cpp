@@ -75,6 +75,8 @@ void viewMenu(const MenuContext& c) {
     if (ImGui::MenuItem("Fit board", "F")) view.fitPending = true;
     ImGui::MenuItem("Circuit panel", nullptr, &view.showCircuit);
     c.log.item("menu-circuit-panel");
+    ImGui::MenuItem("Bench voltages", nullptr, &view.showBenchVoltages);
+    c.log.item("menu-bench-voltages");
     if (ImGui::BeginMenu("Interface size")) {
         if (ImGui::MenuItem("Normal (1x)", nullptr, view.uiScale == 1)) view.uiScale = 1;
         if (ImGui::MenuItem("Large (2x)", nullptr, view.uiScale == 2)) view.uiScale = 2;

@@ -17,6 +17,7 @@
 #include "editor/app/tool_state.hpp"
 #include "editor/app/view_state.hpp"
 #include "editor/files/file_chooser.hpp"
+#include "netcheck/voltage/bench_voltages.hpp"
 #include "editor/files/recent_files.hpp"
 #include "editor/tools/edit_actions.hpp"
 #include "editor/tools/tools.hpp"
@@ -81,9 +82,11 @@ void drawCheckPanel(const Document& doc, Commands commands, ViewState& view, Tes
                     ImVec2 pos, ImVec2 size);
 /// "Circuit": the intended circuit; load one, capture the board's connectivity, remove.
 void drawCircuitPanel(const CircuitPanelContext& c);
-/// The status line: hovered hole and its net, board size, zoom, tool hint.
+/// The status line: hovered hole and its net (and its expected voltage when `voltages` is given),
+/// board size, zoom, tool hint.
 void drawStatusBar(const Document& doc, const HoverState& hover, const ToolState& tool,
-                   const std::string& status, ImVec2 pos, ImVec2 size);
+                   const std::string& status, ImVec2 pos, ImVec2 size,
+                   const netcheck::BenchVoltages* voltages = nullptr);
 /// The keys reference.
 void drawHelpWindow(bool& open);
 

@@ -4,6 +4,7 @@
 #include <imgui.h>
 
 #include "editor/panels/panels.hpp"
+#include "netcheck/voltage/voltage_report.hpp"
 
 namespace stripsmith {
 
@@ -26,6 +27,23 @@ std::string hoverText(const Document& doc, const HoverState& hover) {
     return text + "  joins " + pins;
 }
 
+/// "  expect 4.50 V (4.28 V to 4.72 V)" for the net whose probe point is on `island`.
+std::string expectedText(const Document& doc, const netcheck::BenchVoltages& voltages, int island) {
+    for (const netcheck::NetReading& net : voltages.nets) {
+        int at = -1;
+        if (const auto hole = netcheck::parseHole(net.probe)) {
+            at = doc.connectivity().islandOfHole(*hole);
+        } else if (const auto lug = netcheck::PinRef::parse(net.probe)) {
+            at = doc.connectivity().islandOfPin(*lug);
+        }
+        if (at != island) continue;
+        if (net.state != netcheck::NetState::Known) return "  meter: no figure (" + net.why + ")";
+        return "  meter: " + netcheck::formatVolts(net.nominal) + " (" +
+               netcheck::formatVolts(net.low) + " to " + netcheck::formatVolts(net.high) + ")";
+    }
+    return {};
+}
+
 const char* toolHint(const ToolState& state) {
     switch (state.tool) {
     case Tool::Select: return "Select: click, shift-click, drag a box; drag to move; arrows nudge";
@@ -40,10 +58,13 @@ const char* toolHint(const ToolState& state) {
 }  // namespace
 
 void drawStatusBar(const Document& doc, const HoverState& hover, const ToolState& tool, const std::string& status,
-                   ImVec2 pos, ImVec2 size) {
+                   ImVec2 pos, ImVec2 size, const netcheck::BenchVoltages* voltages) {
     if (beginPanel("##status", pos, size)) {
         const auto& board = doc.board();
-        const std::string pointer = hoverText(doc, hover);
+        std::string pointer = hoverText(doc, hover);
+        if (voltages && !pointer.empty() && hover.island >= 0) {
+            pointer += expectedText(doc, *voltages, hover.island);
+        }
         ImGui::Text("%s", pointer.empty() ? toolHint(tool) : pointer.c_str());
         ImGui::SameLine(size.x * 0.45f);
         ImGui::Text("%d x %d holes (%.1f x %.1f mm)", board.cols, board.rows, board.widthMm(), board.heightMm());

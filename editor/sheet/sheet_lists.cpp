@@ -4,6 +4,7 @@
 #include <string>
 
 #include "check_banner.hpp"
+#include "meter_table.hpp"
 #include "sheet_content.hpp"
 #include "sheet_table.hpp"
 
@@ -177,6 +178,7 @@ void drawLists(PageFlow& flow, const Board& board, const netcheck::CheckReport& 
     drawCutList(flow, board, cuts);
     drawLinkList(flow, board);
     drawWiringList(flow, board);
+    drawMeterTable(flow, board);
 }
 
 }  // namespace sheet

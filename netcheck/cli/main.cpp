@@ -9,6 +9,7 @@
 #include <system_error>
 #include <vector>
 
+#include "netcheck/cli/bench_commands.hpp"
 #include "netcheck/file/board_file.hpp"
 #include "netcheck/check/check.hpp"
 #include "netcheck/spice/circuit_loader.hpp"
@@ -24,6 +25,7 @@ constexpr const char* kVersion = STRIPSMITH_VERSION;  // from the top CMakeLists
 constexpr const char* kUsage =
     "usage: netcheck [--circuit FILE] [--json] [--repair OUT] BOARD\n"
     "       netcheck --nets [--json] BOARD\n"
+    "       netcheck --voltages ... | --jfet-bias ...   (expected bench voltages; add --help)\n"
     "       netcheck --help | --version\n"
     "\n"
     "Checks a stripboard layout (BOARD, a .board.json file) against its intended circuit: the\n"
@@ -192,6 +194,10 @@ Exit run(const Options& options) {
 }  // namespace
 
 int main(int argc, char** argv) {
+    if (const auto status =
+            netcheck_cli::runBenchCommand(std::vector<std::string>(argv + 1, argv + argc))) {
+        return *status;
+    }
     try {
         const Options options = parseArgs(std::vector<std::string>(argv + 1, argv + argc));
         if (options.help) return emit(kUsage) ? 0 : static_cast<int>(Exit::BadInput);

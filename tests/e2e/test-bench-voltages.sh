@@ -1,0 +1,34 @@
+#!/usr/bin/env bash
+# End to end: View > Bench voltages on the astable sample. The figures arrive from the worker
+# thread while the editor keeps drawing frames, and are netcheck --voltages' own; after an edit
+# (a cut between two holes at the far end of strip F) they are worked out again for the new revision.
+source "$(dirname "$0")/e2e_lib.sh"
+run_under_xvfb "$0"
+
+board="$WORK/astable.board.json"
+cp "$STRIPSMITH_SOURCE/samples/astable.board.json" "$board"
+"$STRIPSMITH_BIN/netcheck" --voltages --nominal-only --json "$board" >"$WORK/expected.json"
+expected=$(python3 - "$WORK/expected.json" <<'PY'
+import json, sys
+for net in json.load(open(sys.argv[1]))["nets"]:
+    if net["net"] in ("VCC", "L1"):
+        print(net["net"], "%.2f V" % net["nominal"], "at", net["probe"])
+PY
+)
+
+start_editor "$board"
+click_at $(item_xy menu-view)
+click_at $(item_xy menu-bench-voltages)
+while read -r line; do
+    check "the overlay shows $line" eventually grep -q "STRIPSMITH_E2E note bench-voltages revision [0-9]* .*$line" "$LOG"
+done <<<"$expected"
+screenshot bench-voltages
+first=$(grep -c "STRIPSMITH_E2E note bench-voltages revision" "$LOG")
+revision=$(frame_field revision)
+keys x
+click_at $(gap_xy 5 12)
+check "the cut is a new revision" eventually bash -c "[ \$(grep 'STRIPSMITH_E2E frame' '$LOG' | tail -1 | awk '{print \$5}') -gt $revision ]"
+check "the figures are worked out again after the edit" \
+    eventually bash -c "[ \$(grep -c 'STRIPSMITH_E2E note bench-voltages revision' '$LOG') -gt $first ]"
+check "the editor kept drawing frames" wait_frames 3
+finish
