@@ -129,7 +129,11 @@ TEST_CASE("errors no edit of copper or leads can mend are named with the reason"
     const RepairPlan plan = planRepair(board);
     CHECK(plan.errorsAfter > 0);
     REQUIRE_FALSE(plan.remaining.empty());
-    CHECK(plan.remaining.front().find("fit the part") != std::string::npos);
+    CHECK(plan.remaining.front().reason.find("fit the part") != std::string::npos);
+    // The report's error says so too, as its fix.
+    CheckReport report = check(board);
+    attachPlan(report, plan, board);
+    CHECK(report.errors.front().fix == plan.remaining.front().reason);
 }
 
 TEST_CASE("knock-on errors carry no fix of their own; the plan's step names them") {

@@ -95,7 +95,7 @@ std::unique_ptr<netcheck::edit::Command> planRows(const CheckPanel& p, std::opti
     if (plan.errorsAfter > 0 && !plan.remaining.empty()) {
         ImGui::PushTextWrapPos(0.0f);
         ImGui::TextDisabled("What no repair of cuts, links and leads mends:");
-        for (const std::string& reason : plan.remaining) ImGui::BulletText("%s", reason.c_str());
+        for (const netcheck::RemainingError& error : plan.remaining) ImGui::BulletText("%s", error.text().c_str());
         ImGui::PopTextWrapPos();
     }
     ImGui::Separator();

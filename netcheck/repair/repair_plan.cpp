@@ -124,13 +124,11 @@ void noteClears(const Board& board, const Circuit* circuit, std::vector<RepairSt
 // Why an error no plan clears stays, in a maker's words.
 std::string whyItStays(const Finding& error, const RepairLimits& limits) {
     switch (error.type) {
-        case FindingType::MissingPart: return error.message + ": fit the part (a repair moves no new part in)";
-        case FindingType::ExtraPart: return error.message + ": take it off, or add it to the circuit";
-        case FindingType::PinMismatch: return error.message + ": fit a part with the circuit's pins, or correct the circuit";
-        case FindingType::ValueMismatch: return error.message + ": fit a part of the circuit's value";
-        default:
-            return error.message + ": no plan of up to " + std::to_string(limits.maxSteps) +
-                   " safe edits clears it";
+        case FindingType::MissingPart: return "fit the part (a repair moves no new part in)";
+        case FindingType::ExtraPart: return "take it off, or add it to the circuit";
+        case FindingType::PinMismatch: return "fit a part with the circuit's pins, or correct the circuit";
+        case FindingType::ValueMismatch: return "fit a part of the circuit's value";
+        default: return "no plan of up to " + std::to_string(limits.maxSteps) + " safe edits clears it";
     }
 }
 
@@ -168,7 +166,9 @@ RepairPlan planRepair(const Board& board, const Circuit* circuit, const RepairLi
     plan.steps = best.steps;
     noteClears(board, circuit, plan.steps);
     const CheckReport last = check(withSteps(board, plan.steps), circuit);
-    for (const Finding& error : last.errors) plan.remaining.push_back(whyItStays(error, limits));
+    for (const Finding& error : last.errors) {
+        plan.remaining.push_back({findingKey(error), error.message, whyItStays(error, limits)});
+    }
     return plan;
 }
 
@@ -183,6 +183,11 @@ void attachPlan(CheckReport& report, const RepairPlan& plan, const Board& board,
     const BoardHealth before(report);
     for (Finding& error : report.errors) {
         if (error.repairStep >= 0) continue;
+        // An error no edit of copper or leads mends says what will: fit the part, the value ...
+        const std::string key = findingKey(error);
+        for (const RemainingError& remaining : plan.remaining) {
+            if (error.fix.empty() && remaining.key == key) error.fix = remaining.reason;
+        }
         Board fixed = board;
         if (!applyOwnFix(error, fixed)) continue;
         const BoardHealth after(check(fixed, circuit));

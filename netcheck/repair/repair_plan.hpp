@@ -29,12 +29,20 @@ struct RepairLimits {
     int maxChecks = 4000;
 };
 
+/// An error the plan leaves, and why.
+struct RemainingError {
+    std::string key;      ///< the error's identity across edits of the board
+    std::string message;  ///< the error's message
+    std::string reason;   ///< what would mend it, in a maker's words
+    std::string text() const { return message + ": " + reason; }
+};
+
 struct RepairPlan {
     std::vector<RepairStep> steps;
     int errorsBefore = 0;
     int errorsAfter = 0;
-    /// Errors no plan could clear, in the maker's words (a part the board lacks, a wrong value ...).
-    std::vector<std::string> remaining;
+    /// Errors no plan could clear, with what would mend each (fit the part, the right value ...).
+    std::vector<RemainingError> remaining;
     int checks = 0;  ///< boards checked while searching
     bool clearsAll() const { return errorsAfter == 0 && errorsBefore > 0; }
 };

@@ -121,7 +121,8 @@ nlohmann::ordered_json planJson(const RepairPlan& plan) {
         entry["clears"] = step.clears;
         json["steps"].push_back(std::move(entry));
     }
-    json["remaining"] = plan.remaining;
+    json["remaining"] = nlohmann::ordered_json::array();
+    for (const RemainingError& error : plan.remaining) json["remaining"].push_back(error.text());
     return json;
 }
 
