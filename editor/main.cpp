@@ -5,6 +5,8 @@
 //                                            render the board as the editor shows it, then exit
 //   stripsmith --sheet OUT.pdf|OUT.svg [--paper a4|letter] BOARD
 //                                            write the printable build sheet, no window
+//   stripsmith --layout OUT.board.json [--board RxC] [--seconds S] [--seed N] INPUT
+//                                            lay out a circuit (or a board's rest), no window
 //
 // Sections: arguments | window and ImGui | screenshot | main loop.
 #include <GL/gl.h>
@@ -31,6 +33,7 @@
 #include "editor/platform/x11_errors.hpp"
 #include "netcheck/model/printable.hpp"
 #include "editor/sheet/sheet_cli.hpp"
+#include "editor/layout_cli.hpp"
 
 namespace {
 
@@ -51,7 +54,8 @@ int usage(const std::string& problem) {
                  "stripsmith: %s\n"
                  "usage: stripsmith [--size WxH] [BOARD]\n"
                  "       stripsmith --screenshot OUT.png [--size WxH] [--view component|copper|both] BOARD\n"
-                 "       stripsmith --sheet OUT.pdf|OUT.svg [--paper a4|letter] BOARD\n",
+                 "       stripsmith --sheet OUT.pdf|OUT.svg [--paper a4|letter] BOARD\n"
+                 "       stripsmith --layout OUT.board.json [--board RxC] [--seconds S] [--seed N] INPUT\n",
                  problem.c_str());
     return 2;
 }
@@ -264,6 +268,7 @@ int run(const Options& options) {
 
 int main(int argc, char** argv) {
     if (sheet::wantsSheetCommand(argc, argv)) return sheet::runSheetCommand(argc, argv);
+    if (wantsLayoutCommand(argc, argv)) return runLayoutCommand(argc, argv);
     std::string problem;
     const auto options = parseArgs(argc, argv, problem);
     if (!options) return usage(problem);
