@@ -227,6 +227,9 @@ TEST_CASE("layout engine") {
         CHECK(netcheck::leadRule(bjt, {}).pins == std::vector<std::string>{"E", "B", "C"});
         CircuitPart ic{"ic", "", {"1", "2", "3", "4", "5", "6", "7", "8"}, nlohmann::json::object()};
         CHECK(netcheck::leadRule(ic, {}).shape == netcheck::LeadShape::Dip);
+        // The README states the same rules: paste leadRulesMarkdown() there when they change.
+        const std::string readme = test_support::readTextFile(test_support::sourcePath("README.md"));
+        CHECK(readme.find(netcheck::leadRulesMarkdown()) != std::string::npos);
     }
 
     SUBCASE("a stop flag ends the run with a layout") {
