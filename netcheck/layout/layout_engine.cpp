@@ -3,6 +3,7 @@
 #include <algorithm>
 #include <cctype>
 #include <cmath>
+#include <map>
 #include <random>
 
 #include "netcheck/layout/column_order.hpp"
@@ -223,6 +224,7 @@ Board makeBoard(const Circuit& circuit, const LayoutCircuit& described, const Bu
                 const Board* placed) {
     Board board;
     board.title = placed != nullptr ? placed->title : "Laid out from the circuit";
+    if (placed != nullptr) board.pitchMm = placed->pitchMm;
     board.rows = built.score.rows;
     board.cols = built.score.cols;
     board.cuts = built.cuts;
@@ -359,9 +361,6 @@ LayoutResult layOut(const Circuit& circuit, const LayoutOptions& options, const 
     }
     result.bounds.orderStrips = openStrips(problem, bestArrangement.order);
     result.board = makeBoard(circuit, described, best, placed);
-    if (placed != nullptr) {  // the placed parts' board may be larger than the copper used
-        result.board.rows = std::max(result.board.rows, 1);
-    }
     result.score = best.score;
     result.ok = true;
     return result;

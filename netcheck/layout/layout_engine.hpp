@@ -12,6 +12,7 @@
 #include <functional>
 #include <optional>
 #include <string>
+#include <tuple>
 
 #include "netcheck/model/board.hpp"
 #include "netcheck/model/circuit.hpp"
