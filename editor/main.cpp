@@ -5,6 +5,8 @@
 //                                            render the board as the editor shows it, then exit
 //   stripsmith --sheet OUT.pdf|OUT.svg [--paper a4|letter] BOARD
 //                                            write the printable build sheet, no window
+//   stripsmith --layout OUT.board.json [--board RxC] [--seconds S] [--seed N] INPUT
+//                                            lay out a circuit (or a board's rest), no window
 //   stripsmith --help | --version
 //
 // Sections: arguments | window and ImGui | screenshot | main loop.
@@ -32,6 +34,7 @@
 #include "editor/platform/x11_errors.hpp"
 #include "netcheck/model/printable.hpp"
 #include "editor/sheet/sheet_cli.hpp"
+#include "editor/layout_cli.hpp"
 
 namespace {
 
@@ -51,13 +54,16 @@ constexpr const char* kUsage =
     "usage: stripsmith [--size WxH] [BOARD]\n"
     "       stripsmith --screenshot OUT.png [--size WxH] [--view component|copper|both] BOARD\n"
     "       stripsmith --sheet OUT.pdf|OUT.svg [--paper a4|letter] BOARD\n"
+    "       stripsmith --layout OUT.board.json [--board RxC] [--seconds S] [--seed N] INPUT\n"
     "       stripsmith --help | --version\n";
 
 constexpr const char* kHelp =
     "\n"
     "Opens BOARD (a .board.json file), or an empty board, in the stripboard layout editor.\n"
     "--screenshot renders the board as the editor shows it to a PNG file and exits; --sheet\n"
-    "writes the printable build sheet at 1:1 (PDF or SVG) without opening a window.\n"
+    "writes the printable build sheet at 1:1 (PDF or SVG) without opening a window; --layout\n"
+    "lays out a circuit (a circuit file, a SPICE deck, or a board whose parts not yet placed are\n"
+    "placed around the ones that are) and writes the board, without opening a window.\n"
     "The manual: man stripsmith.\n";
 
 int usage(const std::string& problem) {
@@ -281,6 +287,7 @@ int main(int argc, char** argv) {
         return std::fflush(stdout) == 0 && !std::ferror(stdout) ? 0 : 2;
     }
     if (sheet::wantsSheetCommand(argc, argv)) return sheet::runSheetCommand(argc, argv);
+    if (wantsLayoutCommand(argc, argv)) return runLayoutCommand(argc, argv);
     std::string problem;
     const auto options = parseArgs(argc, argv, problem);
     if (!options) return usage(problem);
