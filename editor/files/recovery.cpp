@@ -207,7 +207,39 @@ std::optional<RecoveryFile> RecoverySlot::read() const {
 
 // ---- other editors' slots -----------------------------------------------------------------------
 
+namespace {
+
+// Versions before slots kept one copy, "recovery.board.json" beside "recovery.info.json". Such a
+// copy is moved into a slot of its own, released at once, so it is offered like any left copy.
+// The rename claims it: of two editors starting at once, one moves it.
+void adoptOldCopy(const std::string& folder) {
+    const std::string oldBoard = (fs::path(folder) / "recovery.board.json").string();
+    const std::string oldInfo = (fs::path(folder) / "recovery.info.json").string();
+    if (::access(oldBoard.c_str(), F_OK) != 0) return;
+    std::string error;
+    auto slot = RecoverySlot::create(folder, error);
+    if (!slot) return;
+    const std::string base = slot->base();
+    if (::rename(oldBoard.c_str(), (base + kBoard).c_str()) != 0) {
+        slot->remove();
+        return;
+    }
+    std::string original;
+    if (auto info = readText(oldInfo)) {
+        const auto json = nlohmann::json::parse(*info, nullptr, false);
+        if (json.is_object()) original = stringMember(json, "original_path");
+    }
+    netcheck::SaveOptions options;
+    options.keepBackup = false;
+    const nlohmann::json info = {{"original_path", original}, {"pid", 0}};
+    (void)netcheck::saveFileAtomically(base + kInfo, info.dump(2), options);
+    ::unlink(oldInfo.c_str());
+}
+
+}  // namespace
+
 std::optional<LeftCopy> findLeftCopy(const std::string& folder) {
+    adoptOldCopy(folder);
     for (const std::string& name : slotNames(folder)) {
         auto slot = RecoverySlot::takeOver(folder, name);
         if (!slot) continue;

@@ -45,6 +45,8 @@ public:
     static std::optional<RecoverySlot> create(const std::string& folder, std::string& error);
 
     bool active() const { return lock_ >= 0; }
+    /// The slot's files without their endings: "<folder>/editor-<pid>-<tag>".
+    const std::string& base() const { return base_; }
     /// Writes the autosaved board and where it was last saved (each atomically).
     std::optional<std::string> write(const RecoveryFile& recovery);
     /// Records the file this editor has open, for other editors to see (editorsWithOpen).
@@ -74,8 +76,9 @@ struct LeftCopy {
     RecoveryFile file;
 };
 
-/// A copy left in `folder` by an editor that is no longer running, if any. Slots of ended editors
-/// that hold no copy are tidied away on the way.
+/// A copy left in `folder` by an editor that is no longer running, if any (a copy kept by an
+/// earlier version, "recovery.board.json", counts too). Slots of ended editors that hold no copy
+/// are tidied away on the way.
 std::optional<LeftCopy> findLeftCopy(const std::string& folder);
 
 /// Process ids of the other running editors that have `path` open.

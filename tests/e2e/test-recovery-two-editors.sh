@@ -11,7 +11,8 @@ export STRIPSMITH_AUTOSAVE_SECONDS=1
 cp "$STRIPSMITH_SOURCE/samples/flasher.board.json" "$WORK/a.board.json"
 cp "$STRIPSMITH_SOURCE/samples/flasher.board.json" "$WORK/b.board.json"
 
-offers_nothing() { ! dialogs_match restore; }
+# offers_nothing: the editor has logged its dialogs, and no recovery offer is among them.
+offers_nothing() { [ -n "$(last_dialogs)" ] && ! dialogs_match restore; }
 
 # copy_of NAME TEXT: the recovery copy of editor NAME holds TEXT.
 copy_of() { grep -q -F -- "$2" "$WORK/recovery/editor-${PID_OF[$1]}-"*.board.json 2>/dev/null; }

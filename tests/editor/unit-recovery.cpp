@@ -135,6 +135,18 @@ TEST_CASE("recovery copies") {
         CHECK(fileCount(temp.path) == 0);  // its slot tidied away
     }
 
+    SUBCASE("the single copy kept by earlier versions is offered like a left copy") {
+        std::ofstream(temp.path / "recovery.board.json") << "{\"old\": 1}";
+        std::ofstream(temp.path / "recovery.info.json") << "{\"original_path\": \"/x/a.board.json\"}";
+        auto left = findLeftCopy(folder);
+        REQUIRE(left.has_value());
+        CHECK(left->file.boardText == "{\"old\": 1}");
+        CHECK(left->file.originalPath == "/x/a.board.json");
+        CHECK_FALSE(fs::exists(temp.path / "recovery.board.json"));
+        left.reset();  // not answered: still there at the next start
+        CHECK(findLeftCopy(folder).has_value());
+    }
+
     SUBCASE("the file another running editor has open is seen, and not once it has ended") {
         OtherEditor other(folder, boardPath, "", false);
         // The same file by another spelling of its path.
