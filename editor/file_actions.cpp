@@ -3,6 +3,8 @@
 
 #include <algorithm>
 #include <filesystem>
+#include <string>
+#include <vector>
 
 #include <imgui.h>
 #include <nlohmann/json.hpp>
@@ -10,6 +12,7 @@
 #include "editor/sheet/sheet.hpp"
 #include "netcheck/file/board_file.hpp"
 #include "netcheck/file/file_io.hpp"
+#include "netcheck/model/printable.hpp"
 
 namespace stripsmith {
 
@@ -36,6 +39,15 @@ std::optional<netcheck::Board> readNewerVersion(const std::string& text, const s
     return result.value;
 }
 
+// Other editors with the same file open: each save would replace the other's without a word.
+void warnIfOpenElsewhere(EditorApp& app, const std::string& path) {
+    const std::vector<long> others = editorsWithOpen(app.recoveryDir, path);
+    if (others.empty()) return;
+    app.dialogs.notice = "Another Stripsmith window (process " + std::to_string(others.front()) +
+                         ") has this file open too.\n\nIf you both make changes, Stripsmith "
+                         "asks before a save would replace changes saved from the other window.";
+}
+
 void startOver(EditorApp& app) {
     app.selection.clear();
     app.tool.cancel();
@@ -60,6 +72,7 @@ bool loadBoardFile(EditorApp& app, const std::string& path) {
         if (message.find("is newer than this program reads") != std::string::npos) {
             if (auto board = readNewerVersion(*text.value, path)) {
                 app.doc.reset(std::move(*board), path, true);
+                app.diskStamp = stampOf(*text.value, path);
                 app.dialogs.notice = message + "\n\nThe board is open read-only so that nothing it holds is lost. "
                                                "Use File > Save As to keep a copy in this version's format.";
                 startOver(app);
@@ -70,21 +83,33 @@ bool loadBoardFile(EditorApp& app, const std::string& path) {
         showError(app, "Cannot open the board", message + "\n\nThe board you had open is unchanged.");
         return false;
     }
+    // Reloading the file already open (after it changed on disk) needs no second warning.
+    const bool reopening = path == app.doc.path();
     app.doc.reset(std::move(*result.value), path);
+    app.diskStamp = stampOf(*text.value, path);
     startOver(app);
     app.recent.add(path);
+    if (!reopening) warnIfOpenElsewhere(app, path);
     app.say("Opened " + path);
     return true;
 }
 
-bool saveBoardFile(EditorApp& app, const std::string& path) {
-    if (auto error = netcheck::saveFileAtomically(path, netcheck::writeBoard(app.doc.board()))) {
+bool saveBoardFile(EditorApp& app, const std::string& path, bool overwrite) {
+    // Saved from another editor (or program) since it was read here: ask, never replace unseen.
+    if (!overwrite && path == app.doc.path() && app.diskStamp &&
+        changedOnDisk(*app.diskStamp, path)) {
+        app.dialogs.diskChanged = true;
+        return false;
+    }
+    const std::string text = netcheck::writeBoard(app.doc.board());
+    if (auto error = netcheck::saveFileAtomically(path, text)) {
         showError(app, "Could not save", *error + "\n\nThe file on disk is unchanged.");
         return false;
     }
     app.doc.markSaved(path);
+    app.diskStamp = stampOf(text, path);
     app.recent.add(path);
-    if (!app.recoveryDir.empty()) clearRecovery(app.recoveryDir);
+    app.recovery.clearCopy();
     app.say("Saved " + path);
     return true;
 }
@@ -105,6 +130,7 @@ void doPending(EditorApp& app, PendingAction action, const std::string& path) {
     switch (action) {
     case PendingAction::New:
         app.doc.reset(netcheck::Board{}, {});
+        app.diskStamp.reset();
         startOver(app);
         app.say("New board");
         break;
@@ -178,7 +204,13 @@ void drawUnsavedPrompt(EditorApp& app) {
     if (save) {
         if (!app.doc.path().empty() && !app.doc.readOnly()) {
             close();
-            if (saveBoardFile(app, app.doc.path())) doPending(app, action, path);
+            if (saveBoardFile(app, app.doc.path())) {
+                doPending(app, action, path);
+            } else if (app.dialogs.diskChanged) {
+                // The action waits for the answer about the file changed on disk.
+                app.dialogs.pending = action;
+                app.dialogs.pendingPath = path;
+            }
         } else {
             // The pending action waits for the Save As chooser.
             app.dialogs.askUnsaved = false;
@@ -219,12 +251,63 @@ void drawMessage(EditorApp& app, const char* title, std::string& text, bool& cle
     ImGui::EndPopup();
 }
 
+// The restored board becomes this editor's own recovery copy; the left copy is deleted only once
+// that is written, so a crash right after restoring loses nothing either.
+void adoptRestoredCopy(EditorApp& app) {
+    if (!app.recovery.active()) return;
+    if (app.recovery.write({netcheck::writeBoard(app.doc.board()), app.doc.path()})) return;
+    app.autosavedRevision = app.doc.revision();
+    app.dialogs.recovery->slot.remove();
+}
+
+void drawDiskChanged(EditorApp& app) {
+    const char* title = "File changed on disk";
+    if (app.dialogs.diskChanged && !ImGui::IsPopupOpen(title)) ImGui::OpenPopup(title);
+    centreNext();
+    if (!ImGui::BeginPopupModal(title, nullptr, ImGuiWindowFlags_AlwaysAutoResize)) return;
+    const std::string file = app.doc.path();  // a copy: loading replaces the document's
+    ImGui::Text("%s", netcheck::escapeControls(file).c_str());
+    ImGui::Text("was changed on disk since you opened or saved it here (another window or program");
+    ImGui::Text("saved it). Saving now would replace those changes.");
+    ImGui::Spacing();
+    const PendingAction action = app.dialogs.pending;
+    const std::string path = app.dialogs.pendingPath;
+    auto close = [&] {
+        app.dialogs.diskChanged = false;
+        ImGui::CloseCurrentPopup();
+    };
+    const bool saveAs = ImGui::Button("Save As...", {190, 0});
+    app.log.item("changed-save-as");
+    ImGui::SameLine();
+    const bool overwrite = ImGui::Button("Overwrite", {190, 0});
+    app.log.item("changed-overwrite");
+    ImGui::SameLine();
+    const bool reload = ImGui::Button("Reload (drop my changes)", {190, 0});
+    app.log.item("changed-reload");
+    ImGui::SameLine();
+    const bool cancel = ImGui::Button("Cancel", {190, 0});
+    app.log.item("changed-cancel");
+    if (saveAs) {
+        close();
+        actionSaveAs(app);  // a waiting action goes on once saved there
+    } else if (overwrite) {
+        close();
+        app.dialogs.pending = PendingAction::None;
+        if (saveBoardFile(app, file, true)) doPending(app, action, path);
+    } else if (reload || cancel) {
+        close();
+        app.dialogs.pending = PendingAction::None;
+        if (reload) loadBoardFile(app, file);
+    }
+    ImGui::EndPopup();
+}
+
 void drawRecoveryOffer(EditorApp& app) {
     const char* title = "Restore unsaved work?";
     if (app.dialogs.recovery && !ImGui::IsPopupOpen(title)) ImGui::OpenPopup(title);
     centreNext();
     if (!ImGui::BeginPopupModal(title, nullptr, ImGuiWindowFlags_AlwaysAutoResize)) return;
-    const RecoveryFile& rec = *app.dialogs.recovery;
+    const RecoveryFile& rec = app.dialogs.recovery->file;
     ImGui::Text("Stripsmith did not close properly last time.");
     ImGui::Text("An automatic copy of the board you were working on was kept%s%s.",
                 rec.originalPath.empty() ? "" : " (", rec.originalPath.empty() ? "" : (rec.originalPath + ")").c_str());
@@ -235,18 +318,23 @@ void drawRecoveryOffer(EditorApp& app) {
         auto result = netcheck::readBoard(rec.boardText, "recovered board");
         if (result.ok()) {
             app.doc.reset(std::move(*result.value), rec.originalPath, false, true);
+            app.diskStamp.reset();
             startOver(app);
+            adoptRestoredCopy(app);
             app.say("Restored the automatic copy; save it to keep it.");
         } else {
             showError(app, "Cannot restore", result.error ? result.error->describe() : "unreadable copy");
         }
-        app.dialogs.recovery.reset();
+        app.dialogs.recovery.reset();  // a copy not adopted stays, offered at the next start
         ImGui::CloseCurrentPopup();
     }
     ImGui::SameLine();
-    if (ImGui::Button("Discard", {110, 0})) {
-        clearRecovery(app.recoveryDir);
-        app.dialogs.recovery.reset();
+    const bool discard = ImGui::Button("Discard", {110, 0});
+    app.log.item("discard");
+    if (discard) {
+        // Only here is a left copy deleted; then the next one, if any, is offered.
+        app.dialogs.recovery->slot.remove();
+        app.dialogs.recovery = findLeftCopy(app.recoveryDir);
         ImGui::CloseCurrentPopup();
     }
     ImGui::EndPopup();
@@ -257,6 +345,8 @@ void logDialogs(EditorApp& app) {
     if (!app.log.on()) return;
     std::string state = app.chooser.isOpen() ? "chooser" : "-";
     if (app.dialogs.askUnsaved) state += " unsaved";
+    if (app.dialogs.diskChanged) state += " changed-on-disk";
+    if (app.dialogs.recovery) state += " restore " + app.dialogs.recovery->file.originalPath;
     if (!app.dialogs.errorText.empty())
         state += " error " + app.dialogs.errorTitle + ": " + app.dialogs.errorText;
     if (!app.dialogs.notice.empty()) state += " note " + app.dialogs.notice;
@@ -285,6 +375,7 @@ void drawFileDialogs(EditorApp& app) {
         app.dialogs.pending = PendingAction::None;  // Save As cancelled: so is what waited for it
     }
     drawUnsavedPrompt(app);
+    drawDiskChanged(app);
     drawRecoveryOffer(app);
     bool clearError = false, clearNotice = false;
     std::string errorTitle = app.dialogs.errorTitle.empty() ? "Problem" : app.dialogs.errorTitle;
@@ -299,12 +390,13 @@ void drawFileDialogs(EditorApp& app) {
 
 void tickAutosave(EditorApp& app, double seconds) {
     if (app.recoveryDir.empty()) return;
+    app.recovery.setOpenFile(app.doc.path());  // does nothing while it is the same
     app.sinceAutosave += seconds;
     if (app.sinceAutosave < app.autosaveSeconds) return;
     app.sinceAutosave = 0;
     if (!app.doc.modified() || app.doc.revision() == app.autosavedRevision) return;
     RecoveryFile rec{netcheck::writeBoard(app.doc.board()), app.doc.path()};
-    if (auto error = writeRecovery(app.recoveryDir, rec)) {
+    if (auto error = app.recovery.write(rec)) {
         app.say("Autosave failed: " + *error);
         return;
     }
@@ -313,7 +405,9 @@ void tickAutosave(EditorApp& app, double seconds) {
 }
 
 void endSession(EditorApp& app) {
-    if (!app.recoveryDir.empty()) clearRecovery(app.recoveryDir);
+    // This editor's own copy only: other editors' copies, and a left copy offered but neither
+    // restored nor discarded, stay (the offer's slot is released with it, its files kept).
+    app.recovery.remove();
 }
 
 }  // namespace stripsmith

@@ -22,7 +22,9 @@ void actionQuit(EditorApp& app);
 /// read-only with a notice.
 bool loadBoardFile(EditorApp& app, const std::string& path);
 /// Writes the document atomically (keeping `<path>.bak`); false with an error dialog on failure.
-bool saveBoardFile(EditorApp& app, const std::string& path);
+/// Unless `overwrite`, a save over the open file when it changed on disk since it was read here
+/// is not made: it asks (Save As, Overwrite, Reload) and returns false.
+bool saveBoardFile(EditorApp& app, const std::string& path, bool overwrite = false);
 
 /// Writes the printable build sheet (PDF or SVG by the name's ending); errors in a dialog.
 void exportSheetTo(EditorApp& app, const std::string& path);

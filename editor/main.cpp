@@ -220,7 +220,13 @@ int run(const Options& options) {
         app.recent.load(RecentFiles::defaultFile());
         app.recoveryDir = recoveryFolder();
         app.autosaveSeconds = autosaveInterval();
-        app.dialogs.recovery = findRecovery(app.recoveryDir);
+        // Its own slot first, so that an editor starting at the same moment sees this one running.
+        if (auto slot = RecoverySlot::create(app.recoveryDir, app.recoveryError)) {
+            app.recovery = std::move(*slot);
+        } else {
+            app.say("Autosave is off: " + app.recoveryError);
+        }
+        app.dialogs.recovery = findLeftCopy(app.recoveryDir);
     }
     int status = 0;
     if (!options.board.empty() && !loadBoardFile(app, options.board)) {

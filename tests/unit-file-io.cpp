@@ -149,6 +149,36 @@ TEST_CASE("file io") {
             CHECK(slurp(board + ".bak") == "older");
             CHECK(fileCount(folder.path) == 2);
         }
+        SUBCASE("a refused hard link and a full disk leave the old backup whole") {
+            // The backup falls back to a copy when the link is refused (protected_hardlinks and a
+            // file owned by another user); the disk fills up half way through that copy.
+            spit(board, std::string(200000, 'o'));
+            spit(board + ".bak", "older");
+            SaveOptions options;
+            options.linkBackup = [](const char*, const char*) { return EPERM; };
+            int writes = 0;
+            options.writeBytes = [&writes](int fd, std::string_view bytes) {
+                if (++writes == 1) return writeAll(fd, bytes);  // the new contents
+                (void)writeAll(fd, bytes.substr(0, bytes.size() / 2));
+                return ENOSPC;
+            };
+            const auto message = saveFileAtomically(board, "new", options);
+            REQUIRE(message.has_value());
+            CHECK(*message == "cannot keep the previous version of " + board + ": the disk is full");
+            CHECK(slurp(board) == std::string(200000, 'o'));
+            CHECK(slurp(board + ".bak") == "older");
+            CHECK(fileCount(folder.path) == 2);
+        }
+        SUBCASE("a refused hard link: the backup is a whole copy") {
+            spit(board, "old");
+            spit(board + ".bak", "older");
+            SaveOptions options;
+            options.linkBackup = [](const char*, const char*) { return EPERM; };
+            CHECK_FALSE(saveFileAtomically(board, "new", options).has_value());
+            CHECK(slurp(board) == "new");
+            CHECK(slurp(board + ".bak") == "old");
+            CHECK(fileCount(folder.path) == 2);
+        }
         SUBCASE("a folder without write permission leaves the old file and says so") {
             spit(board, "old");
             const std::string said = runWithoutWritePermission(folder.path, [&] {

@@ -1,5 +1,5 @@
 // Limits on absurd input: boards over 1,000 x 1,000 holes, files over 64 MiB, more than 100,000
-// parts, JSON nested deeper than 64 levels. Each gives a clear message naming the file, and each
+// parts, JSON nested deeper than 64 levels, more than two million JSON values. Each gives a clear message naming the file, and each
 // can be tightened or relaxed through ReadLimits. The big inputs are generated here.
 #include <filesystem>
 #include <fstream>
@@ -67,6 +67,7 @@ TEST_CASE("limits") {
     CHECK(defaults.maxBytes == 64u * 1024u * 1024u);
     CHECK(defaults.maxParts == 100000u);
     CHECK(defaults.maxDepth == 64);
+    CHECK(defaults.maxValues == 2000000u);
 
     SUBCASE("board size") {
         requireOk(read(boardText(grid(1000, 1000))));
@@ -175,5 +176,37 @@ TEST_CASE("limits") {
                                          tight);
         REQUIRE(circuit.error.has_value());
         CHECK(circuit.error->describe().ends_with("nesting is deeper than 3 levels"));
+    }
+
+    SUBCASE("JSON values") {
+        // boardText(grid(...)) holds six values: the file's object, "format", "version", the
+        // "board" object, "rows" and "cols". The unknown member adds its array and three items.
+        const std::string ten = boardText(grid(4, 6), R"(, "junk": [0, {}, "x"])");
+        ReadLimits tight;
+        tight.maxValues = 10;
+        requireOk(read(ten, tight));
+        tight.maxValues = 9;
+        CHECK(errorOf(read(ten, tight)) ==
+              "big.board.json:1:95: more than 9 JSON values, the limit (each object, array, "
+              "string, number, true, false and null is one)");
+        // Keys and empty arrays are not values; strings hold no values.
+        tight.maxValues = 8;
+        requireOk(read(boardText(grid(4, 6), R"(, "[]": [], "k": "[1, 2, {}]")"), tight));
+        const auto circuit =
+            readCircuit(R"({"parts": {}, "nets": {}, "x": [1, 2, 3, 4, 5, 6]})", "c.json", tight);
+        REQUIRE(circuit.error.has_value());
+        CHECK(circuit.error->describe().starts_with("c.json:1:45: more than 8 JSON values"));
+    }
+
+    SUBCASE("millions of tiny values inside the size limit are refused before parsing") {
+        // 58 MB of "0," once took 1.5 GB and 60 MB of "{}," 3 GB: each is a value in memory.
+        std::string zeros = R"(, "junk": [)";
+        for (int i = 0; i < 29000000; ++i) zeros += "0,";
+        zeros += "0]";
+        const std::string text = boardText(grid(4, 6), zeros);
+        REQUIRE(text.size() < defaults.maxBytes);
+        const std::string message = errorOf(read(text));
+        CHECK(message.starts_with("big.board.json:1:"));
+        CHECK(message.find("more than 2000000 JSON values") != std::string::npos);
     }
 }

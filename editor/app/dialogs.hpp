@@ -17,7 +17,8 @@ struct Dialogs {
     PendingAction pending = PendingAction::None;  ///< non-None: ask about unsaved changes
     std::string pendingPath;
     bool askUnsaved = false;
-    std::optional<RecoveryFile> recovery;  ///< offer to restore after a crash
+    std::optional<LeftCopy> recovery;  ///< offer to restore after a crash
+    bool diskChanged = false;          ///< ask before saving over a file changed on disk
     std::string notice;                    ///< informational message (read-only file ...)
 };
 

@@ -18,7 +18,9 @@
 #include "editor/app/tool_state.hpp"
 #include "editor/app/view_state.hpp"
 #include "editor/files/file_chooser.hpp"
+#include "editor/files/disk_stamp.hpp"
 #include "editor/files/recent_files.hpp"
+#include "editor/files/recovery.hpp"
 
 namespace stripsmith {
 
@@ -32,11 +34,15 @@ struct EditorApp {
     RecentFiles recent;
     ClipboardContent clipboard;
     HoverState hover;
+    /// The open file as last read or written, to notice a save made meanwhile by someone else.
+    std::optional<DiskStamp> diskStamp;
 
     std::string status;  ///< last action's message, shown in the status bar
     TestLog log;         ///< lines for the end-to-end tests (off by default)
 
-    std::string recoveryDir;  ///< empty: autosave off
+    std::string recoveryDir;   ///< empty: autosave off
+    RecoverySlot recovery;     ///< this editor's own recovery copy, locked for its whole life
+    std::string recoveryError; ///< why there is no slot, said once
     double autosaveSeconds = 60.0;
     double sinceAutosave = 0.0;
     unsigned autosavedRevision = 0;

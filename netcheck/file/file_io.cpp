@@ -95,14 +95,50 @@ int createTemporary(const fs::path& target, std::string& tempPath, const struct 
     return -EEXIST;
 }
 
-// Makes `<target>.bak` the present version: a hard link when the file system allows, else a copy.
-int keepBackup(const fs::path& target) {
-    const std::string backup = target.string() + ".bak";
-    if (::unlink(backup.c_str()) != 0 && errno != ENOENT) return errno;
-    if (::link(target.c_str(), backup.c_str()) == 0) return 0;
-    std::error_code error;
-    fs::copy_file(target, backup, fs::copy_options::overwrite_existing, error);
-    return error ? error.value() : 0;
+// Fills the open file `fd` with a copy of `source`, through `options.writeBytes`; 0 or errno.
+int copyInto(int fd, const fs::path& source, const SaveOptions& options) {
+    const int in = ::open(source.c_str(), O_RDONLY | O_CLOEXEC);
+    if (in < 0) return errno;
+    Descriptor input(in);
+    struct stat info {};
+    if (::fstat(in, &info) == 0) (void)::fchmod(fd, info.st_mode & 07777);
+    const auto& write = options.writeBytes ? options.writeBytes : writeAll;
+    char buffer[65536];
+    for (;;) {
+        const ssize_t got = ::read(in, buffer, sizeof buffer);
+        if (got < 0) {
+            if (errno == EINTR) continue;
+            return errno;
+        }
+        if (got == 0) break;
+        if (const int error = write(fd, std::string_view(buffer, static_cast<std::size_t>(got))))
+            return error;
+    }
+    return ::fsync(fd) == 0 ? 0 : errno;
+}
+
+// A new backup of `target` under a temporary name: a hard link when the file system allows
+// (protected_hardlinks refuses it for another user's file), else a whole, flushed copy.
+int makeBackupTemporary(const fs::path& target, const std::string& tempPath,
+                        const SaveOptions& options) {
+    const auto& link = options.linkBackup ? options.linkBackup : hardLink;
+    if (link(target.c_str(), tempPath.c_str()) == 0) return 0;
+    const int fd = ::open(tempPath.c_str(), O_WRONLY | O_CREAT | O_EXCL | O_CLOEXEC, 0600);
+    if (fd < 0) return errno;
+    Descriptor copy(fd);
+    if (const int error = copyInto(fd, target, options)) return error;
+    return copy.close();
+}
+
+// Makes `<target>.bak` the present version. The old backup is replaced only by a complete new
+// one (rename), so a failure at any step leaves the old backup and no partial file.
+int keepBackup(const fs::path& target, const SaveOptions& options) {
+    const fs::path backup = target.string() + ".bak";
+    const std::string tempPath = temporaryName(backup);
+    int error = makeBackupTemporary(target, tempPath, options);
+    if (error == 0 && ::rename(tempPath.c_str(), backup.c_str()) != 0) error = errno;
+    if (error != 0) ::unlink(tempPath.c_str());
+    return error;
 }
 
 // Makes the rename itself durable; some file systems cannot sync a folder, which is harmless.
@@ -131,6 +167,10 @@ std::string fileKind(const struct stat& info) {
 }
 
 }  // namespace
+
+int hardLink(const char* from, const char* to) {
+    return ::link(from, to) == 0 ? 0 : errno;
+}
 
 int writeAll(int fd, std::string_view bytes) {
     while (!bytes.empty()) {
@@ -169,7 +209,7 @@ std::optional<std::string> saveFileAtomically(const std::string& path, std::stri
         return failure("cannot write", path, failed);
     }
     if (exists && options.keepBackup) {
-        if (const int failed = keepBackup(target)) {
+        if (const int failed = keepBackup(target, options)) {
             ::unlink(tempPath.c_str());
             return failure("cannot keep the previous version of", path, failed);
         }

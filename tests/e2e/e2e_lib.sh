@@ -17,7 +17,10 @@ PASSED=0
 FAILED=0
 
 cleanup() {
-    if [ -n "$EDITOR_PID" ] && kill -0 "$EDITOR_PID" 2>/dev/null; then kill "$EDITOR_PID" 2>/dev/null || true; fi
+    local pid
+    for pid in "$EDITOR_PID" "${PID_OF[@]}"; do
+        if [ -n "$pid" ] && kill -0 "$pid" 2>/dev/null; then kill "$pid" 2>/dev/null || true; fi
+    done
     rm -rf "$WORK"
 }
 trap cleanup EXIT
@@ -241,6 +244,114 @@ last_dialogs() { grep "STRIPSMITH_E2E dialogs" "$LOG" | tail -1 | cut -d' ' -f3-
 dialogs_match() { last_dialogs | grep -q -- "$1"; }
 
 wait_dialogs() { wait_until dialogs_match "$1"; }  # wait_dialogs PATTERN: the open dialogs match
+
+# ---- actions and states shared by several scripts ---------------------------------------------------
+
+# press_for_dialog KEY PATTERN: presses KEY until the open dialogs match PATTERN.
+press_for_dialog() { press_until "$1" dialogs_match "$2"; }
+
+click_item() {  # click_item NAME: a click on a dialog button once its popup has settled
+    local xy
+    xy=$(item_xy "$1") || return 1
+    click_at $xy
+}
+
+# cut_gap ROW COL NAME: the cut tool, then a click on the gap after hole COL (zero-based) of strip
+# ROW; waits for the editor to report the cut NAME (tries again if the tool key was dropped).
+cut_gap() {
+    local before
+    for _ in 1 2; do
+        before=$(status_count)
+        keys x && click_at $(gap_xy "$1" "$2") || continue
+        if status_after "$before" "Add cut $3\$"; then return 0; fi
+    done
+    return 1
+}
+
+editor_running() { kill -0 "$EDITOR_PID" 2>/dev/null; }
+
+title_is() {  # title_is TITLE [WINDOW]: an editor window's title (the only one, without WINDOW)
+    [ "$(xdotool getwindowname "${2:-$(xdotool search --name '^Stripsmith' | head -1)}")" = "$1" ]
+}
+
+# close_window [WINDOW]: what a window manager sends when the title bar's close button is pressed
+# (to the only editor window without WINDOW).
+close_window() {
+    python3 - "${1:-$(xdotool search --name '^Stripsmith' | head -1)}" <<'PY'
+import ctypes, sys
+x11 = ctypes.cdll.LoadLibrary("libX11.so.6")
+x11.XOpenDisplay.restype = ctypes.c_void_p
+x11.XOpenDisplay.argtypes = [ctypes.c_char_p]
+x11.XInternAtom.restype = ctypes.c_ulong
+x11.XInternAtom.argtypes = [ctypes.c_void_p, ctypes.c_char_p, ctypes.c_int]
+x11.XSendEvent.argtypes = [ctypes.c_void_p, ctypes.c_ulong, ctypes.c_int, ctypes.c_long,
+                          ctypes.c_void_p]
+x11.XFlush.argtypes = [ctypes.c_void_p]
+x11.XCloseDisplay.argtypes = [ctypes.c_void_p]
+
+class ClientMessage(ctypes.Structure):  # XClientMessageEvent from <X11/Xlib.h>
+    _fields_ = [("type", ctypes.c_int), ("serial", ctypes.c_ulong), ("send_event", ctypes.c_int),
+                ("display", ctypes.c_void_p), ("window", ctypes.c_ulong),
+                ("message_type", ctypes.c_ulong), ("format", ctypes.c_int),
+                ("data", ctypes.c_long * 5)]
+
+class Event(ctypes.Union):  # XEvent: 24 longs
+    _fields_ = [("xclient", ClientMessage), ("pad", ctypes.c_long * 24)]
+
+display = x11.XOpenDisplay(None)
+window = int(sys.argv[1])
+event = Event()
+event.xclient.type = 33  # ClientMessage
+event.xclient.window = window
+event.xclient.message_type = x11.XInternAtom(display, b"WM_PROTOCOLS", 0)
+event.xclient.format = 32
+event.xclient.data[0] = x11.XInternAtom(display, b"WM_DELETE_WINDOW", 0)
+x11.XSendEvent(display, window, 0, 0, ctypes.byref(event))
+x11.XFlush(display)
+x11.XCloseDisplay(display)
+PY
+}
+
+editor_ended() { ! editor_running; }
+
+EXIT_STATUS=""
+wait_exit() {  # wait_exit: for the editor to end; sets EXIT_STATUS
+    EXIT_STATUS="still running"
+    wait_until editor_ended || return 1
+    EXIT_STATUS=0
+    wait "$EDITOR_PID" 2>/dev/null || EXIT_STATUS=$?
+}
+
+# recovery_copy_holding TEXT: some autosaved recovery copy holds TEXT
+recovery_copy_holding() {
+    grep -l -F -- "$1" "$WORK"/recovery/editor-*.board.json >/dev/null 2>&1
+}
+
+
+# ---- several editors at once ------------------------------------------------------------------------
+# start_named NAME [ARGS...]: starts one more editor, logging to $WORK/NAME.log; its process is
+# PID_OF[NAME] and its window WINDOW_OF[NAME]. The helpers above act on the editor started or chosen
+# (use_editor) last. All share one recovery folder, $WORK/recovery.
+declare -A PID_OF=() WINDOW_OF=()
+
+start_named() {
+    local name=$1 before
+    shift
+    before=$(xdotool search --name '^Stripsmith' 2>/dev/null | sort || true)
+    LOG="$WORK/$name.log"
+    start_editor "$@" || return 1
+    PID_OF[$name]=$EDITOR_PID
+    WINDOW_OF[$name]=$(comm -13 <(echo "$before") <(xdotool search --name '^Stripsmith' | sort) | head -1)
+    [ -n "${WINDOW_OF[$name]}" ]
+}
+
+# use_editor NAME: the helpers act on editor NAME from now on; its window is raised above the
+# others and given the keyboard (there is no window manager under Xvfb to do either).
+use_editor() {
+    LOG="$WORK/$1.log"
+    EDITOR_PID=${PID_OF[$1]}
+    xdotool windowraise "${WINDOW_OF[$1]}" windowfocus --sync "${WINDOW_OF[$1]}"
+}
 
 screenshot() {  # screenshot NAME
     import -window root "$ART/$1.png" 2>/dev/null || xwd -root -silent >"$ART/$1.xwd"

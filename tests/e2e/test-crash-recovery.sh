@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # End to end: draw on a new board, let the autosave run, kill the editor with SIGKILL, start it
-# again, accept the offered restore, save, and check the restored board holds what was drawn.
+# again: the copy is offered. Closing the window at that offer keeps the copy, offered again at the
+# next start; accept the restore, save, and check the restored board holds what was drawn.
 source "$(dirname "$0")/e2e_lib.sh"
 run_under_xvfb "$0"
 export STRIPSMITH_AUTOSAVE_SECONDS=1
@@ -13,15 +14,24 @@ click_at $(hole_xy 2 3)
 keys l
 click_at $(hole_xy 2 9)
 click_at $(hole_xy 6 9)
-check "an autosave appeared in the recovery folder" eventually test -s "$WORK/recovery/recovery.board.json"
+check "an autosave appeared in the recovery folder" eventually recovery_copy_holding '"C4"'
 # The autosave runs once a second: wait for the one that holds the link, the last thing drawn.
-check "the autosave holds the link to G10" eventually grep -q '"G10"' "$WORK/recovery/recovery.board.json"
+check "the autosave holds the link to G10" eventually recovery_copy_holding '"G10"'
 screenshot recovery-0-before-kill
 kill -KILL "$EDITOR_PID"
 wait "$EDITOR_PID" 2>/dev/null || true
 
 start_editor
+check "the copy is offered after the crash" wait_dialogs "restore"
 screenshot recovery-1-offer
+# Closing the window is no answer to the offer: the copy must stay for the next start.
+wait_settled "STRIPSMITH_E2E item restore " >/dev/null
+close_window
+check "closing the window at the offer ends the editor" wait_exit
+check "closing the window at the offer keeps the copy" recovery_copy_holding '"G10"'
+
+start_editor
+check "the copy is offered again at the next start" wait_dialogs "restore"
 click_at $(item_xy restore)
 screenshot recovery-2-restored
 # The restored board has no file yet: Ctrl+S opens the chooser; type the path and press Enter.
@@ -39,5 +49,6 @@ pins = pins if isinstance(pins, dict) else {p["name"]: p["hole"] for p in pins}
 links = [(l["from"], l["to"]) for l in b["links"]]
 sys.exit(0 if len(parts) == 1 and sorted(pins.values()) == ["C4", "C8"] and links == [("C10", "G10")] else 1)
 PY
-check "saving cleared the recovery copy" eventually test ! -e "$WORK/recovery/recovery.board.json"
+no_copy_left() { ! recovery_copy_holding '"G10"'; }
+check "saving cleared the recovery copy" eventually no_copy_left
 finish

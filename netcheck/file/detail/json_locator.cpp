@@ -235,4 +235,34 @@ std::optional<std::size_t> findTooDeep(std::string_view text, int maxDepth) {
     return std::nullopt;
 }
 
+std::optional<std::size_t> findValueBeyond(std::string_view text, std::size_t maxValues) {
+    std::vector<char> open;   // '{' or '[' of each container around the scan
+    bool expectValue = true;  // the next token starts a value (not a key, not a separator)
+    std::size_t count = 0;
+    for (std::size_t i = 0; i < text.size(); ++i) {
+        const char c = text[i];
+        if (c == ' ' || c == '\t' || c == '\n' || c == '\r') continue;
+        if (expectValue) {
+            expectValue = false;
+            // ']' right after '[' closes an empty array: no value there.
+            if (c != ']' && ++count > maxValues) return i;
+        }
+        if (c == '"') {
+            for (++i; i < text.size() && text[i] != '"'; ++i) {
+                if (text[i] == '\\') ++i;
+            }
+        } else if (c == '{' || c == '[') {
+            open.push_back(c);
+            expectValue = c == '[';
+        } else if (c == '}' || c == ']') {
+            if (!open.empty()) open.pop_back();
+        } else if (c == ':') {
+            expectValue = true;
+        } else if (c == ',') {
+            expectValue = !open.empty() && open.back() == '[';
+        }
+    }
+    return std::nullopt;
+}
+
 }  // namespace netcheck

@@ -45,4 +45,9 @@ std::optional<DuplicateKey> findDuplicateKey(std::string_view text);
 /// without recursion so it is safe on any input.
 std::optional<std::size_t> findTooDeep(std::string_view text, int maxDepth);
 
+/// Byte offset of value number `maxValues + 1` (each object, array, string, number, true, false
+/// and null that is a value, not a key, counts one), if any. Scans without building anything, so
+/// the count bounds the memory a document may take before it is parsed.
+std::optional<std::size_t> findValueBeyond(std::string_view text, std::size_t maxValues);
+
 }  // namespace netcheck

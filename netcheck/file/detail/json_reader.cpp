@@ -196,6 +196,15 @@ ReadResult<Json> parseJsonText(std::string_view text, std::string_view fileName,
                     "nesting is deeper than " + std::to_string(limits.maxDepth) + " levels");
         return result;
     }
+    // Counted before parsing too: the memory a document takes grows with its values, not its
+    // bytes.
+    if (auto beyond = findValueBeyond(text, limits.maxValues)) {
+        result.error = errorAt(text, fileName, *beyond,
+                               "more than " + std::to_string(limits.maxValues) +
+                                   " JSON values, the limit (each object, array, string, number, "
+                                   "true, false and null is one)");
+        return result;
+    }
     try {
         Json document;
         AppendingBuilder builder(document, text, spellings);
