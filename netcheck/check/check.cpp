@@ -112,7 +112,7 @@ std::vector<Finding> findOpens(const CheckedBoard& checked, const std::vector<Ne
         }
         return named;
     }
-    Board repaired = checked.board();
+    Board repaired = copperOnly(checked.board());
     for (const Finding& finding : shorts) {
         if (finding.suggestedCut) repaired.cuts.push_back(*finding.suggestedCut);
     }

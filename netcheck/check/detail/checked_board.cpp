@@ -1,6 +1,41 @@
 #include "netcheck/check/detail/checked_board.hpp"
 
+#include <algorithm>
+
 namespace netcheck {
+
+namespace {
+
+bool isLug(const Board& board, const PinRef& pin) {
+    for (const OffboardPart& part : board.offboard) {
+        if (part.ref == pin.ref && std::find(part.pins.begin(), part.pins.end(), pin.pin) != part.pins.end())
+            return true;
+    }
+    return false;
+}
+
+}  // namespace
+
+Board copperOnly(const Board& board) {
+    Board copper;
+    copper.rows = board.rows;
+    copper.cols = board.cols;
+    copper.copper = board.copper;
+    copper.cuts = board.cuts;
+    copper.links = board.links;
+    for (const OffboardPart& part : board.offboard) copper.offboard.push_back({part.ref, part.kind, {}, part.pins, {}});
+    for (const Wire& wire : board.wires) {
+        Wire bare{wire.from, wire.to, {}, {}};
+        for (Endpoint* end : {&bare.from, &bare.to}) {
+            if (end->isHole() || isLug(board, end->lug)) continue;
+            const Part* part = board.findPart(end->lug.ref);
+            const Pin* lead = part ? part->findPin(end->lug.pin) : nullptr;
+            if (lead) *end = Endpoint::atHole(lead->hole);
+        }
+        copper.wires.push_back(std::move(bare));
+    }
+    return copper;
+}
 
 CheckedBoard::CheckedBoard(const Board& board)
     : board_(&board), copper_(board), leadsInHole_(static_cast<std::size_t>(board.holeCount()), 0) {

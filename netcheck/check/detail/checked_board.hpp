@@ -11,6 +11,11 @@
 
 namespace netcheck {
 
+/// The board's copper alone: grid, cuts, links, wires and off-board lugs, with each wire end on
+/// an on-board part's lead turned into that lead's hole. It traces exactly like the board and is
+/// cheap to copy, for trying cuts (a board of 100,000 parts and its circuit is not).
+Board copperOnly(const Board& board);
+
 /// Something soldered into a hole: a part pin, one end of a link, or the board end of a wire.
 struct Lead {
     enum class Kind { PartPin, LinkEnd, WireEnd };

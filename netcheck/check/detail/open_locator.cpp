@@ -101,7 +101,7 @@ std::vector<std::size_t> cutsNearNet(const CheckedBoard& checked, const Board& b
 // An existing cut whose removal alone mends the net and shorts nothing.
 std::optional<Cut> misplacedCut(const CheckedBoard& checked, const Net& net,
                                 const RepairedBoard& repaired) {
-    Board trial = *repaired.board;
+    Board trial = copperOnly(*repaired.board);
     for (std::size_t c : cutsNearNet(checked, trial, net)) {
         const Cut cut = trial.cuts[c];
         trial.cuts.erase(trial.cuts.begin() + static_cast<std::ptrdiff_t>(c));

@@ -161,7 +161,7 @@ std::optional<Cut> suggestCut(const CheckedBoard& checked, const std::vector<int
     std::vector<Cut> candidates = cutCandidates(checked, path);
     if (candidates.size() > kMaxCutTrials) candidates.resize(kMaxCutTrials);
     if (candidates.empty()) return std::nullopt;
-    Board trial = checked.board();
+    Board trial = copperOnly(checked.board());
     for (const Cut& cut : candidates) {
         trial.cuts.push_back(cut);
         const bool good = separatesCleanly(trial, start, end, nets, pinsAt);
