@@ -28,7 +28,8 @@ ToolContext toolContext(EditorApp& app) {
 }
 
 MenuContext menuContext(EditorApp& app) {
-    return {app.doc, app.recent, app.chooser, app.view, editContext(app), app.hover.hole, app.log};
+    return {app.doc,  app.recent,      app.chooser, app.view, editContext(app), app.hover.hole,
+            app.log, &app.jfetPanel.open};
 }
 
 CanvasContext canvasContext(EditorApp& app) {
@@ -227,6 +228,7 @@ void drawPanels(EditorApp& app, const PanelLayout& l) {
                   {l.display.x, l.statusHeight},
                   showVoltages ? &*voltages->voltages.value : nullptr);
     drawCircuitPanel(circuitPanelContext(app));
+    drawJfetBiasPanel({app.doc, app.jfetPanel, app.commands(), app.log});
     drawHelpWindow(app.view.showHelp);
 }
 

@@ -12,6 +12,7 @@
 #include "editor/app/commands.hpp"
 #include "editor/app/dialogs.hpp"
 #include "editor/app/document.hpp"
+#include "editor/app/jfet_panel_state.hpp"
 #include "editor/app/hover.hpp"
 #include "editor/app/selection.hpp"
 #include "editor/app/test_log.hpp"
@@ -53,6 +54,7 @@ struct EditorApp {
     CircuitPanelState circuitPanel;  ///< the Circuit panel's typed text and choices
     BenchVoltagesWorker benchVoltages;       ///< computes off the frame (View > Bench voltages)
     std::optional<unsigned> benchRequested;  ///< the revision last asked for
+    JfetPanelState jfetPanel;                ///< the JFET bias panel's figures
 
     /// The way to change the document: commands, reported in the status line.
     Commands commands() { return Commands(doc, status, log); }

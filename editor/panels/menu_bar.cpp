@@ -77,6 +77,8 @@ void viewMenu(const MenuContext& c) {
     c.log.item("menu-circuit-panel");
     ImGui::MenuItem("Bench voltages", nullptr, &view.showBenchVoltages);
     c.log.item("menu-bench-voltages");
+    if (c.showJfetBias) ImGui::MenuItem("JFET bias helper", nullptr, c.showJfetBias);
+    c.log.item("menu-jfet-bias");
     if (ImGui::BeginMenu("Interface size")) {
         if (ImGui::MenuItem("Normal (1x)", nullptr, view.uiScale == 1)) view.uiScale = 1;
         if (ImGui::MenuItem("Large (2x)", nullptr, view.uiScale == 2)) view.uiScale = 2;

@@ -9,6 +9,7 @@
 #include <imgui.h>
 
 #include "editor/app/circuit_panel_state.hpp"
+#include "editor/app/jfet_panel_state.hpp"
 #include "editor/app/commands.hpp"
 #include "editor/app/dialogs.hpp"
 #include "editor/app/document.hpp"
@@ -54,6 +55,15 @@ struct MenuContext {
     EditContext edit;
     std::optional<netcheck::Hole> pasteAt;  ///< the hole under the mouse
     TestLog& log;
+    bool* showJfetBias = nullptr;  ///< View > JFET bias helper
+};
+
+/// What the JFET bias panel reads and changes.
+struct JfetPanelContext {
+    const Document& doc;
+    JfetPanelState& state;
+    Commands commands;
+    TestLog& log;
 };
 
 /// What the Circuit panel reads and changes.
@@ -82,6 +92,8 @@ void drawCheckPanel(const Document& doc, Commands commands, ViewState& view, Tes
                     ImVec2 pos, ImVec2 size);
 /// "Circuit": the intended circuit; load one, capture the board's connectivity, remove.
 void drawCircuitPanel(const CircuitPanelContext& c);
+/// The JFET bias helper, when open.
+void drawJfetBiasPanel(const JfetPanelContext& c);
 /// The status line: hovered hole and its net (and its expected voltage when `voltages` is given),
 /// board size, zoom, tool hint.
 void drawStatusBar(const Document& doc, const HoverState& hover, const ToolState& tool,
