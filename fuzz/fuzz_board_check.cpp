@@ -9,7 +9,7 @@
 
 #include "fuzz_check.hpp"
 #include "netcheck/check/check.hpp"
-#include "netcheck/check/report_format.hpp"
+#include "netcheck/report/report_format.hpp"
 #include "netcheck/file/board_file.hpp"
 
 extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t* data, std::size_t size) {

@@ -10,7 +10,7 @@
 #include <string>
 
 #include "netcheck/check/check.hpp"
-#include "netcheck/check/report_format.hpp"
+#include "netcheck/report/report_format.hpp"
 #include "netcheck/file/board_file.hpp"
 
 using namespace netcheck;
