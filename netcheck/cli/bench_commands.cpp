@@ -8,6 +8,7 @@
 #include <iostream>
 #include <system_error>
 
+#include "netcheck/cli/cli_io.hpp"
 #include "netcheck/file/board_file.hpp"
 #include "netcheck/file/file_io.hpp"
 #include "netcheck/model/printable.hpp"
@@ -49,18 +50,6 @@ struct UsageError {
     std::string message;
 };
 
-bool emit(const std::string& text) {
-    errno = 0;
-    std::cout << text;
-    std::cout.flush();
-    if (std::cout.good()) return true;
-    const int error = errno;
-    std::cerr << "netcheck: cannot write to standard output"
-              << (error != 0 ? ": " + std::generic_category().message(error) : std::string())
-              << "\n";
-    return false;
-}
-
 int fail(const std::string& message) {
     std::cerr << "netcheck: " << netcheck::escapeControls(message) << "\n";
     return kBadInput;
@@ -81,30 +70,6 @@ double quantityArgument(const std::string& option, const std::string& text) {
 std::string next(const std::vector<std::string>& args, std::size_t& i) {
     if (i + 1 >= args.size()) throw UsageError{args[i] + " needs a value"};
     return args[++i];
-}
-
-template <class Reader>
-auto load(const std::string& path, Reader reader)
-    -> decltype(reader(std::string_view{}, std::string_view{}).value) {
-    netcheck::ReadResult<std::string> text =
-        netcheck::readFileLimited(path, netcheck::ReadLimits{}.maxBytes);
-    if (!text.ok()) {
-        std::cerr << "netcheck: "
-                  << (text.error ? text.error->describe() : netcheck::escapeControls(path)) << "\n";
-        return std::nullopt;
-    }
-    auto result = reader(*text.value, path);
-    if (!result.ok()) {
-        std::cerr << "netcheck: "
-                  << (result.error ? result.error->describe()
-                                   : netcheck::escapeControls(path) + ": unreadable")
-                  << "\n";
-        return std::nullopt;
-    }
-    for (const std::string& note : result.notes) {
-        std::cerr << "netcheck: note: " << netcheck::escapeControls(note) << "\n";
-    }
-    return std::move(result.value);
 }
 
 int runVoltages(const std::vector<std::string>& args) {

@@ -10,6 +10,7 @@
 #include <vector>
 
 #include "netcheck/cli/bench_commands.hpp"
+#include "netcheck/cli/cli_io.hpp"
 #include "netcheck/file/board_file.hpp"
 #include "netcheck/check/check.hpp"
 #include "netcheck/spice/circuit_loader.hpp"
@@ -19,6 +20,9 @@
 #include "netcheck/repair/repair_plan.hpp"
 
 namespace {
+
+using netcheck_cli::emit;
+using netcheck_cli::load;
 
 constexpr const char* kVersion = STRIPSMITH_VERSION;  // from the top CMakeLists.txt
 
@@ -109,45 +113,6 @@ Options parseArgs(const std::vector<std::string>& args) {
     }
     if (options.nets && options.repairedFile) throw UsageError{"--nets and --repair do not go together"};
     return options;
-}
-
-/// Reads and parses one input file; on failure prints the located error and returns nullopt.
-template <class Reader>
-auto load(const std::string& path, Reader reader)
-    -> decltype(reader(std::string_view{}, std::string_view{}).value) {
-    const netcheck::ReadLimits limits;
-    netcheck::ReadResult<std::string> text = netcheck::readFileLimited(path, limits.maxBytes);
-    if (!text.ok()) {
-        std::cerr << "netcheck: "
-                  << (text.error ? text.error->describe() : netcheck::escapeControls(path)) << "\n";
-        return std::nullopt;
-    }
-    auto result = reader(*text.value, path);
-    if (!result.ok()) {
-        std::cerr << "netcheck: "
-                  << (result.error ? result.error->describe()
-                                   : netcheck::escapeControls(path) + ": unreadable")
-                  << "\n";
-        return std::nullopt;
-    }
-    for (const std::string& note : result.notes) {
-        std::cerr << "netcheck: note: " << netcheck::escapeControls(note) << "\n";
-    }
-    return std::move(result.value);
-}
-
-/// Writes the report (or netlist) to standard output and makes sure it arrived: a full disk or a
-/// closed output must not pass for an empty report with a success status.
-bool emit(const std::string& text) {
-    errno = 0;
-    std::cout << text;
-    std::cout.flush();
-    if (std::cout.good()) return true;
-    const int error = errno;
-    std::cerr << "netcheck: cannot write the report to standard output"
-              << (error != 0 ? ": " + std::generic_category().message(error) : std::string())
-              << "\n";
-    return false;
 }
 
 // The board with the plan done, saved atomically; the status tells whether errors remain on it.
