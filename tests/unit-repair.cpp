@@ -149,6 +149,20 @@ TEST_CASE("knock-on errors carry no fix of their own; the plan's step names them
     }
 }
 
+TEST_CASE("a board over the size limit is not searched, and says so") {
+    Board board = sample("astable-reversed-electrolytic");
+    RepairLimits limits;
+    limits.maxHoles = board.holeCount() - 1;
+    const RepairPlan plan = planRepair(board, nullptr, limits);
+    CHECK(plan.steps.empty());
+    CHECK(plan.checks == 0);
+    CHECK(plan.skipped.find(std::to_string(board.holeCount()) + " holes") != std::string::npos);
+    CheckReport report = check(board);
+    const CheckReport unattached = report;
+    attachPlan(report, plan, board);
+    CHECK(report.errors.front().fix == unattached.errors.front().fix);
+}
+
 TEST_CASE("a board with no errors gets an empty plan") {
     const RepairPlan plan = planRepair(sample("flasher"));
     CHECK(plan.steps.empty());

@@ -62,7 +62,11 @@ std::unique_ptr<netcheck::edit::Command> planRows(const CheckPanel& p, std::opti
     const netcheck::RepairPlan& plan = p.doc.plan();
     const auto& errors = p.doc.report().errors;
     std::unique_ptr<netcheck::edit::Command> pressed;
-    if (plan.steps.empty()) {
+    if (!plan.skipped.empty()) {
+        ImGui::PushTextWrapPos(0.0f);
+        ImGui::TextDisabled("No repair plan: %s.", plan.skipped.c_str());
+        ImGui::PopTextWrapPos();
+    } else if (plan.steps.empty()) {
         ImGui::TextDisabled("No safe repair found.");
     } else {
         const int cleared = plan.errorsBefore - plan.errorsAfter;

@@ -156,6 +156,13 @@ bool applyOwnFix(const Finding& finding, Board& board) {
 }  // namespace
 
 RepairPlan planRepair(const Board& board, const Circuit* circuit, const RepairLimits& limits) {
+    if (board.holeCount() > limits.maxHoles) {
+        RepairPlan plan;
+        plan.skipped = "the board has " + std::to_string(board.holeCount()) +
+                       " holes; repair plans are searched on boards of up to " +
+                       std::to_string(limits.maxHoles);
+        return plan;
+    }
     RepairSearch search(board, circuit, limits);
     const Trial best = search.run();
     RepairPlan plan;
@@ -173,6 +180,7 @@ RepairPlan planRepair(const Board& board, const Circuit* circuit, const RepairLi
 }
 
 void attachPlan(CheckReport& report, const RepairPlan& plan, const Board& board, const Circuit* circuit) {
+    if (!plan.skipped.empty()) return;  // fixes stay as the check gave them, unverified
     for (std::size_t k = 0; k < plan.steps.size(); ++k) {
         for (int i : plan.steps[k].clears) {
             if (i < 0 || static_cast<std::size_t>(i) >= report.errors.size()) continue;

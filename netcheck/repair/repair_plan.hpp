@@ -27,6 +27,9 @@ struct RepairLimits {
     int maxSteps = 3;
     int keep = 6;
     int maxChecks = 4000;
+    /// Boards larger than this are not searched (real boards have a few thousand holes; a search
+    /// over thousands of checks of a million-hole board would take minutes).
+    int maxHoles = 40000;
 };
 
 /// An error the plan leaves, and why.
@@ -44,6 +47,7 @@ struct RepairPlan {
     /// Errors no plan could clear, with what would mend each (fit the part, the right value ...).
     std::vector<RemainingError> remaining;
     int checks = 0;  ///< boards checked while searching
+    std::string skipped;  ///< why no search was made (a board over the size limit); empty when searched
     bool clearsAll() const { return errorsAfter == 0 && errorsBefore > 0; }
 };
 

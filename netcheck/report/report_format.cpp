@@ -106,6 +106,7 @@ std::string stepLine(std::size_t k, const RepairStep& step) {
 
 std::string planText(const CheckReport& report, const RepairPlan& plan) {
     if (report.errors.empty()) return "";
+    if (!plan.skipped.empty()) return "repair plan: not searched: " + plan.skipped + "\n";
     if (plan.steps.empty()) return "repair plan: no safe edit clears any error\n";
     const int cleared = plan.errorsBefore - plan.errorsAfter;
     std::string text = "repair plan: " + plural(plan.steps.size(), "step") + " clear" +
@@ -122,6 +123,7 @@ std::string planText(const CheckReport& report, const RepairPlan& plan) {
 
 nlohmann::ordered_json planJson(const RepairPlan& plan) {
     nlohmann::ordered_json json;
+    if (!plan.skipped.empty()) return {{"skipped", plan.skipped}};
     json["errors_before"] = plan.errorsBefore;
     json["errors_after"] = plan.errorsAfter;
     json["steps"] = nlohmann::ordered_json::array();

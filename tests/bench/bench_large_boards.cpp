@@ -12,6 +12,7 @@
 #include "netcheck/check/check.hpp"
 #include "netcheck/report/report_format.hpp"
 #include "netcheck/file/board_file.hpp"
+#include "netcheck/repair/repair_plan.hpp"
 
 using namespace netcheck;
 
@@ -71,14 +72,17 @@ void readCheckReport(benchmark::State& state, const std::string& text, std::size
             state.SkipWithError(board.error->describe().c_str());
             return;
         }
-        const CheckReport report = check(*board.value);
+        CheckReport report = check(*board.value);
         if (report.errors.size() != wantErrors) {
             state.SkipWithError(("expected " + std::to_string(wantErrors) + " errors, found " +
                                  std::to_string(report.errors.size()))
                                     .c_str());
             return;
         }
-        const std::string printed = formatReportText(report, *board.value);
+        // As the CLI: the repair plan (a board this size is not searched, and says so).
+        const RepairPlan plan = planRepair(*board.value);
+        attachPlan(report, plan, *board.value);
+        const std::string printed = formatReportText(report, *board.value, &plan);
         benchmark::DoNotOptimize(printed.data());
     }
     state.counters["file_MB"] = static_cast<double>(text.size()) / 1e6;
