@@ -50,14 +50,34 @@ std::string lowerCase(std::string_view text) {
     return out;
 }
 
-std::optional<double> toleranceInValue(std::string_view value) {
+namespace {
+
+// A number written in a value: where it starts and ends, and the first character after the
+// blanks that follow it (where a unit such as '%' or 'V' would be).
+struct NumberAt {
+    std::size_t at = 0;
+    std::size_t end = 0;
+    std::size_t after = 0;
+};
+
+std::vector<NumberAt> numbersIn(std::string_view value) {
+    std::vector<NumberAt> numbers;
     for (std::size_t at = 0; at < value.size(); ++at) {
         if (!isDigit(value[at]) || (at > 0 && (isDigit(value[at - 1]) || value[at - 1] == '.'))) {
             continue;
         }
-        const std::size_t end = numberEnd(value, at);
-        std::size_t after = end;
-        while (after < value.size() && value[after] == ' ') ++after;
+        NumberAt number{at, numberEnd(value, at), 0};
+        number.after = number.end;
+        while (number.after < value.size() && value[number.after] == ' ') ++number.after;
+        numbers.push_back(number);
+    }
+    return numbers;
+}
+
+}  // namespace
+
+std::optional<double> toleranceInValue(std::string_view value) {
+    for (const auto [at, end, after] : numbersIn(value)) {
         if (after < value.size() && value[after] == '%') return toNumber(value.substr(at, end - at)) / 100;
     }
     return std::nullopt;
@@ -83,13 +103,7 @@ std::string withoutTolerance(std::string_view value) {
 }
 
 std::optional<double> voltageInValue(std::string_view value) {
-    for (std::size_t at = 0; at < value.size(); ++at) {
-        if (!isDigit(value[at]) || (at > 0 && (isDigit(value[at - 1]) || value[at - 1] == '.'))) {
-            continue;
-        }
-        const std::size_t end = numberEnd(value, at);
-        std::size_t after = end;
-        while (after < value.size() && value[after] == ' ') ++after;
+    for (const auto [at, end, after] : numbersIn(value)) {
         if (after >= value.size() || (value[after] != 'V' && value[after] != 'v')) continue;
         const bool negative = at > 0 && value[at - 1] == '-';
         double volts = toNumber(value.substr(at, end - at));
