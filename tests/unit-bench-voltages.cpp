@@ -27,8 +27,9 @@ BenchVoltages computed(const Circuit& circuit, BenchOptions options = {}) {
     return *result.value;
 }
 
-Circuit divider(const std::string& top, const std::string& bottom) {
-    return circuitOf({{"BT1", "battery", "9V", {"+", "-"}},
+// A supply written "9V 0%" is taken as exact, so the ranges are the resistors' alone.
+Circuit divider(const std::string& top, const std::string& bottom, const std::string& supply = "9V 0%") {
+    return circuitOf({{"BT1", "battery", supply, {"+", "-"}},
                       {"R1", "resistor", top, {"1", "2"}},
                       {"R2", "resistor", bottom, {"1", "2"}}},
                      {{"VCC", {"BT1.+", "R1.1"}}, {"MID", {"R1.2", "R2.1"}},
@@ -52,6 +53,30 @@ TEST_CASE("bench voltages") {
         CHECK(mid.high == doctest::Approx(4.725).epsilon(1e-6));
         CHECK(voltages.method.rfind("corners: 4 runs", 0) == 0);
     }
+    SUBCASE("a supply's own tolerance, worked by hand") {
+        // Exact resistors, so MID is half the supply: a battery is 9 V +-10 % over its life
+        // (common practice): 4.05 to 4.95 V; a tolerance in the value wins: 9 V +-5 %: 4.275 to
+        // 4.725 V; a DC jack +-5 % (common practice) at 12 V: 5.7 to 6.3 V; a "V" override is
+        // taken as measured: no range at all.
+        const auto mid = [](const Circuit& circuit) { return net(computed(circuit), "MID"); };
+        const NetReading battery = mid(divider("10k 0%", "10k 0%", "9V"));
+        CHECK(battery.low == doctest::Approx(4.05).epsilon(1e-6));
+        CHECK(battery.high == doctest::Approx(4.95).epsilon(1e-6));
+        const NetReading written = mid(divider("10k 0%", "10k 0%", "9V 5%"));
+        CHECK(written.low == doctest::Approx(4.275).epsilon(1e-6));
+        CHECK(written.high == doctest::Approx(4.725).epsilon(1e-6));
+        Circuit adapter = divider("10k 0%", "10k 0%", "12V");
+        adapter.parts["BT1"].kind = "dc-jack";
+        const NetReading jack = mid(adapter);
+        CHECK(jack.low == doctest::Approx(5.7).epsilon(1e-6));
+        CHECK(jack.high == doctest::Approx(6.3).epsilon(1e-6));
+        Circuit measured = divider("10k 0%", "10k 0%", "9V");
+        measured.parts["BT1"].extra["spice_model"] = {{"V", 9.3}};
+        const NetReading exact = mid(measured);
+        CHECK(exact.nominal == doctest::Approx(4.65).epsilon(1e-6));
+        CHECK(exact.low == doctest::Approx(4.65).epsilon(1e-6));
+        CHECK(exact.high == doctest::Approx(4.65).epsilon(1e-6));
+    }
     SUBCASE("the range contains the nominal and widens with the tolerance") {
         const BenchVoltages tight = computed(divider("10k 1%", "22k 1%"));
         const BenchVoltages loose = computed(divider("10k 10%", "22k 10%"));
@@ -69,7 +94,7 @@ TEST_CASE("bench voltages") {
     }
     SUBCASE("Monte Carlo: fixed seed, contains the nominal, widens with the spreads") {
         // Nine resistors: more parameters than corners allow, so the ranges are Monte Carlo.
-        Circuit ladder = circuitOf({{"BT1", "battery", "12V", {"+", "-"}}}, {});
+        Circuit ladder = circuitOf({{"BT1", "battery", "12V 0%", {"+", "-"}}}, {});
         ladder.nets["GND"].push_back({"BT1", "-"});
         std::string previous = "BT1.+";
         for (int i = 1; i <= 9; ++i) {
@@ -158,8 +183,8 @@ TEST_CASE("bench voltages") {
         // Zener 5V1 through 1k from 9 V: 3.9 mA, a little under its 5 mA test current: ~5.1 V.
         // 7805 from 9 V: 5 V; from 6 V it drops out: 6 - 2 = 4 V.
         const Circuit circuit = circuitOf(
-            {{"BT1", "battery", "9V", {"+", "-"}},
-             {"BT2", "battery", "6V", {"+", "-"}},
+            {{"BT1", "battery", "9V 0%", {"+", "-"}},
+             {"BT2", "battery", "6V 0%", {"+", "-"}},
              {"R1", "resistor", "470R", {"1", "2"}},
              {"LED1", "led", "red 5 mm", {"A", "K"}},
              {"R2", "resistor", "1k", {"1", "2"}},

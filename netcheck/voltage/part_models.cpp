@@ -393,22 +393,36 @@ DcModel regulator(const CircuitPart& part, const Overrides& overrides) {
     return model;
 }
 
-DcModel supply(const CircuitPart& part, const DcModelOptions& options) {
-    const std::optional<double> volts =
-        voltageInValue(part.value) ? voltageInValue(part.value) : options.supplyVolts;
+// A battery's voltage over its life: fresh alkaline cells read above the nominal, worn ones
+// below it (10 %, common practice); a DC adapter or bench supply 5 % (common practice). A tolerance
+// in the value ("9V 5%") is taken instead; a "V" override is taken as measured and not varied.
+constexpr double kBatteryTolerance = 0.10;
+constexpr double kAdapterTolerance = 0.05;
+
+DcModel supply(const CircuitPart& part, const Overrides& overrides, const DcModelOptions& options) {
+    const std::string value = withoutTolerance(part.value);
+    const std::optional<double> volts = overrides.number("V") ? overrides.number("V")
+                                        : voltageInValue(value)  ? voltageInValue(value)
+                                                                 : options.supplyVolts;
     if (!volts) return leftOut("no voltage in its value (write e.g. 9V, or give --supply)");
+    const double tolerance = overrides.number("V") ? 0.0
+                             : toleranceInValue(part.value).value_or(
+                                   part.kind == "battery" ? kBatteryTolerance : kAdapterTolerance);
     DcModel model;
     model.role = DcModel::Role::Simulated;
     model.supply = true;
     model.pins = {"+", "-"};
-    model.parameters = {{"V", *volts, *volts, *volts, false}};
+    model.parameters = {relative("V", *volts, tolerance)};
     model.write = [](const std::string& name, const std::vector<std::string>& nodes,
                      std::span<const double> values) {
         return std::vector<std::string>{"V" + name + " " + nodes[0] + " " + nodes[1] + " DC " +
                                         number(values[0])};
     };
     model.paths = {{0, 1, -1, -1, 0, true}};
-    model.summary = "supply, " + number(*volts) + " V (taken as exact)";
+    model.summary = "supply, " + number(*volts) + " V, " +
+                    (tolerance == 0 ? std::string("as measured")
+                                    : number(tolerance * 100) + " %" +
+                                          (toleranceInValue(part.value) ? "" : " (common practice)"));
     return model;
 }
 
@@ -480,7 +494,7 @@ DcModel dcModelFor(const CircuitPart& part, const nlohmann::json& overridesJson,
     } else if (kind == "regulator") {
         model = regulator(part, overrides);
     } else if (kind == "battery" || kind == "dc-jack") {
-        model = supply(part, options);
+        model = supply(part, overrides, options);
     } else {
         return leftOut("no DC model for a part of kind " + kind);
     }
