@@ -13,8 +13,10 @@
 #include <string>
 #include <vector>
 
+#include "netcheck/check/check.hpp"
 #include "netcheck/model/board.hpp"
 #include "netcheck/model/part_kinds.hpp"
+#include "netcheck/repair/finding_fixes.hpp"
 
 namespace test_support {
 
@@ -31,6 +33,14 @@ inline std::string sourcePath(const std::string& relative) {
 }
 
 /// The whole file as bytes; throws when it cannot be read.
+/// The check with each short's and open's own fix found, as the reports give them.
+inline netcheck::CheckReport checkWithFixes(const netcheck::Board& board,
+                                            const netcheck::Circuit* circuit = nullptr) {
+    netcheck::CheckReport report = netcheck::check(board, circuit);
+    netcheck::suggestFixes(report, board, circuit);
+    return report;
+}
+
 inline std::string readTextFile(const std::string& path) {
     std::ifstream in(path, std::ios::binary);
     if (!in) throw std::runtime_error("cannot read " + path);

@@ -61,7 +61,7 @@ bool separatesWithoutOpening(Board board, const Finding& shortFinding) {
 
 TEST_CASE("check") {
     SUBCASE("a matching board has no errors; values compare numerically (IEC 60062: 2k2 = 2.2k)") {
-        const CheckReport report = check(seriesPair());
+        const CheckReport report = test_support::checkWithFixes(seriesPair());
         CHECK(report.ok());
         CHECK(report.hasCircuit);
     }
@@ -77,7 +77,7 @@ TEST_CASE("check") {
         circuit.parts["R1"] = {"resistor", "1k", {}, {}};
         circuit.parts["R2"] = {"resistor", "1k", {}, {}};
         board.circuit = circuit;
-        const CheckReport report = check(board);
+        const CheckReport report = test_support::checkWithFixes(board);
         const auto shorts = ofType(report.errors, "short");
         REQUIRE(shorts.size() == 1);
         CHECK(shorts[0]->nets == std::vector<std::string>{"X", "Y"});
@@ -103,14 +103,14 @@ TEST_CASE("check") {
         circuit.nets["X"] = {pin("R1.1")};
         circuit.nets["Y"] = {pin("R2.1")};
         board.circuit = circuit;
-        const CheckReport report = check(board);
+        const CheckReport report = test_support::checkWithFixes(board);
         const auto shorts = ofType(report.errors, "short");
         REQUIRE(shorts.size() == 1);
         REQUIRE(shorts[0]->suggestedCut);
         CHECK(cutName(*shorts[0]->suggestedCut) == "A3");
         CHECK(separatesWithoutOpening(board, *shorts[0]));
         board.cuts.clear();  // with nothing to line up with, the middle of the run is chosen
-        const CheckReport withoutCuts = check(board);
+        const CheckReport withoutCuts = test_support::checkWithFixes(board);
         const auto alone = ofType(withoutCuts.errors, "short");
         REQUIRE(alone.size() == 1);
         CHECK(cutName(*alone[0]->suggestedCut) != "A3");
@@ -125,7 +125,7 @@ TEST_CASE("check") {
         circuit.nets["P"] = {pin("R1.1"), pin("R2.1")};
         circuit.nets["Q"] = {pin("R1.2"), pin("R2.2")};
         board.circuit = circuit;
-        const CheckReport report = check(board);
+        const CheckReport report = test_support::checkWithFixes(board);
         const auto shorts = ofType(report.errors, "short");
         REQUIRE(shorts.size() == 1);
         CHECK(shorts[0]->nets == std::vector<std::string>{"P", "Q"});
@@ -134,7 +134,7 @@ TEST_CASE("check") {
     SUBCASE("open: a cut in the wrong place, then a forgotten link") {
         Board board = seriesPair();
         board.cuts.push_back(Cut{h("B3"), Cut::Kind::Hole});
-        CheckReport report = check(board);
+        CheckReport report = test_support::checkWithFixes(board);
         auto opens = ofType(report.errors, "open");
         REQUIRE(opens.size() == 1);
         CHECK(opens[0]->net == "MID");
@@ -146,7 +146,7 @@ TEST_CASE("check") {
         board.parts[1].pins[0].hole = h("C7");  // R2 now on strips C and D: MID needs a link
         board.parts[1].pins[1].hole = h("D7");
         board.circuit->nets["OUT"] = {pin("R2.2")};
-        report = check(board);
+        report = test_support::checkWithFixes(board);
         opens = ofType(report.errors, "open");
         REQUIRE(opens.size() == 1);
         REQUIRE(opens[0]->suggestedLinks.size() == 1);
@@ -164,7 +164,7 @@ TEST_CASE("check") {
         circuit.nets["TOP"] = {pin("R1.1"), pin("R2.1"), pin("R3.1")};
         circuit.nets["GND"] = {pin("R1.2"), pin("R2.2"), pin("R3.2")};
         board.circuit = circuit;
-        const CheckReport report = check(board);
+        const CheckReport report = test_support::checkWithFixes(board);
         const auto opens = ofType(report.errors, "open");
         REQUIRE(opens.size() == 1);
         CHECK(opens[0]->pieces.size() == 3);
@@ -182,7 +182,7 @@ TEST_CASE("check") {
         addPart(board, "Q1", "bjt", "BC549", {{"C", h("A7")}, {"B", h("B7")}, {"E", h("C7")}});
         addPart(board, "C9", "capacitor", "100n", {{"1", h("A8")}, {"2", h("C8")}});
         board.parts[0].value = "1k2";
-        const CheckReport report = check(board);
+        const CheckReport report = test_support::checkWithFixes(board);
         REQUIRE(ofType(report.errors, "missing-part").size() == 1);
         CHECK(ofType(report.errors, "missing-part")[0]->ref == "R9");
         REQUIRE(ofType(report.errors, "extra-part").size() == 1);
@@ -214,7 +214,7 @@ TEST_CASE("check") {
         board.circuit = circuit;
         CHECK(check(board).ok());
         std::swap(board.parts[1].pins[0].hole, board.parts[1].pins[1].hole);
-        const CheckReport report = check(board);
+        const CheckReport report = test_support::checkWithFixes(board);
         const auto reversed = ofType(report.errors, "reversed-part");
         REQUIRE(reversed.size() == 1);
         CHECK(reversed[0]->ref == "D1");
@@ -234,7 +234,7 @@ TEST_CASE("check") {
         circuit.nets["BASE"] = {pin("Q1.B"), pin("R2.1"), pin("R2.2")};
         circuit.nets["EMIT"] = {pin("Q1.E"), pin("R3.1"), pin("R3.2")};
         board.circuit = circuit;
-        const CheckReport report = check(board);
+        const CheckReport report = test_support::checkWithFixes(board);
         const auto reversed = ofType(report.errors, "reversed-part");
         REQUIRE(reversed.size() == 1);
         CHECK(reversed[0]->ref == "Q1");
@@ -245,7 +245,7 @@ TEST_CASE("check") {
         addPart(board, "R1", "resistor", "1k", {{"1", h("B2")}, {"2", h("C2")}});
         addPart(board, "R2", "resistor", "1k", {{"1", h("C2")}, {"2", h("D5")}});
         board.cuts.push_back(Cut{h("D5"), Cut::Kind::Hole});
-        const CheckReport report = check(board);
+        const CheckReport report = test_support::checkWithFixes(board);
         CHECK_FALSE(report.hasCircuit);
         REQUIRE(ofType(report.errors, "shared-hole").size() == 1);
         CHECK(*ofType(report.errors, "shared-hole")[0]->hole == h("C2"));
@@ -276,7 +276,7 @@ TEST_CASE("check") {
         circuit.nets["W"] = {pin("R1.2"), pin("VR1.2"), pin("R2.1")};
         circuit.nets["GND"] = {pin("R2.2"), pin("VR1.1")};
         board.circuit = circuit;
-        const CheckReport report = check(board);
+        const CheckReport report = test_support::checkWithFixes(board);
         CHECK(report.ok());
         REQUIRE(ofType(report.warnings, "pot-reversed").size() == 1);
     }
@@ -289,7 +289,7 @@ TEST_CASE("check") {
         Board board = seriesPair();
         board.parts[1].pins[1].hole = Hole{2, 98};
         board.parts[0].pins[0].hole = Hole{-1, 1};
-        const CheckReport report = check(board);
+        const CheckReport report = test_support::checkWithFixes(board);
         CHECK(ofType(report.errors, "short").empty());
         CHECK(ofType(report.errors, "open").empty());
         CHECK(ofType(report.errors, "reversed-part").empty());
@@ -334,7 +334,7 @@ TEST_CASE("check") {
         for (int i = 0; i < 300; ++i) {
             Board board = test_support::randomBoard(rng);
             if (!board.circuit) continue;
-            const CheckReport before = check(board);
+            const CheckReport before = test_support::checkWithFixes(board);
             for (const Finding* finding : ofType(before.errors, "short")) {
                 if (!finding->suggestedCut) continue;
                 Board cut = board;

@@ -12,7 +12,8 @@
 #include <random>
 
 #include "netcheck/check/check.hpp"
-#include "netcheck/check/detail/finders.hpp"
+#include "netcheck/check/checked_board.hpp"
+#include "test_support.hpp"
 
 using namespace netcheck;
 
@@ -116,7 +117,7 @@ TEST_CASE("bare links") {
         Circuit circuit;
         for (const char* ref : {"TP1", "TP2", "TP3"}) circuit.parts[ref] = {"test-point", "", {}, {}};
         circuit.nets["N"] = {{"TP1", "1"}, {"TP2", "1"}};
-        const CheckReport report = check(board, &circuit);
+        const CheckReport report = test_support::checkWithFixes(board, &circuit);
         REQUIRE(report.errors.size() == 1);
         REQUIRE(report.errors[0].suggestedLinks.size() == 1);
         CHECK(report.errors[0].suggestedLinks[0].from == h("A3"));

@@ -80,7 +80,7 @@ TEST_CASE("samples") {
             REQUIRE(board.circuit);
             REQUIRE(board.extra.contains("expect"));
             const nlohmann::json& expect = board.extra["expect"];
-            const CheckReport report = check(board);
+            const CheckReport report = test_support::checkWithFixes(board);
             CHECK(report.ok() == (expect.at("exit").get<int>() == 0));
             checkFindings(report.errors, expect.at("errors"));
             if (expect.contains("warnings")) checkFindings(report.warnings, expect["warnings"]);

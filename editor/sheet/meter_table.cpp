@@ -1,14 +1,12 @@
 #include "meter_table.hpp"
 
-#include "netcheck/voltage/bench_voltages.hpp"
 #include "netcheck/voltage/voltage_report.hpp"
 #include "sheet_table.hpp"
 
 namespace sheet {
 
-void drawMeterTable(PageFlow& flow, const netcheck::Board& board) {
+void drawMeterTable(PageFlow& flow, const netcheck::BenchVoltagesResult& result) {
     drawHeading(flow, "What the meter should read (DC, black lead on ground)");
-    const netcheck::BenchVoltagesResult result = netcheck::computeBenchVoltages(board, nullptr, {});
     if (!result.value) {
         drawParagraph(flow, "No figures: " + result.error + ".");
         return;

@@ -2,13 +2,13 @@
 // range, with the cautions, after the wiring list.
 #pragma once
 
-#include "netcheck/model/board.hpp"
+#include "netcheck/voltage/bench_voltages.hpp"
 #include "page_flow.hpp"
 
 namespace sheet {
 
-/// Computes the bench voltages of the board's circuit (ngspice) and flows the table down the
-/// pages; a paragraph saying why when they cannot be computed.
-void drawMeterTable(PageFlow& flow, const netcheck::Board& board);
+/// Flows the table of the board's bench voltages (computed once per sheet: ngspice runs the
+/// tolerance analysis) down the pages; a paragraph saying why when they could not be computed.
+void drawMeterTable(PageFlow& flow, const netcheck::BenchVoltagesResult& result);
 
 }  // namespace sheet

@@ -17,6 +17,7 @@
 #include "check_banner.hpp"
 #include "netcheck/check/check.hpp"
 #include "netcheck/file/file_io.hpp"
+#include "netcheck/repair/finding_fixes.hpp"
 #include "page_flow.hpp"
 #include "page_layout.hpp"
 #include "page_map.hpp"
@@ -51,6 +52,7 @@ struct SheetData {
     SheetPlan plan;
     netcheck::CheckReport report;
     std::vector<netcheck::Cut> cuts;
+    netcheck::BenchVoltagesResult voltages;
     int pageCount = 0;
 };
 
@@ -132,7 +134,7 @@ int countListPages(SheetData& data) {
     prepareText(cr);
     cairo_scale(cr, kPointsPerMm, kPointsPerMm);
     PageFlow flow(cr, roomOnLastBoardPage(data.plan), listArea(data.plan), [] {});
-    drawLists(flow, data.board, data.report, data.cuts);
+    drawLists(flow, data.board, data.report, data.cuts, data.voltages);
     int pages = flow.pageCount();
     cairo_destroy(cr);
     cairo_surface_destroy(scrap);
@@ -197,7 +199,7 @@ void drawSheet(cairo_t* cr, Format format, SheetData& data) {
         drawListHeader(cr, data, next);
         ++next;
     });
-    drawLists(flow, data.board, data.report, data.cuts);
+    drawLists(flow, data.board, data.report, data.cuts, data.voltages);
 }
 
 std::string statusText(cairo_status_t status) {
@@ -223,7 +225,10 @@ std::optional<std::string> exportSheet(const Board& board, const SheetOptions& o
                 << " mm is outside " << limits.minPitchMm << " to " << limits.maxPitchMm << " mm";
         return message.str();
     }
-    SheetData data{board, planSheet(board, options), netcheck::check(board), numberedCuts(board)};
+    netcheck::CheckReport report = netcheck::check(board);
+    netcheck::suggestFixes(report, board);
+    SheetData data{board, planSheet(board, options), std::move(report), numberedCuts(board),
+                   netcheck::computeBenchVoltages(board, nullptr, {})};
     data.pageCount = data.plan.boardPageCount + countListPages(data);
     std::string bytes;
     cairo_surface_t* surface = createSurface(*format, bytes, data);

@@ -170,7 +170,7 @@ void drawWiringList(PageFlow& flow, const Board& board) {
 }  // namespace
 
 void drawLists(PageFlow& flow, const Board& board, const netcheck::CheckReport& report,
-               const std::vector<Cut>& cuts) {
+               const std::vector<Cut>& cuts, const netcheck::BenchVoltagesResult& voltages) {
     drawFindings(flow, report);
     drawBoardFacts(flow, board);
     drawAssembly(flow, board);
@@ -178,7 +178,7 @@ void drawLists(PageFlow& flow, const Board& board, const netcheck::CheckReport& 
     drawCutList(flow, board, cuts);
     drawLinkList(flow, board);
     drawWiringList(flow, board);
-    drawMeterTable(flow, board);
+    drawMeterTable(flow, voltages);
 }
 
 }  // namespace sheet

@@ -4,8 +4,8 @@
 #include <map>
 #include <set>
 
-#include "netcheck/check/detail/checked_board.hpp"
-#include "netcheck/check/detail/circuit_match.hpp"
+#include "netcheck/check/checked_board.hpp"
+#include "netcheck/check/circuit_match.hpp"
 
 namespace netcheck {
 

@@ -26,13 +26,10 @@
 //   says so, beside the shorts and opens the reversal causes.
 // - Pins of circuit parts that no net lists are don't-care.
 // - short: one error per island holding pins of two or more intended nets, nets sorted, with the
-//   shortest path between pins of the first net and another, and one cut that separates those
-//   two pins without splitting any net of the island (a hole cut in a free hole near the middle of
-//   the path preferred, else a cut between two holes), or "no single cut separates them".
-// - open: one error per net whose pins lie in two or more islands; pieces sorted; links through
-//   the nearest free holes, joining pieces Prim-style, found on the board with the shorts'
-//   suggested cuts applied; when removing one existing cut alone mends the net without a short
-//   (a cut made in the wrong hole), that is the fix instead.
+//   shortest path between pins of the first net and another.
+// - open: one error per net whose pins lie in two or more islands; pieces sorted.
+// - The fixes of shorts and opens (a cut, a cut to remove, links) are not the check's: they are
+//   found and verified by the repair code (repair/finding_fixes.hpp).
 // - shared-hole (two or more leads in one hole: part pins, link ends and wire ends all count) and
 //   pin-on-cut (a lead in a hole-cut hole) are errors with or without a circuit.
 // - Warnings: value-differs, pot-reversed, dangling-lead (an island with exactly one pin and no
@@ -49,8 +46,8 @@
 #include <algorithm>
 #include <map>
 
-#include "netcheck/check/detail/checked_board.hpp"
-#include "netcheck/check/detail/circuit_match.hpp"
+#include "netcheck/check/checked_board.hpp"
+#include "netcheck/check/circuit_match.hpp"
 #include "netcheck/check/detail/finders.hpp"
 
 namespace netcheck {
@@ -90,10 +87,8 @@ std::vector<Finding> findShorts(const CheckedBoard& checked, const std::vector<N
     return shorts;
 }
 
-// The opens, one per net whose pins lie in two or more islands, mended on the board as it would
-// be with every short's cut made.
-std::vector<Finding> findOpens(const CheckedBoard& checked, const std::vector<Net>& nets,
-                               const std::vector<Finding>& shorts, bool locate) {
+// The opens, one per net whose pins lie in two or more islands.
+std::vector<Finding> findOpens(const CheckedBoard& checked, const std::vector<Net>& nets, bool locate) {
     std::vector<const Net*> open;
     for (const Net& net : nets) {
         for (const NetPin& pin : net.pins) {
@@ -112,15 +107,8 @@ std::vector<Finding> findOpens(const CheckedBoard& checked, const std::vector<Ne
         }
         return named;
     }
-    Board repaired = copperOnly(checked.board());
-    for (const Finding& finding : shorts) {
-        if (finding.suggestedCut) repaired.cuts.push_back(*finding.suggestedCut);
-    }
-    const Connectivity repairedCopper(repaired);
     std::vector<Finding> opens;
-    for (const Net* net : open) {
-        opens.push_back(locateOpen(checked, *net, RepairedBoard{&repaired, &repairedCopper, &nets}));
-    }
+    for (const Net* net : open) opens.push_back(locateOpen(checked, *net));
     return opens;
 }
 
@@ -167,7 +155,7 @@ CheckReport checkBoard(const CheckedBoard& checked, const Circuit* circuit, cons
         report.warnings = std::move(match.warnings);
         const std::vector<Finding> shorts =
             findShorts(checked, match.nets, meantToJoin, options.locateFaults);
-        const std::vector<Finding> opens = findOpens(checked, match.nets, shorts, options.locateFaults);
+        const std::vector<Finding> opens = findOpens(checked, match.nets, options.locateFaults);
         report.errors.insert(report.errors.end(), shorts.begin(), shorts.end());
         report.errors.insert(report.errors.end(), opens.begin(), opens.end());
     }

@@ -1,4 +1,4 @@
-#include "netcheck/check/detail/checked_board.hpp"
+#include "netcheck/check/checked_board.hpp"
 
 #include <algorithm>
 

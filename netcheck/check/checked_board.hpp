@@ -1,5 +1,5 @@
 // What every step of one check shares: the board, its traced copper, the leads soldered into its
-// holes, and how nodes and leads are named in messages (private to the checker).
+// holes, and how nodes and leads are named in messages. The repair code finds fixes on it too.
 #pragma once
 
 #include <string>
@@ -63,5 +63,13 @@ private:
     std::vector<Lead> leads_;
     std::vector<int> leadsInHole_;
 };
+
+/// A lead touches a bare link when their centres come this close: a 0.6 mm tinned link wire and a
+/// 0.6 mm lead (typical of small parts; common practice, not a standard) meet at 0.6 mm.
+inline constexpr double kLinkContactMm = 0.6;
+
+/// Whether a new bare link would lie clear of every lead and every bare link of the board, so
+/// that a suggested fix does not make a contact of its own.
+bool liesClear(const CheckedBoard& checked, const Link& link);
 
 }  // namespace netcheck

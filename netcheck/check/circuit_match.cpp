@@ -1,8 +1,9 @@
 // Matching parts by reference designator. The board's parts are found through one hash map of
 // refs, so the work grows with the number of pins, not with pins times parts.
-#include "netcheck/check/detail/circuit_match.hpp"
+#include "netcheck/check/circuit_match.hpp"
 
 #include <algorithm>
+#include <map>
 #include <unordered_map>
 
 #include "netcheck/model/part_kinds.hpp"
@@ -274,6 +275,26 @@ void placeNets(CircuitMatch& match) {
 }
 
 }  // namespace
+
+std::vector<NetPiece> netPieces(const CheckedBoard& checked, const Net& net) {
+    std::map<int, NetPiece> byIsland;
+    for (const NetPin& pin : net.pins) {
+        const int island = checked.copper().islandOfNode(pin.node);
+        NetPiece& piece = byIsland[island];
+        piece.island = island;
+        piece.pins.push_back(&pin);
+    }
+    std::vector<NetPiece> pieces;
+    for (auto& [island, piece] : byIsland) {
+        std::sort(piece.pins.begin(), piece.pins.end(),
+                  [](const NetPin* a, const NetPin* b) { return *a < *b; });
+        pieces.push_back(std::move(piece));
+    }
+    std::sort(pieces.begin(), pieces.end(), [](const NetPiece& a, const NetPiece& b) {
+        return *a.pins.front() < *b.pins.front();
+    });
+    return pieces;
+}
 
 CircuitMatch matchCircuit(const CheckedBoard& checked, const Circuit& circuit) {
     CircuitMatch match = Matcher(checked, circuit).run();

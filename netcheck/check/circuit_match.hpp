@@ -1,5 +1,5 @@
-// Matching the board's parts to the intended circuit by reference designator (private to the
-// checker; the board-versus-circuit view reads it through board_vs_circuit.hpp).
+// Matching the board's parts to the intended circuit by reference designator: the check, the
+// board-versus-circuit view (board_vs_circuit.hpp) and the repair code all read this one match.
 #pragma once
 
 #include <span>
@@ -8,7 +8,7 @@
 #include <vector>
 
 #include "netcheck/check/check_report.hpp"
-#include "netcheck/check/detail/checked_board.hpp"
+#include "netcheck/check/checked_board.hpp"
 #include "netcheck/model/circuit.hpp"
 
 namespace netcheck {
@@ -81,6 +81,15 @@ struct CircuitMatch {
     CircuitMatch(const CircuitMatch&) = delete;
     CircuitMatch& operator=(const CircuitMatch&) = delete;
 };
+
+/// The pins of a net that lie in one island.
+struct NetPiece {
+    int island = 0;
+    std::vector<const NetPin*> pins;  ///< sorted by pin name
+};
+
+/// The net's pins grouped by island, pieces in the order of their first pin.
+std::vector<NetPiece> netPieces(const CheckedBoard& checked, const Net& net);
 
 /// Matches the board's parts and pins to `circuit`, orients the parts that may sit either way
 /// round, and reports what differs part by part.

@@ -14,6 +14,7 @@
 #include "netcheck/edit/link_commands.hpp"
 #include "netcheck/repair/detail/board_health.hpp"
 #include "netcheck/repair/detail/candidates.hpp"
+#include "netcheck/repair/finding_fixes.hpp"
 
 namespace netcheck {
 
@@ -76,7 +77,8 @@ private:
     // Every candidate edit after `trial` that obeys the rule and clears an error.
     void extend(const Trial& trial, std::vector<Trial>& next) {
         Board board = withSteps(board_, trial.steps);
-        const CheckReport report = check(board, circuit_);
+        CheckReport report = check(board, circuit_);
+        suggestFixes(report, board, circuit_);
         const BoardHealth health(report);
         for (RepairStep& step : candidateSteps(board, report)) {
             if (checks_ >= limits_.maxChecks) return;
@@ -180,7 +182,8 @@ RepairPlan planRepair(const Board& board, const Circuit* circuit, const RepairLi
 }
 
 void attachPlan(CheckReport& report, const RepairPlan& plan, const Board& board, const Circuit* circuit) {
-    if (!plan.skipped.empty()) return;  // fixes stay as the check gave them, unverified
+    suggestFixes(report, board, circuit);
+    if (!plan.skipped.empty()) return;  // the findings' own fixes stay, unverified
     for (std::size_t k = 0; k < plan.steps.size(); ++k) {
         for (int i : plan.steps[k].clears) {
             if (i < 0 || static_cast<std::size_t>(i) >= report.errors.size()) continue;

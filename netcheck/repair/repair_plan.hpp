@@ -56,8 +56,9 @@ struct RepairPlan {
 RepairPlan planRepair(const Board& board, const Circuit* circuit = nullptr,
                       const RepairLimits& limits = {});
 
-/// Marks in `report` (the check of `board`) each error a step clears, withdraws the own fix of
-/// those knock-on errors, and withdraws every other suggested fix that breaks the rule above.
+/// Gives each short and open of `report` (the check of `board`) its own fix (suggestFixes), marks
+/// each error a step clears, withdraws the own fix of those knock-on errors, and withdraws every
+/// other suggested fix that breaks the rule above.
 void attachPlan(CheckReport& report, const RepairPlan& plan, const Board& board,
                 const Circuit* circuit = nullptr);
 

@@ -18,10 +18,6 @@ bool isBare(const Board& board, const Link& link) {
            board.contains(link.to);
 }
 
-bool isDiagonal(const Link& link) {
-    return link.from.row != link.to.row && link.from.col != link.to.col;
-}
-
 // Twice the signed area of the triangle a, b, p: zero when p lies on the line through a and b.
 std::int64_t cross(Hole a, Hole b, Hole p) {
     return std::int64_t{b.col - a.col} * (p.row - a.row) -
@@ -103,28 +99,16 @@ constexpr long kPassesPerHole = 4;
 constexpr long kPassesFloor = 4096;
 constexpr std::size_t kMaxPairs = std::size_t{1} << 22;
 
-// Pairs of links that may cross, each pair once, first < second. Without diagonal links every
-// crossing is on a hole both wires pass over; with them, wires are listed by the cells of the
-// hole grid they pass through (a one-cell margin on each side), and two crossing wires share a
-// cell. `twice`: the holes (indices, sorted) that two or more of the wires pass over. `complete`
-// is cleared when the pairs pass kMaxPairs (those found so far are returned).
-std::vector<std::pair<int, int>> crossingCandidates(const Board& board,
-                                                    const std::vector<int>& bare, bool anyDiagonal,
-                                                    const std::vector<int>& twice, double reach,
+// Pairs of links that may cross, each pair once, first < second: wires are listed by the cells of
+// the hole grid they pass through (a one-cell margin on each side), and two crossing wires share a
+// cell. `complete` is cleared when the pairs pass kMaxPairs (those found so far are returned).
+std::vector<std::pair<int, int>> crossingCandidates(const Board& board, const std::vector<int>& bare,
                                                     bool& complete) {
-    std::vector<std::pair<std::int64_t, int>> marks;  // (place, link)
+    std::vector<std::pair<std::int64_t, int>> marks;  // (cell, link)
     const std::int64_t width = std::int64_t{board.cols} + 2;
     auto cellKey = [&](std::int64_t row, std::int64_t col) { return (row + 1) * width + col + 1; };
     for (int l : bare) {
         const Link& link = board.links[static_cast<std::size_t>(l)];
-        if (!anyDiagonal) {
-            forEachHoleUnder(link, reach, [&](Hole h) {
-                const int index = h.row * board.cols + h.col;
-                if (std::binary_search(twice.begin(), twice.end(), index))
-                    marks.emplace_back(index, l);
-            });
-            continue;
-        }
         const bool alongCols =
             std::abs(link.to.col - link.from.col) >= std::abs(link.to.row - link.from.row);
         const Hole a = alongCols ? link.from : Hole{link.from.col, link.from.row};
@@ -199,27 +183,19 @@ Finding linkFinding(FindingType type, std::string message, std::vector<Hole> hol
     return finding;
 }
 
-// link-over-lead warnings, in link order. One walk along each wire finds the leads under it and
-// the holes two wires pass over (returned sorted, for findCrossings). Most links join
-// neighbouring holes and pass over nothing.
-std::vector<int> findLinksOverLeads(const CheckedBoard& checked, const std::vector<int>& bare,
+// link-over-lead warnings, in link order. Most links join neighbouring holes and pass over nothing.
+void findLinksOverLeads(const CheckedBoard& checked, const std::vector<int>& bare,
                                     double reach, std::vector<Finding>& warnings) {
     const Board& board = checked.board();
     std::vector<std::pair<int, std::vector<Hole>>> crossed;  // (link, holes with leads under it)
     std::vector<Hole> named;
-    std::vector<int> twice;
-    std::vector<char> passed;
     for (int l : bare) {
         const Link& link = board.links[static_cast<std::size_t>(l)];
         if (std::abs(link.to.row - link.from.row) < 2 && std::abs(link.to.col - link.from.col) < 2)
             continue;
-        passed.resize(static_cast<std::size_t>(board.holeCount()), 0);
         std::vector<Hole> under;
         forEachHoleUnder(link, reach, [&](Hole h) {
-            const int index = checked.holeIndex(h);
-            if (checked.holdsLead(index)) under.push_back(h);
-            if (passed[static_cast<std::size_t>(index)]) twice.push_back(index);
-            passed[static_cast<std::size_t>(index)] = 1;
+            if (checked.holdsLead(checked.holeIndex(h))) under.push_back(h);
         });
         if (under.empty()) continue;
         std::sort(under.begin(), under.end());
@@ -240,17 +216,12 @@ std::vector<int> findLinksOverLeads(const CheckedBoard& checked, const std::vect
         warnings.push_back(linkFinding(FindingType::LinkOverLead, std::move(message), std::move(holes)));
         warnings.back().fix = "sleeve the link or route it round";
     }
-    std::sort(twice.begin(), twice.end());
-    twice.erase(std::unique(twice.begin(), twice.end()), twice.end());
-    return twice;
 }
 
 // links-touch warnings, in link order (and links-unchecked past kMaxPairs).
-void findCrossings(const Board& board, const std::vector<int>& bare, bool anyDiagonal,
-                   const std::vector<int>& twice, double reach, std::vector<Finding>& warnings) {
+void findCrossings(const Board& board, const std::vector<int>& bare, std::vector<Finding>& warnings) {
     bool complete = true;
-    for (const auto& [i, j] :
-         crossingCandidates(board, bare, anyDiagonal, twice, reach, complete)) {
+    for (const auto& [i, j] : crossingCandidates(board, bare, complete)) {
         const Link& first = board.links[static_cast<std::size_t>(i)];
         const Link& second = board.links[static_cast<std::size_t>(j)];
         if (!crossInside(first, second)) continue;
@@ -287,7 +258,6 @@ void findBareLinkContacts(const CheckedBoard& checked, std::vector<Finding>& war
     std::vector<int> bare;
     bare.reserve(board.links.size());
     long passes = 0;  // holes passed over, by all the bare links together
-    bool anyDiagonal = false;
     for (std::size_t l = 0; l < board.links.size(); ++l) {
         const Link& link = board.links[l];
         if (!isBare(board, link)) continue;
@@ -295,7 +265,6 @@ void findBareLinkContacts(const CheckedBoard& checked, std::vector<Finding>& war
         passes +=
             std::max(std::abs(link.to.row - link.from.row), std::abs(link.to.col - link.from.col)) -
             1;
-        anyDiagonal = anyDiagonal || isDiagonal(link);
     }
     if (passes > kPassesPerHole * board.holeCount() + kPassesFloor) {
         warnings.push_back(linkFinding(
@@ -306,10 +275,8 @@ void findBareLinkContacts(const CheckedBoard& checked, std::vector<Finding>& war
             {}));
         return;
     }
-    const std::vector<int> twice = findLinksOverLeads(checked, bare, reach, warnings);
-    // Axis-parallel wires can only cross on a hole both pass over.
-    if (anyDiagonal || !twice.empty())
-        findCrossings(board, bare, anyDiagonal, twice, reach, warnings);
+    findLinksOverLeads(checked, bare, reach, warnings);
+    findCrossings(board, bare, warnings);
 }
 
 }  // namespace netcheck

@@ -6,7 +6,7 @@
 #include <cstdint>
 #include <map>
 
-#include "netcheck/check/detail/circuit_match.hpp"
+#include "netcheck/check/circuit_match.hpp"
 #include "netcheck/model/part_kinds.hpp"
 
 namespace netcheck {

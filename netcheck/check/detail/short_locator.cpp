@@ -1,7 +1,6 @@
 // Short location. The path is a breadth-first search over the island (strip neighbours joined by
 // copper, links and wires), from every pin of the first net to the nearest pin of another net.
-// Cut candidates lie on the path's strip runs; each is tried on a copy of the board and kept only
-// when the two pins fall apart and no net of the island is split.
+// The cut that mends it is found by the repair code (repair/finding_fixes.cpp), along this path.
 #include "netcheck/check/detail/finders.hpp"
 
 #include <algorithm>
@@ -13,8 +12,6 @@
 namespace netcheck {
 
 namespace {
-
-constexpr std::size_t kMaxCutTrials = 48;
 
 struct PinAt {
     const NetPin* pin = nullptr;
@@ -88,89 +85,6 @@ std::vector<int> shortestPath(const IslandGraph& graph,
     return {};
 }
 
-// True when the board already has a cut of the same kind in the same column on a neighbouring
-// strip: makers like cuts in a line (one pass of the cutter, easy to check by eye).
-bool inLineWithACut(const Board& board, const Cut& cut) {
-    for (const Cut& other : board.cuts) {
-        if (other.kind == cut.kind && other.hole.col == cut.hole.col &&
-            std::abs(other.hole.row - cut.hole.row) == 1) {
-            return true;
-        }
-    }
-    return false;
-}
-
-// Candidate cuts along the path's strip runs: hole cuts in free holes first (a spot-face cutter in
-// a free hole is the usual practice), then cuts between holes; within each, cuts in line with an
-// existing cut first, then nearest the middle of the path.
-std::vector<Cut> cutCandidates(const CheckedBoard& checked, const std::vector<int>& path) {
-    std::vector<std::pair<int, Cut>> holeCuts;
-    std::vector<std::pair<int, Cut>> betweenCuts;
-    const int middle = static_cast<int>(path.size()) - 1;  // twice the middle index
-    auto rank = [&](const Cut& cut, int distance) {
-        return (inLineWithACut(checked.board(), cut) ? 0 : 1 << 24) + distance;
-    };
-    std::set<int> holeCutSeen;
-    for (std::size_t i = 0; i + 1 < path.size(); ++i) {
-        const int a = path[i];
-        const int b = path[i + 1];
-        if (!checked.isHoleNode(a) || !checked.isHoleNode(b) || std::abs(a - b) != 1) continue;
-        const Hole left = checked.holeAt(std::min(a, b));
-        if (checked.holeAt(std::max(a, b)).row != left.row) continue;
-        const Cut between{left, Cut::Kind::Between};
-        betweenCuts.push_back(
-            {rank(between, std::abs(static_cast<int>(2 * i + 1) - middle)), between});
-        for (std::size_t j : {i, i + 1}) {
-            if (checked.isFree(path[j]) && holeCutSeen.insert(path[j]).second) {
-                const Cut holeCut{checked.holeAt(path[j]), Cut::Kind::Hole};
-                holeCuts.push_back(
-                    {rank(holeCut, std::abs(static_cast<int>(2 * j) - middle)), holeCut});
-            }
-        }
-    }
-    auto better = [](const auto& x, const auto& y) { return x.first < y.first; };
-    std::stable_sort(holeCuts.begin(), holeCuts.end(), better);
-    std::stable_sort(betweenCuts.begin(), betweenCuts.end(), better);
-    std::vector<Cut> cuts;
-    for (const auto& entry : holeCuts) cuts.push_back(entry.second);
-    for (const auto& entry : betweenCuts) cuts.push_back(entry.second);
-    return cuts;
-}
-
-// True when, after `cut`, the two ends fall apart and every net keeps its island's pins together.
-bool separatesCleanly(const Board& trial, int start, int end,
-                      const std::vector<const Net*>& nets,
-                      const std::unordered_map<int, std::vector<PinAt>>& pinsAt) {
-    const Connectivity copper(trial);
-    if (copper.islandOfNode(start) == copper.islandOfNode(end)) return false;
-    std::vector<int> islandOfNet(nets.size(), -1);
-    for (const auto& [node, pins] : pinsAt) {
-        for (const PinAt& pin : pins) {
-            int& island = islandOfNet[static_cast<std::size_t>(pin.net)];
-            const int now = copper.islandOfNode(node);
-            if (island >= 0 && island != now) return false;
-            island = now;
-        }
-    }
-    return true;
-}
-
-std::optional<Cut> suggestCut(const CheckedBoard& checked, const std::vector<int>& path, int start,
-                              int end, const std::vector<const Net*>& nets,
-                              const std::unordered_map<int, std::vector<PinAt>>& pinsAt) {
-    std::vector<Cut> candidates = cutCandidates(checked, path);
-    if (candidates.size() > kMaxCutTrials) candidates.resize(kMaxCutTrials);
-    if (candidates.empty()) return std::nullopt;
-    Board trial = copperOnly(checked.board());
-    for (const Cut& cut : candidates) {
-        trial.cuts.push_back(cut);
-        const bool good = separatesCleanly(trial, start, end, nets, pinsAt);
-        trial.cuts.pop_back();
-        if (good) return cut;
-    }
-    return std::nullopt;
-}
-
 std::string pinText(const CheckedBoard& checked, const PinAt& pin) {
     const std::string name = pin.pin->name();
     return checked.isHoleNode(pin.pin->node) ? name + " (" + checked.nodeName(pin.pin->node) + ")"
@@ -200,12 +114,6 @@ std::string routeText(const CheckedBoard& checked, const std::vector<int>& path)
     if (rows.size() == 1 && !jumps) return "strip " + strips + " joins ";
     return std::string(rows.size() == 1 ? "strip " : "strips ") + strips +
            (jumps ? " with links or wires" : "") + " join ";
-}
-
-std::string cutFix(const Cut& cut) {
-    if (cut.kind == Cut::Kind::Hole) return "cut at " + holeName(cut.hole);
-    return "cut between " + holeName(cut.hole) + " and " +
-           holeName(Hole{cut.hole.row, cut.hole.col + 1});
 }
 
 }  // namespace
@@ -242,9 +150,6 @@ Finding locateShort(const CheckedBoard& checked, int island,
     const PinAt& to = pinOfNet(pinsAt.at(end), false);
     finding.message = names + ": " + (start == end ? "one hole holds " : routeText(checked, path)) +
                       pinText(checked, from) + " and " + pinText(checked, to);
-    finding.suggestedCut = suggestCut(checked, path, start, end, nets, pinsAt);
-    finding.fix = finding.suggestedCut ? cutFix(*finding.suggestedCut)
-                                       : std::string("no single cut separates them");
     return finding;
 }
 
