@@ -42,12 +42,12 @@ public:
     /// `firstDx`, `firstDy`: the first choice's centre from the anchor, as seen on screen, in
     /// pitches (the copper side turns right into left).
     void add(CanvasLabel::Kind kind, std::string text, float sizePx, Point anchor, double firstDx,
-             double firstDy) {
+             double firstDy, int owner) {
         const ImVec2 px = measure_(text, sizePx);
         const double w = (px.x + 2 * kLabelPadPx) / view_.holePx;
         const double h = px.y / view_.holePx;
         const double dx = view_.mirrored ? -firstDx : firstDx;
-        requests.push_back({anchor.x, anchor.y, anchor.x + dx, anchor.y + firstDy, w, h});
+        requests.push_back({anchor.x, anchor.y, anchor.x + dx, anchor.y + firstDy, w, h, owner});
         CanvasLabel label;
         label.kind = kind;
         label.text = std::move(text);
@@ -72,18 +72,18 @@ private:
 };
 
 /// The reference (and a chip's value) above the body, or on a dark body (chips, transistors).
-void addPartName(Gatherer& g, const Part& part, float size) {
+void addPartName(Gatherer& g, const Part& part, int owner, float size) {
     const BodyStyle style = bodyStyleOf(part);
     const bool dark = style == BodyStyle::Dip || style == BodyStyle::ToPackage;
     std::string text = part.ref;
     if (style == BodyStyle::Dip && !part.value.empty()) text += " " + part.value;
     g.add(CanvasLabel::Kind::PartName, std::move(text), size, pinCentroid(part), 0,
-          dark ? 0.0 : -0.65);
+          dark ? 0.0 : -0.65, owner);
 }
 
 /// "+" and "-" (or "A" and "K" on an LED) up and to the right of the leads of a polarised
 /// round body.
-void addPolarity(Gatherer& g, const Part& part, float size, double holePx) {
+void addPolarity(Gatherer& g, const Part& part, int owner, float size, double holePx) {
     const BodyStyle style = bodyStyleOf(part);
     if (part.pins.size() != 2 || (style != BodyStyle::Electrolytic && style != BodyStyle::Led))
         return;
@@ -96,16 +96,16 @@ void addPolarity(Gatherer& g, const Part& part, float size, double holePx) {
     for (auto [hole, text] : {std::pair{plus, led ? "A" : "+"}, std::pair{minus, led ? "K" : "-"}}) {
         const double w = g.width(text, size), h = g.height(text, size);
         g.add(CanvasLabel::Kind::Polarity, text, size, centreOf(hole), 0.3 * em + w / 2,
-              -1.1 * em + h / 2);
+              -1.1 * em + h / 2, owner);
     }
 }
 
 /// Each pin's name up and to the right of its pin.
-void addPinNames(Gatherer& g, const Part& part, float size) {
+void addPinNames(Gatherer& g, const Part& part, int owner, float size) {
     for (const netcheck::Pin& pin : part.pins) {
         const double w = g.width(pin.name, size), h = g.height(pin.name, size);
         g.add(CanvasLabel::Kind::PinName, pin.name, size, centreOf(pin.hole), 0.22 + w / 2,
-              -h / 2 - 0.1);
+              -h / 2 - 0.1, owner);
     }
 }
 
@@ -128,16 +128,19 @@ std::vector<CanvasLabel> canvasLabels(const netcheck::Board& board, const Canvas
         const Part& part = board.parts[i];
         const bool byZoom = view.holePx >= 36.0f && bodyStyleOf(part) == BodyStyle::ToPackage;
         if ((view.hoveredPart && *view.hoveredPart == i) || byZoom)
-            addPinNames(g, part, pinSize);
+            addPinNames(g, part, static_cast<int>(i), pinSize);
     }
     if (view.bodies && nameSize > 0) {
+        const int parts = static_cast<int>(board.parts.size());
         if (detailed)
-            for (const Part& part : board.parts)
-                if (!part.pins.empty()) addPartName(g, part, nameSize);
-        for (const Part& part : board.parts) addPolarity(g, part, nameSize, view.holePx);
+            for (int i = 0; i < parts; ++i)
+                if (!board.parts[i].pins.empty()) addPartName(g, board.parts[i], i, nameSize);
+        for (int i = 0; i < parts; ++i) addPolarity(g, board.parts[i], i, nameSize, view.holePx);
     }
-    const auto placements =
-        labels::placeLabels(g.requests, labels::boardObstacles(board), labels::boardArea(board));
+    // Off other parts' bodies where the bodies are drawn.
+    const std::vector<labels::Body> bodies = view.bodies ? labels::partBodies(board) : std::vector<labels::Body>{};
+    const auto placements = labels::placeLabels(g.requests, labels::boardObstacles(board),
+                                                labels::boardArea(board), bodies);
     for (std::size_t i = 0; i < g.found.size(); ++i) g.found[i].placement = placements[i];
     return std::move(g.found);
 }

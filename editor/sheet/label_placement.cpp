@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <optional>
 
 namespace labels {
 
@@ -17,6 +18,8 @@ constexpr double kHoleCutHalf = 0.5;
 // A cut between holes: a bar across the strip.
 constexpr double kBetweenCutHalfWidth = 0.12;
 constexpr double kBetweenCutHalfHeight = 0.46;
+// A body's reach beyond the box round its pins.
+constexpr double kBodySpare = 0.35;
 // Gap between an anchor and a label beside it: clears a pin's square.
 constexpr double kBeside = 0.3;
 // The search for a free place with a leader: steps and reach, in pitches.
@@ -25,13 +28,25 @@ constexpr int kSearchSteps = 32;  // up to 8 pitches each way
 // Shared edges are not overlaps: rounding must not turn touching boxes into overlapping ones.
 constexpr double kTouch = 1e-9;
 
-bool isFree(const Box& box, const std::vector<Box>& obstacles, const std::vector<Box>& placed,
-            const Box& area) {
-    if (!area.contains(box)) return false;
-    auto hits = [&](const Box& other) { return box.overlaps(other); };
-    return std::none_of(obstacles.begin(), obstacles.end(), hits) &&
-           std::none_of(placed.begin(), placed.end(), hits);
-}
+/// What a place must keep clear of.
+struct Clearance {
+    const std::vector<Box>& obstacles;
+    const std::vector<Box>& placed;
+    const Box& area;
+    const std::vector<Body>* bodies;  ///< others' bodies too, or null
+    int owner;
+
+    bool allows(const Box& box) const {
+        if (!area.contains(box)) return false;
+        auto hits = [&](const Box& other) { return box.overlaps(other); };
+        if (std::any_of(obstacles.begin(), obstacles.end(), hits)) return false;
+        if (std::any_of(placed.begin(), placed.end(), hits)) return false;
+        if (!bodies) return true;
+        return std::none_of(bodies->begin(), bodies->end(), [&](const Body& body) {
+            return body.owner != owner && box.overlaps(body.box);
+        });
+    }
+};
 
 /// The first choice, then beside the anchor: above, below, right, left, then the corners.
 std::vector<Box> candidates(const Label& label) {
@@ -66,17 +81,31 @@ std::vector<std::pair<double, double>> searchOffsets() {
     return offsets;
 }
 
-Placement place(const Label& label, const std::vector<Box>& obstacles,
-                const std::vector<Box>& placed, const Box& area,
-                const std::vector<std::pair<double, double>>& offsets) {
-    const std::vector<Box> tries = candidates(label);
-    for (const Box& box : tries)
-        if (isFree(box, obstacles, placed, area)) return {box, false, true};
+// Leaders kept short while a place off other parts' bodies is sought.
+constexpr double kNearReach = 2.5;
+
+std::optional<Placement> firstFree(const Label& label, const Clearance& clear,
+                                   const std::vector<std::pair<double, double>>& offsets,
+                                   double reach) {
+    for (const Box& box : candidates(label))
+        if (clear.allows(box)) return Placement{box, false, true};
     for (auto [dx, dy] : offsets) {
+        if (std::hypot(dx, dy) > reach) break;  // offsets come nearest first
         const Box box = boxAround(label.anchorX + dx, label.anchorY + dy, label.width, label.height);
-        if (isFree(box, obstacles, placed, area)) return {box, true, true};
+        if (clear.allows(box)) return Placement{box, true, true};
     }
-    return {tries.front(), false, false};
+    return std::nullopt;
+}
+
+Placement place(const Label& label, const std::vector<Box>& obstacles,
+                const std::vector<Box>& placed, const Box& area, const std::vector<Body>& bodies,
+                const std::vector<std::pair<double, double>>& offsets) {
+    const Clearance offBodies{obstacles, placed, area, &bodies, label.owner};
+    if (auto found = firstFree(label, offBodies, offsets, kNearReach)) return *found;
+    const Clearance overBodies{obstacles, placed, area, nullptr, label.owner};
+    if (auto found = firstFree(label, overBodies, offsets, kSearchStep * kSearchSteps * 2))
+        return *found;
+    return {candidates(label).front(), false, false};
 }
 
 }  // namespace
@@ -96,12 +125,13 @@ Box boxAround(double x, double y, double w, double h) {
 }
 
 std::vector<Placement> placeLabels(const std::vector<Label>& labels,
-                                   const std::vector<Box>& obstacles, const Box& area) {
+                                   const std::vector<Box>& obstacles, const Box& area,
+                                   const std::vector<Body>& bodies) {
     static const std::vector<std::pair<double, double>> offsets = searchOffsets();
     std::vector<Placement> placements;
     std::vector<Box> placed;
     for (const Label& label : labels) {
-        placements.push_back(place(label, obstacles, placed, area, offsets));
+        placements.push_back(place(label, obstacles, placed, area, bodies, offsets));
         placed.push_back(placements.back().box);
     }
     return placements;
@@ -131,6 +161,23 @@ std::vector<Box> boardObstacles(const netcheck::Board& board) {
         }
     }
     return boxes;
+}
+
+std::vector<Body> partBodies(const netcheck::Board& board) {
+    std::vector<Body> bodies;
+    for (std::size_t i = 0; i < board.parts.size(); ++i) {
+        const auto& pins = board.parts[i].pins;
+        if (pins.empty()) continue;
+        Box box{1e18, 1e18, -1e18, -1e18};
+        for (const auto& pin : pins) {
+            box.x0 = std::min(box.x0, pin.hole.col + 0.5), box.x1 = std::max(box.x1, pin.hole.col + 0.5);
+            box.y0 = std::min(box.y0, pin.hole.row + 0.5), box.y1 = std::max(box.y1, pin.hole.row + 0.5);
+        }
+        bodies.push_back({{box.x0 - kBodySpare, box.y0 - kBodySpare, box.x1 + kBodySpare,
+                           box.y1 + kBodySpare},
+                          static_cast<int>(i)});
+    }
+    return bodies;
 }
 
 Box boardArea(const netcheck::Board& board) {

@@ -33,6 +33,14 @@ struct Label {
     double anchorX = 0, anchorY = 0;  ///< what the label belongs to (a pin, a part's middle)
     double firstX = 0, firstY = 0;    ///< centre of the first choice (the drawing's usual place)
     double width = 0, height = 0;     ///< the text's box, padding included
+    int owner = -1;                   ///< the part it names (index into board.parts), or -1
+};
+
+/// A part's body: a label keeps off the bodies of other parts than its own where it can (over a
+/// neighbour it would seem to name the neighbour), but covers one rather than a pin.
+struct Body {
+    Box box;
+    int owner = -1;  ///< index into board.parts
 };
 
 /// Where a label went. With `leader` the label sits away from its anchor and the drawing joins
@@ -45,11 +53,17 @@ struct Placement {
 
 /// Places labels in order (an earlier label keeps its place whatever comes after it). Each
 /// tries its first choice, then eight places around its anchor (above, below, right, left, then
-/// the corners), and takes the first that lies inside `area` and overlaps no obstacle and no
-/// label placed before it; failing all, the free place nearest its anchor within a few pitches,
-/// with a leader; failing that too, its first choice. Deterministic.
+/// the corners), and takes the first that lies inside `area` and overlaps no obstacle, no label
+/// placed before it and no body of another part; failing that, the nearest such place within a
+/// few pitches, with a leader; failing that, the same two searches letting it cover other
+/// bodies (the second reaching further); failing all, its first choice. Deterministic.
 std::vector<Placement> placeLabels(const std::vector<Label>& labels,
-                                   const std::vector<Box>& obstacles, const Box& area);
+                                   const std::vector<Box>& obstacles, const Box& area,
+                                   const std::vector<Body>& bodies = {});
+
+/// Each part's body, roughly: the box round its pins with a third of a pitch to spare (a lying
+/// part's body between its leads, a standing one over a lead, a chip between its rows).
+std::vector<Body> partBodies(const netcheck::Board& board);
 
 /// What labels must not cover on a board: every pin, every hole a link or wire ends in, every
 /// cut mark.

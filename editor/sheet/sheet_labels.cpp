@@ -31,11 +31,13 @@ class LabelList {
 public:
     LabelList(cairo_t* cr, double pitchMm) : cr_(cr), pitch_(pitchMm) {}
 
+    /// `owner`: the part the label names (its body may be covered), or -1.
     void add(std::string text, double fontMm, Rgb ink, double anchorX, double anchorY,
-             double firstX, double firstY) {
+             double firstX, double firstY, int owner = -1) {
         setFont(cr_, fontMm, Weight::Bold);
         const LabelSize size = labelSize(cr_, text);
-        requests_.push_back({anchorX, anchorY, firstX, firstY, size.w / pitch_, size.h / pitch_});
+        requests_.push_back(
+            {anchorX, anchorY, firstX, firstY, size.w / pitch_, size.h / pitch_, owner});
         SheetLabel label;
         label.text = std::move(text);
         label.fontMm = fontMm;
@@ -49,9 +51,11 @@ public:
         setFont(cr_, fontMm, Weight::Bold);
         return labelSize(cr_, text).w / pitch_;
     }
-    std::vector<SheetLabel> place(const netcheck::Board& board) {
-        const auto placements =
-            labels::placeLabels(requests_, labels::boardObstacles(board), printableArea(board));
+    /// `bodies`: the parts' bodies when the side shows them.
+    std::vector<SheetLabel> place(const netcheck::Board& board,
+                                  const std::vector<labels::Body>& bodies) {
+        const auto placements = labels::placeLabels(requests_, labels::boardObstacles(board),
+                                                    printableArea(board), bodies);
         for (std::size_t i = 0; i < labels_.size(); ++i) labels_[i].placement = placements[i];
         return std::move(labels_);
     }
@@ -69,19 +73,19 @@ std::string partLabel(const Part& part) {
 
 /// Where a part's name goes first: on the body (between the leads, over the standing body, in
 /// the middle of a many-lead box), above a one-lead part.
-void addPartLabel(LabelList& list, const Part& part) {
+void addPartLabel(LabelList& list, const Part& part, int owner) {
     if (part.pins.empty()) return;
     const Hole a = part.pins.front().hole;
     double x = centreX(a), y = centreY(a);
     if (part.pins.size() == 1) {
-        list.add(partLabel(part), kTinyMm, kInk, x, y, x, y - 0.7);
+        list.add(partLabel(part), kTinyMm, kInk, x, y, x, y - 0.7, owner);
         return;
     }
     if (part.pins.size() == 2) {
         const Hole b = part.pins[1].hole;
         const bool standing = std::hypot(b.col - a.col, b.row - a.row) < 1.5;
         if (!standing) x = (centreX(a) + centreX(b)) / 2, y = (centreY(a) + centreY(b)) / 2;
-        list.add(partLabel(part), kTinyMm, kInk, x, y, x, y);
+        list.add(partLabel(part), kTinyMm, kInk, x, y, x, y, owner);
         return;
     }
     double left = 1e9, right = -1e9, top = 1e9, bottom = -1e9;
@@ -90,16 +94,16 @@ void addPartLabel(LabelList& list, const Part& part) {
         top = std::min(top, centreY(pin.hole)), bottom = std::max(bottom, centreY(pin.hole));
     }
     x = (left + right) / 2, y = (top + bottom) / 2;
-    list.add(partLabel(part), kTinyMm, kInk, x, y, x, y);
+    list.add(partLabel(part), kTinyMm, kInk, x, y, x, y, owner);
 }
 
 /// Pin names beside the pins of small polarised parts (transistors, regulators, diodes...).
-void addPinNames(LabelList& list, const Part& part) {
+void addPinNames(LabelList& list, const Part& part, int owner) {
     const netcheck::PartKind* kind = netcheck::findPartKind(part.kind);
     if (!kind || !kind->polarised || part.pins.size() > 4) return;
     for (const auto& pin : part.pins) {
         const double x = centreX(pin.hole), y = centreY(pin.hole);
-        list.add(pin.name, kPinNameMm, kPinNameInk, x, y, x - 0.42, y + 0.5);
+        list.add(pin.name, kPinNameMm, kPinNameInk, x, y, x - 0.42, y + 0.5, owner);
     }
 }
 
@@ -123,13 +127,14 @@ std::vector<SheetLabel> componentSideLabels(cairo_t* cr, const netcheck::Board& 
     LabelList list(cr, pitchMm);
     // Pin names first: they only make sense right at their pins. Wire tags last: long, and
     // fine a little way off with a leader.
-    for (const auto& part : board.parts) addPinNames(list, part);
-    for (const auto& part : board.parts) addPartLabel(list, part);
+    const int parts = static_cast<int>(board.parts.size());
+    for (int i = 0; i < parts; ++i) addPinNames(list, board.parts[i], i);
+    for (int i = 0; i < parts; ++i) addPartLabel(list, board.parts[i], i);
     for (const auto& wire : board.wires) {
         if (wire.from.isHole()) addWireTag(list, board, *wire.from.hole, wire.to.name(), wire.color);
         if (wire.to.isHole()) addWireTag(list, board, *wire.to.hole, wire.from.name(), wire.color);
     }
-    return list.place(board);
+    return list.place(board, labels::partBodies(board));
 }
 
 std::vector<SheetLabel> copperSideLabels(cairo_t* cr, const netcheck::Board& board,
@@ -144,7 +149,7 @@ std::vector<SheetLabel> copperSideLabels(cairo_t* cr, const netcheck::Board& boa
         // board units.
         list.add(std::to_string(i + 1), fontMm, kCutNumberInk, x, y, x - 0.55, y - 0.5);
     }
-    return list.place(board);
+    return list.place(board, {});  // the copper side shows no bodies
 }
 
 }  // namespace sheet

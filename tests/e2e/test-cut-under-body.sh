@@ -10,8 +10,8 @@ board="$WORK/cut-under-body.board.json"
 cat >"$board" <<'JSON'
 {
   "format": "stripsmith-board", "version": 1, "title": "cut under a body",
-  "board": {"rows": 6, "cols": 12, "copper": "strips"},
-  "cuts": [{"hole": "C5"}, {"hole": "E10"}],
+  "board": {"rows": 6, "cols": 12},
+  "cuts": ["C5", "E10"],
   "parts": [{"ref": "R1", "kind": "resistor", "value": "10k", "pins": {"1": "C2", "2": "C8"}}]
 }
 JSON
@@ -26,7 +26,7 @@ red_pixels() {
     crop=$(awk -v x="$x0" -v y="$y0" -v p="$pitch" -v r="$1" -v c="$2" -v w="$3" -v h="$4" \
         'BEGIN { printf "%dx%d+%d+%d", 2 * w * p, 2 * h * p, x + (c - w) * p, y + (r - h) * p }')
     convert "$ART/cut-under-body.png" -crop "$crop" +repage -depth 8 txt:- |
-        awk -F'[(),]' 'NR > 1 { r = $4 + 0; g = $5 + 0; b = $6 + 0
+        awk -F'[(),]' 'NR > 1 { r = $3 + 0; g = $4 + 0; b = $5 + 0
             if (r > 180 && g < 90 && b < 90 && r - g > 110) n++ } END { print n + 0 }'
 }
 # The resistor's body runs along strip C (row 2) between its leads in holes 2 and 8 (columns 1

@@ -37,7 +37,7 @@ check "both moved in from beside the board, inside the window" awk -v l="$left" 
 row_y=$(awk -v y="$y0" -v p="$pitch" -v r="$((rows / 2))" 'BEGIN { printf "%d", y + r * p }')
 crop=$(awk -v x="$left" -v y="$row_y" 'BEGIN { printf "24x24+%d+%d", x - 12, y - 12 }')
 read -r light dark < <(convert "$ART/pinned-edge-labels.png" -crop "$crop" +repage -colorspace Gray -depth 8 txt:- |
-    awk -F'[(),]' 'NR > 1 { v = $2 + 0; if (v > 170) l++; if (v < 60) d++ } END { print l + 0, d + 0 }')
+    awk -F'[(),]' 'NR > 1 { v = $3 + 0; if (v > 170) l++; if (v < 60) d++ } END { print l + 0, d + 0 }')
 echo "at the pinned letter: $light light pixels, $dark dark ones"
 check "a letter is drawn at the pinned place" test "$light" -gt 5
 check "over its backdrop" test "$dark" -gt 50
