@@ -109,6 +109,30 @@ void addPinNames(Gatherer& g, const Part& part, int owner, float size) {
     }
 }
 
+// How far beyond the screen a label, pin or body still counts: a label in view may sit this far
+// from its part.
+constexpr double kBeyondShown = 4.0;
+
+labels::Box grown(const labels::Box& box, double by) {
+    return {box.x0 - by, box.y0 - by, box.x1 + by, box.y1 + by};
+}
+
+bool near(const CanvasLabelView& view, const Part& part) {
+    if (!view.shown) return true;
+    const labels::Box reach = grown(*view.shown, kBeyondShown);
+    return std::any_of(part.pins.begin(), part.pins.end(), [&](const netcheck::Pin& pin) {
+        return reach.contains(labels::boxAround(pin.hole.col + 0.5, pin.hole.row + 0.5, 0, 0));
+    });
+}
+
+template <class T, class BoxOf>
+std::vector<T> within(std::vector<T> items, const std::optional<labels::Box>& shown, BoxOf boxOf) {
+    if (!shown) return items;
+    const labels::Box reach = grown(*shown, 2 * kBeyondShown);
+    std::erase_if(items, [&](const T& item) { return !reach.overlaps(boxOf(item)); });
+    return items;
+}
+
 }  // namespace
 
 float labelTextSize(float holePx, float pitchFraction) {
@@ -127,20 +151,26 @@ std::vector<CanvasLabel> canvasLabels(const netcheck::Board& board, const Canvas
     for (std::size_t i = 0; i < board.parts.size(); ++i) {
         const Part& part = board.parts[i];
         const bool byZoom = view.holePx >= 36.0f && bodyStyleOf(part) == BodyStyle::ToPackage;
-        if ((view.hoveredPart && *view.hoveredPart == i) || byZoom)
+        if (((view.hoveredPart && *view.hoveredPart == i) || byZoom) && near(view, part))
             addPinNames(g, part, static_cast<int>(i), pinSize);
     }
     if (view.bodies && nameSize > 0) {
         const int parts = static_cast<int>(board.parts.size());
         if (detailed)
             for (int i = 0; i < parts; ++i)
-                if (!board.parts[i].pins.empty()) addPartName(g, board.parts[i], i, nameSize);
-        for (int i = 0; i < parts; ++i) addPolarity(g, board.parts[i], i, nameSize, view.holePx);
+                if (!board.parts[i].pins.empty() && near(view, board.parts[i]))
+                    addPartName(g, board.parts[i], i, nameSize);
+        for (int i = 0; i < parts; ++i)
+            if (near(view, board.parts[i])) addPolarity(g, board.parts[i], i, nameSize, view.holePx);
     }
     // Off other parts' bodies where the bodies are drawn.
-    const std::vector<labels::Body> bodies = view.bodies ? labels::partBodies(board) : std::vector<labels::Body>{};
-    const auto placements = labels::placeLabels(g.requests, labels::boardObstacles(board),
-                                                labels::boardArea(board), bodies);
+    if (g.requests.empty()) return {};
+    const auto bodies = within(view.bodies ? labels::partBodies(board) : std::vector<labels::Body>{},
+                               view.shown, [](const labels::Body& body) { return body.box; });
+    const auto obstacles = within(labels::boardObstacles(board), view.shown,
+                                  [](const labels::Box& box) { return box; });
+    const auto placements =
+        labels::placeLabels(g.requests, obstacles, labels::boardArea(board), bodies);
     for (std::size_t i = 0; i < g.found.size(); ++i) g.found[i].placement = placements[i];
     return std::move(g.found);
 }

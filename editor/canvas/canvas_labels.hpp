@@ -35,6 +35,9 @@ struct CanvasLabelView {
     bool mirrored = false;   ///< the copper side: left and right swap on screen
     bool bodies = true;      ///< part bodies are drawn (component side, see-through)
     std::optional<std::size_t> hoveredPart;  ///< its pin names are shown
+    /// The part of the board on screen (board units), when not all of it: parts outside get no
+    /// labels, so a frame on a huge board costs what is in view.
+    std::optional<labels::Box> shown;
 };
 
 /// Screen padding around a label's text (each side, pixels): the dark box behind it.

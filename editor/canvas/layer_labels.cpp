@@ -44,6 +44,12 @@ std::vector<CanvasLabel> frameLabels(const LayerFrame& f) {
     view.mirrored = f.t.mirrored;
     view.bodies = f.showsBodies();
     view.hoveredPart = f.hoveredPart;
+    // Only what is on screen when the board is larger than the view.
+    const bool whole = f.firstRow == 0 && f.firstCol == 0 && f.lastRow == f.board.rows - 1 &&
+                       f.lastCol == f.board.cols - 1;
+    if (!whole)
+        view.shown = labels::Box{static_cast<double>(f.firstCol), static_cast<double>(f.firstRow),
+                                 f.lastCol + 1.0, f.lastRow + 1.0};
     return canvasLabels(f.board, view, imguiMeasure());
 }
 
