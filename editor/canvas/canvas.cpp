@@ -3,6 +3,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <cstdio>
 #include <string>
 
 #include <SFML/Window/Keyboard.hpp>
@@ -122,6 +123,13 @@ void logHolePositions(const Document& doc, TestLog& log, const CanvasFrame& f) {
                             std::to_string(f.t.origin.y) + " " + std::to_string(f.t.mirrored);
     if (!log.changed("view", key)) return;
     const auto& board = doc.board();
+    const EdgeLabelPlaces edges = edgeLabelPlaces(f, board.rows, board.cols);
+    char line[160];
+    std::snprintf(line, sizeof line, "edge-labels left %.1f%s right %.1f%s top %.1f%s bottom %.1f%s",
+                  edges.leftX, edges.leftPinned ? " pinned" : "", edges.rightX,
+                  edges.rightPinned ? " pinned" : "", edges.topY, edges.topPinned ? " pinned" : "",
+                  edges.bottomY, edges.bottomPinned ? " pinned" : "");
+    log.note(line);
     log.view(f.hole({0, 0}), f.t.mirrored ? -f.t.holePx : f.t.holePx, f.t.mirrored, board.rows,
              board.cols);
     for (const OffboardSpot& s : f.spots) {
@@ -157,14 +165,18 @@ void drawLayers(const CanvasContext& c, const CanvasFrame& geometry) {
     }
     drawSubstrate(f);
     drawCopper(f);
-    drawEdgeLabels(f);
     drawIslandHighlight(f);
     drawLinks(f);
-    drawParts(f);
-    // Cuts above the parts: a cut hidden under an IC is still a cut to make.
+    // Seen from above, a cut is under the board and the parts stand over it: bodies go above
+    // the marks (a see-through body lets them show, the copper side has no bodies).
     drawCuts(f);
+    drawParts(f);
     drawOffboardParts(f);
     drawWires(f);
+    drawLabels(f);
+    // Letters and numbers last: pinned to the canvas edges when the board's own edge is out
+    // of view, over whatever lies there.
+    drawEdgeLabels(f);
     drawFindingMarks(f);
     drawFindingHighlight(f);
     drawRepairPreview(f);

@@ -3,15 +3,14 @@
 #include <cstdio>
 #include <string>
 
+#include "editor/canvas/canvas_labels.hpp"
 #include "editor/canvas/layers.hpp"
 #include "editor/canvas/palette.hpp"
 
 namespace stripsmith {
 
 float canvasTextSize(const CanvasFrame& f, float pitchFraction) {
-    const float size = f.t.holePx * pitchFraction;
-    if (size < 8.0f) return 0.0f;
-    return std::min(size, 28.0f);
+    return labelTextSize(f.t.holePx, pitchFraction);
 }
 
 void drawSubstrate(const LayerFrame& f) {
@@ -70,19 +69,57 @@ void drawCopper(const LayerFrame& f) {
     drawHoles(f);
 }
 
+namespace {
+
+// Room between a pinned letter or number and the canvas edge, and half the width of a letter's
+// column (so a pinned letter sits wholly inside the canvas).
+constexpr float kPinnedMargin = 4.0f;
+
+ImVec2 textCentredAt(ImVec2 centre, ImVec2 size) {
+    return {centre.x - size.x * 0.5f, centre.y - size.y * 0.5f};
+}
+
+void backdrop(const CanvasFrame& f, ImVec2 at, ImVec2 size) {
+    f.draw->AddRectFilled({at.x - 3, at.y - 1}, {at.x + size.x + 3, at.y + size.y + 1}, palette::rgba(20, 24, 28, 200), 3);
+}
+
+}  // namespace
+
+EdgeLabelPlaces edgeLabelPlaces(const CanvasFrame& f, int rows, int cols) {
+    const float size = canvasTextSize(f, 0.48f);
+    EdgeLabelPlaces places;
+    places.size = size;
+    // Where the letters and numbers sit beside the board, on screen (either may be mirrored).
+    const float a = f.at({-0.75f, 0}).x, b = f.at({static_cast<float>(cols) + 0.75f, 0}).x;
+    const float halfLetter = size * 0.5f + kPinnedMargin;
+    const float halfLine = size * 0.5f + kPinnedMargin;
+    places.leftX = std::max(std::min(a, b), f.clipMin.x + halfLetter);
+    places.rightX = std::min(std::max(a, b), f.clipMax.x - halfLetter);
+    places.leftPinned = places.leftX != std::min(a, b);
+    places.rightPinned = places.rightX != std::max(a, b);
+    const float top = f.at({0, -0.7f}).y, bottom = f.at({0, static_cast<float>(rows) + 0.7f}).y;
+    places.topY = std::max(top, f.clipMin.y + halfLine);
+    places.bottomY = std::min(bottom, f.clipMax.y - halfLine);
+    places.topPinned = places.topY != top;
+    places.bottomPinned = places.bottomY != bottom;
+    return places;
+}
+
 void drawEdgeLabels(const LayerFrame& f) {
     const netcheck::Board& board = f.board;
-    const float size = canvasTextSize(f, 0.48f);
+    const EdgeLabelPlaces places = edgeLabelPlaces(f, board.rows, board.cols);
+    const float size = places.size;
     if (size <= 0.0f) return;
     ImFont* font = ImGui::GetFont();
     const int step = f.t.holePx >= 18.0f ? 1 : 5;
     for (int r = f.firstRow; r <= f.lastRow; ++r) {
         const std::string name = netcheck::rowName(r);
         const ImVec2 textSize = font->CalcTextSizeA(size, FLT_MAX, 0.0f, name.c_str());
-        for (float x : {-0.75f, static_cast<float>(board.cols) + 0.75f}) {
-            const ImVec2 p = f.at({x, static_cast<float>(r) + 0.5f});
-            f.draw->AddText(font, size, {p.x - textSize.x * 0.5f, p.y - textSize.y * 0.5f}, palette::kLabel,
-                            name.c_str());
+        const float y = f.at({0, static_cast<float>(r) + 0.5f}).y;
+        for (auto [x, pinned] : {std::pair{places.leftX, places.leftPinned}, std::pair{places.rightX, places.rightPinned}}) {
+            const ImVec2 at = textCentredAt({x, y}, textSize);
+            if (pinned) backdrop(f, at, textSize);
+            f.draw->AddText(font, size, at, palette::kLabel, name.c_str());
         }
     }
     for (int c = f.firstCol; c <= f.lastCol; ++c) {
@@ -90,10 +127,11 @@ void drawEdgeLabels(const LayerFrame& f) {
         char text[16];
         std::snprintf(text, sizeof text, "%d", c + 1);
         const ImVec2 textSize = font->CalcTextSizeA(size, FLT_MAX, 0.0f, text);
-        for (float y : {-0.7f, static_cast<float>(board.rows) + 0.7f}) {
-            const ImVec2 p = f.at({static_cast<float>(c) + 0.5f, y});
-            f.draw->AddText(font, size, {p.x - textSize.x * 0.5f, p.y - textSize.y * 0.5f},
-                            palette::kLabelDim, text);
+        const float x = f.at({static_cast<float>(c) + 0.5f, 0}).x;
+        for (auto [y, pinned] : {std::pair{places.topY, places.topPinned}, std::pair{places.bottomY, places.bottomPinned}}) {
+            const ImVec2 at = textCentredAt({x, y}, textSize);
+            if (pinned) backdrop(f, at, textSize);
+            f.draw->AddText(font, size, at, pinned ? palette::kLabel : palette::kLabelDim, text);
         }
     }
 }

@@ -4,6 +4,7 @@
 
 #include "editor/canvas/layers.hpp"
 #include "editor/canvas/palette.hpp"
+#include "editor/canvas/wire_route.hpp"
 
 namespace stripsmith {
 namespace {
@@ -52,13 +53,16 @@ void drawIslandHighlight(const LayerFrame& f) {
     for (const netcheck::Link& link : board.links)
         if (inIsland(link.from))
             f.draw->AddLine(f.hole(link.from), f.hole(link.to), palette::kHoverEdge, std::max(3.0f, f.t.len(0.22f)));
-    for (const netcheck::Wire& wire : board.wires) {
+    for (std::size_t i = 0; i < board.wires.size(); ++i) {
+        const netcheck::Wire& wire = board.wires[i];
         const bool hit = (wire.from.hole && inIsland(*wire.from.hole)) || (wire.to.hole && inIsland(*wire.to.hole)) ||
                          std::binary_search(island.pins.begin(), island.pins.end(), wire.from.lug) ||
                          std::binary_search(island.pins.begin(), island.pins.end(), wire.to.lug);
         if (!hit) continue;
-        const auto a = endpointPosition(board, f.spots, wire.from), b = endpointPosition(board, f.spots, wire.to);
-        if (a && b) f.draw->AddLine(f.at(*a), f.at(*b), palette::kHoverEdge, 2.0f);
+        std::vector<ImVec2> points;
+        for (ImVec2 p : wireRoute(board, f.spots, wire, i)) points.push_back(f.at(p));
+        if (points.size() >= 2)
+            f.draw->AddPolyline(points.data(), static_cast<int>(points.size()), palette::kHoverEdge, 0, 2.0f);
     }
 }
 

@@ -1,9 +1,11 @@
 // Off-board parts beside the board, and the flying leads to them.
 #include <cmath>
 #include <string>
+#include <vector>
 
 #include "editor/canvas/layers.hpp"
 #include "editor/canvas/palette.hpp"
+#include "editor/canvas/wire_route.hpp"
 
 namespace stripsmith {
 
@@ -44,20 +46,18 @@ void drawWires(const LayerFrame& f) {
     const Selected& selected = f.selected;
     for (std::size_t i = 0; i < board.wires.size(); ++i) {
         const netcheck::Wire& wire = board.wires[i];
-        const auto a = endpointPosition(board, f.spots, wire.from);
-        const auto b = endpointPosition(board, f.spots, wire.to);
-        if (!a || !b) continue;
-        const ImVec2 pa = f.at(*a), pb = f.at(*b);
-        // A gentle sag, as a real lead hangs.
-        const float sag = std::min(f.t.len(1.0f), std::fabs(pb.x - pa.x) * 0.1f + f.t.len(0.3f));
-        const ImVec2 c1{pa.x + (pb.x - pa.x) * 0.3f, pa.y + sag};
-        const ImVec2 c2{pa.x + (pb.x - pa.x) * 0.7f, pb.y + sag};
+        const std::vector<ImVec2> route = wireRoute(board, f.spots, wire, i);
+        if (route.size() < 2) continue;
+        std::vector<ImVec2> points;
+        for (ImVec2 p : route) points.push_back(f.at(p));
         const float w = std::max(2.5f, f.t.len(0.18f));
         const bool sel = selected.count(ElementRef{ElementRef::Kind::Wire, i}) > 0;
-        if (sel) f.draw->AddBezierCubic(pa, c1, c2, pb, palette::kSelection, w + 6.0f);
-        f.draw->AddBezierCubic(pa, c1, c2, pb, palette::rgba(0, 0, 0, 160), w + 2.0f);
-        f.draw->AddBezierCubic(pa, c1, c2, pb, palette::wireColour(wire.color.c_str()), w);
-        for (const ImVec2& p : {pa, pb}) f.draw->AddCircleFilled(p, f.t.len(0.2f), palette::rgba(205, 210, 215), 10);
+        const int n = static_cast<int>(points.size());
+        if (sel) f.draw->AddPolyline(points.data(), n, palette::kSelection, 0, w + 6.0f);
+        f.draw->AddPolyline(points.data(), n, palette::rgba(0, 0, 0, 160), 0, w + 2.0f);
+        f.draw->AddPolyline(points.data(), n, palette::wireColour(wire.color.c_str()), 0, w);
+        for (const ImVec2& p : {points.front(), points.back()})
+            f.draw->AddCircleFilled(p, f.t.len(0.2f), palette::rgba(205, 210, 215), 10);
     }
 }
 

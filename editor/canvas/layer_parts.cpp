@@ -1,6 +1,7 @@
 // Part bodies a maker recognises at a glance, leads ending in their holes.
 //
-// Sections: geometry helpers | two-lead bodies | multi-pin bodies | labels | the layer.
+// Sections: geometry helpers | two-lead bodies | multi-pin bodies | the layer. (Their labels are
+// placed and drawn by layer_labels.cpp, above the wires.)
 #include <algorithm>
 #include <cmath>
 #include <string>
@@ -182,15 +183,6 @@ void drawRadialCircle(const CanvasFrame& f, const Axis& ax, const Part& part, bo
         f.draw->AddCircle(ax.mid, r, palette::rgba(10, 20, 50), 32, 1.5f);
     }
     leadEnds(f, part);
-    const float size = canvasTextSize(f, 0.5f);
-    if (size > 0 && cathode >= 0) {
-        const ImVec2 plus = f.hole(part.pins[static_cast<std::size_t>(1 - cathode)].hole);
-        const ImVec2 minus = f.hole(part.pins[static_cast<std::size_t>(cathode)].hole);
-        const char* pm = led ? "A" : "+";
-        const char* km = led ? "K" : "-";
-        f.draw->AddText(nullptr, size, {plus.x + size * 0.3f, plus.y - size * 1.1f}, palette::kTextLight, pm);
-        f.draw->AddText(nullptr, size, {minus.x + size * 0.3f, minus.y - size * 1.1f}, palette::kTextLight, km);
-    }
 }
 
 // ---- multi-pin bodies -----------------------------------------------------------------------
@@ -289,42 +281,6 @@ void drawGeneric(const CanvasFrame& f, const Part& part) {
     leadEnds(f, part);
 }
 
-// ---- labels ---------------------------------------------------------------------------------
-
-ImVec2 labelAnchor(const CanvasFrame& f, const Part& part) {
-    ImVec2 sum{0, 0};
-    for (const netcheck::Pin& pin : part.pins) sum = add(sum, f.hole(pin.hole));
-    return mul(sum, 1.0f / static_cast<float>(std::max<std::size_t>(part.pins.size(), 1)));
-}
-
-void drawLabel(const CanvasFrame& f, const Part& part, BodyStyle style) {
-    const float size = canvasTextSize(f, 0.5f);
-    if (size <= 0) return;
-    ImFont* font = ImGui::GetFont();
-    const ImVec2 c = labelAnchor(f, part);
-    const bool dark = style == BodyStyle::Dip || style == BodyStyle::ToPackage;
-    std::string text = part.ref;
-    if (style == BodyStyle::Dip && !part.value.empty()) text += " " + part.value;
-    const ImVec2 ts = font->CalcTextSizeA(size, FLT_MAX, 0, text.c_str());
-    ImVec2 pos{c.x - ts.x * 0.5f, c.y - ts.y * 0.5f};
-    if (!dark) {
-        pos.y -= f.t.len(0.65f);
-        f.draw->AddRectFilled({pos.x - 2, pos.y}, {pos.x + ts.x + 2, pos.y + ts.y}, palette::rgba(20, 24, 28, 170), 3);
-    }
-    f.draw->AddText(font, size, pos, palette::kTextLight, text.c_str());
-}
-
-void drawPinNames(const CanvasFrame& f, const Part& part) {
-    const float size = std::max(12.0f, canvasTextSize(f, 0.45f));
-    for (const netcheck::Pin& pin : part.pins) {
-        const ImVec2 p = f.hole(pin.hole);
-        const ImVec2 ts = ImGui::GetFont()->CalcTextSizeA(size, FLT_MAX, 0, pin.name.c_str());
-        const ImVec2 at{p.x + f.t.len(0.22f), p.y - ts.y - f.t.len(0.1f)};
-        f.draw->AddRectFilled({at.x - 2, at.y}, {at.x + ts.x + 2, at.y + ts.y}, palette::rgba(255, 255, 240, 235), 3);
-        f.draw->AddText(nullptr, size, at, palette::kText, pin.name.c_str());
-    }
-}
-
 void drawBody(const CanvasFrame& f, const Part& part) {
     const BodyStyle style = bodyStyleOf(part);
     if (part.pins.size() == 2 && style != BodyStyle::Header && style != BodyStyle::Generic) {
@@ -385,7 +341,6 @@ void drawSelectionOutline(const CanvasFrame& f, const Part& part) {
 void drawParts(const LayerFrame& f) {
     const netcheck::Board& board = f.board;
     const Selected& selected = f.selected;
-    const bool detailed = f.detailed();
     for (std::size_t i = 0; i < board.parts.size(); ++i) {
         const Part& part = board.parts[i];
         if (part.pins.empty()) continue;
@@ -396,13 +351,10 @@ void drawParts(const LayerFrame& f) {
             const int firstVertex = f.draw->VtxBuffer.Size;
             drawBody(f, part);
             if (f.side == Side::SeeThrough) fadeSince(f.draw, firstVertex, kSeeThroughBody);
-            if (detailed) drawLabel(f, part, bodyStyleOf(part));
         } else {
             drawSolderJoints(f, part);
         }
         if (selected.count(ElementRef{ElementRef::Kind::Part, i})) drawSelectionOutline(f, part);
-        const bool namesByZoom = f.t.holePx >= 36.0f && bodyStyleOf(part) == BodyStyle::ToPackage;
-        if ((f.hoveredPart && *f.hoveredPart == i) || namesByZoom) drawPinNames(f, part);
     }
 }
 

@@ -4,6 +4,7 @@
 
 #include <cstddef>
 #include <optional>
+#include <vector>
 
 #include "editor/app/selection.hpp"
 #include "editor/canvas/canvas_frame.hpp"
@@ -35,8 +36,18 @@ struct LayerFrame : CanvasFrame {
 void drawSubstrate(const LayerFrame& f);
 /// Copper strips (or pads) and the holes.
 void drawCopper(const LayerFrame& f);
-/// Row letters on both sides, hole numbers above and below.
+/// Row letters on both sides, hole numbers above and below; pinned to the canvas edges when
+/// the board's own edges are scrolled out of view.
 void drawEdgeLabels(const LayerFrame& f);
+
+/// Where the edge labels go on screen: the centres of the two columns of row letters and of the
+/// two rows of hole numbers, each pinned (moved in to the canvas edge) or beside the board.
+struct EdgeLabelPlaces {
+    float size = 0;  ///< font size in pixels; 0 when too small to draw
+    float leftX = 0, rightX = 0, topY = 0, bottomY = 0;
+    bool leftPinned = false, rightPinned = false, topPinned = false, bottomPinned = false;
+};
+EdgeLabelPlaces edgeLabelPlaces(const CanvasFrame& f, int rows, int cols);
 /// Everything joined to the hovered hole: the island's holes, and the links and wires inside it.
 void drawIslandHighlight(const LayerFrame& f);
 /// Wire links between holes.
@@ -51,6 +62,9 @@ void drawCuts(const LayerFrame& f);
 void drawOffboardParts(const LayerFrame& f);
 /// Flying leads from lug to hole or lug, in their colour.
 void drawWires(const LayerFrame& f);
+/// Part names, pin names and polarity marks, placed clear of pins, used holes, cuts and each
+/// other (layer_labels.cpp), above the wires.
+void drawLabels(const LayerFrame& f);
 /// Marks every error's hole lightly so faults are visible without opening the list.
 void drawFindingMarks(const LayerFrame& f);
 /// The focused finding: its copper path, pieces, suggested cut or links, and its hole.

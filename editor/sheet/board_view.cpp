@@ -1,6 +1,9 @@
 #include "board_view.hpp"
 
+#include <algorithm>
 #include <cmath>
+
+#include "sheet_text.hpp"
 
 namespace sheet {
 
@@ -19,6 +22,37 @@ void drawBoardView(cairo_t* cr, const ViewContext& context) {
     }
     cairo_restore(cr);
     drawOverlapMarks(cr, context);
+}
+
+namespace {
+
+/// The point of `box` nearest (x, y): where a leader from the anchor meets the label.
+Point nearestOnBox(const labels::Box& box, double x, double y) {
+    return {std::clamp(x, box.x0, box.x1), std::clamp(y, box.y0, box.y1)};
+}
+
+}  // namespace
+
+void drawPlacedLabels(cairo_t* cr, const ViewContext& context,
+                      const std::vector<SheetLabel>& labels) {
+    for (const SheetLabel& label : labels) {
+        const labels::Box& box = label.placement.box;
+        if (!label.placement.leader) continue;
+        const Point near = nearestOnBox(box, label.anchorX, label.anchorY);
+        const Point from = context.atBoard(label.anchorX, label.anchorY);
+        const Point to = context.atBoard(near.x, near.y);
+        cairo_move_to(cr, from.x, from.y);
+        cairo_line_to(cr, to.x, to.y);
+    }
+    setColour(cr, kGreyInk);
+    cairo_set_line_width(cr, 0.12);
+    cairo_stroke(cr);
+    for (const SheetLabel& label : labels) {
+        const labels::Box& box = label.placement.box;
+        const Point centre = context.atBoard(box.centreX(), box.centreY());
+        setFont(cr, label.fontMm, label.weight);
+        drawLabel(cr, centre.x, centre.y, label.text, label.ink);
+    }
 }
 
 void drawHoles(cairo_t* cr, const ViewContext& context, double outlineGrey) {

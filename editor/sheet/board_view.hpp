@@ -7,6 +7,7 @@
 
 #include "netcheck/model/board.hpp"
 #include "page_layout.hpp"
+#include "sheet_labels.hpp"
 
 namespace sheet {
 
@@ -19,6 +20,12 @@ struct ViewContext {
 
     double pitch() const { return plan.pitchMm; }
     Point at(netcheck::Hole hole) const { return holeCentre(view, plan.pitchMm, hole); }
+    /// A point in board units (hole {r,c} centred at (c + 0.5, r + 0.5), component side).
+    Point atBoard(double x, double y) const {
+        const Tile& tile = view.tile;
+        const double along = view.side == Side::Copper ? tile.col0 + tile.cols - x : x - tile.col0;
+        return {view.board.x + along * pitch(), view.board.y + (y - tile.row0) * pitch()};
+    }
     bool shows(netcheck::Hole hole) const { return tileHas(view.tile, hole); }
     /// Radius of a drawn hole (about 1 mm on a 0.1 in board).
     double holeRadius() const { return 0.18 * plan.pitchMm; }
@@ -41,6 +48,10 @@ void drawViewFrame(cairo_t* cr, const ViewContext& context);
 
 /// On a split board: shades the holes shared with each neighbouring page and names that page.
 void drawOverlapMarks(cairo_t* cr, const ViewContext& context);
+
+/// Labels placed by `placeLabels`, each with a thin leader to its anchor when it sits away.
+void drawPlacedLabels(cairo_t* cr, const ViewContext& context,
+                      const std::vector<SheetLabel>& labels);
 
 /// Every hole of the tile: a white disc of `holeRadius()` in a thin ring of `outlineGrey`.
 void drawHoles(cairo_t* cr, const ViewContext& context, double outlineGrey);

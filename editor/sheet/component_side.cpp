@@ -90,10 +90,6 @@ Rgb bodyFill(const std::string& kind) {
     return {0.86, 0.86, 0.86};
 }
 
-std::string partLabel(const Part& part) {
-    return part.value.empty() ? part.ref : part.ref + " " + part.value;
-}
-
 void fillAndOutline(cairo_t* cr, Rgb fill) {
     setColour(cr, fill);
     cairo_fill_preserve(cr);
@@ -121,7 +117,6 @@ void drawTwoLeadPart(cairo_t* cr, const ViewContext& context, const Part& part) 
     if (length < 1.5 * p) {
         cairo_arc(cr, a.x, a.y, 0.45 * p, 0, 2 * M_PI);
         fillAndOutline(cr, bodyFill(part.kind));
-        mid = a;
     } else {
         double angle = std::atan2(b.y - a.y, b.x - a.x);
         double body = std::max(length - 1.1 * p, 0.8 * p);
@@ -138,20 +133,6 @@ void drawTwoLeadPart(cairo_t* cr, const ViewContext& context, const Part& part) 
             cairo_fill(cr);
         }
         cairo_restore(cr);
-    }
-    setFont(cr, kTinyMm, Weight::Bold);
-    drawLabel(cr, mid.x, mid.y, partLabel(part));
-}
-
-/// Pin names beside the pins of small polarised parts (transistors, regulators, diodes...).
-void drawPinNames(cairo_t* cr, const ViewContext& context, const Part& part) {
-    const netcheck::PartKind* kind = netcheck::findPartKind(part.kind);
-    if (!kind || !kind->polarised || part.pins.size() > 4) return;
-    setFont(cr, 1.1, Weight::Bold);
-    for (const auto& pin : part.pins) {
-        Point c = context.at(pin.hole);
-        drawLabel(cr, c.x - 0.42 * context.pitch(), c.y + 0.5 * context.pitch(), pin.name,
-                  {0.1, 0.1, 0.6});
     }
 }
 
@@ -181,16 +162,12 @@ void drawManyLeadPart(cairo_t* cr, const ViewContext& context, const Part& part)
     cairo_rectangle(cr, first.x - 0.3 * context.pitch(), first.y - 0.3 * context.pitch(),
                     0.6 * context.pitch(), 0.6 * context.pitch());
     cairo_fill(cr);
-    drawPinNames(cr, context, part);
-    setFont(cr, kTinyMm, Weight::Bold);
-    drawLabel(cr, (left + right) / 2, (top + bottom) / 2, partLabel(part));
 }
 
 void drawPart(cairo_t* cr, const ViewContext& context, const Part& part) {
     if (part.pins.empty()) return;
     if (part.pins.size() == 2) {
         drawTwoLeadPart(cr, context, part);
-        drawPinNames(cr, context, part);
         return;
     }
     if (part.pins.size() >= 3) {
@@ -200,13 +177,10 @@ void drawPart(cairo_t* cr, const ViewContext& context, const Part& part) {
     Point c = context.at(part.pins.front().hole);
     cairo_arc(cr, c.x, c.y, 0.4 * context.pitch(), 0, 2 * M_PI);
     fillAndOutline(cr, bodyFill(part.kind));
-    setFont(cr, kTinyMm, Weight::Bold);
-    drawLabel(cr, c.x, c.y - 0.7 * context.pitch(), partLabel(part));
 }
 
-/// A ring in the wire's colour at the hole and a tag naming the other end and the colour.
-void drawWireEnd(cairo_t* cr, const ViewContext& context, Hole hole, const std::string& other,
-                 const std::string& colour) {
+/// A ring in the wire's colour at the hole (its tag is one of the placed labels).
+void drawWireEnd(cairo_t* cr, const ViewContext& context, Hole hole, const std::string& colour) {
     if (!context.shows(hole)) return;
     Point c = context.at(hole);
     Rgb ink = wireColour(colour).value_or(Rgb{0.5, 0.5, 0.5});
@@ -220,22 +194,12 @@ void drawWireEnd(cairo_t* cr, const ViewContext& context, Hole hole, const std::
     setColour(cr, ink);
     cairo_set_line_width(cr, 0.4);
     cairo_stroke(cr);
-    std::string tag = "→" + other + (colour.empty() ? "" : " " + colour);
-    setFont(cr, kTinyMm, Weight::Bold);
-    double width = textWidth(cr, tag);
-    double p = context.pitch();
-    // Keep the tag on the board: to the left near the right edge, below on the top strip.
-    bool left = c.x + 0.5 * p + width > context.view.board.right();
-    double x = left ? c.x - 0.5 * p - width / 2 : c.x + 0.5 * p + width / 2;
-    double y = hole.row == context.view.tile.row0 ? c.y + 0.5 * p : c.y - 0.5 * p;
-    drawLabel(cr, x, y, tag, {0.1, 0.1, 0.4});
 }
 
 void drawWires(cairo_t* cr, const ViewContext& context) {
     for (const auto& wire : context.board.wires) {
-        if (wire.from.isHole())
-            drawWireEnd(cr, context, *wire.from.hole, wire.to.name(), wire.color);
-        if (wire.to.isHole()) drawWireEnd(cr, context, *wire.to.hole, wire.from.name(), wire.color);
+        if (wire.from.isHole()) drawWireEnd(cr, context, *wire.from.hole, wire.color);
+        if (wire.to.isHole()) drawWireEnd(cr, context, *wire.to.hole, wire.color);
     }
 }
 
@@ -248,6 +212,7 @@ void drawComponentSide(cairo_t* cr, const ViewContext& context) {
     drawLinks(cr, context);
     for (const auto& part : context.board.parts) drawPart(cr, context, part);
     drawWires(cr, context);
+    drawPlacedLabels(cr, context, componentSideLabels(cr, context.board, context.pitch()));
 }
 
 }  // namespace sheet

@@ -115,23 +115,12 @@ void drawCutMark(cairo_t* cr, const ViewContext& context, const Cut& cut) {
     cairo_stroke(cr);
 }
 
-/// The cut's number in the gap between strips, up and to the right of the mark.
-void drawCutNumber(cairo_t* cr, const ViewContext& context, const Cut& cut, int number) {
-    Point c = cutCentre(context, cut);
-    double p = context.pitch();
-    setFont(cr, 0.72 * p, Weight::Bold);
-    drawLabel(cr, c.x + 0.55 * p, c.y - 0.5 * p, std::to_string(number), {0.55, 0.0, 0.0});
-}
-
 void drawCuts(cairo_t* cr, const ViewContext& context) {
     for (std::size_t i = 0; i < context.cuts.size(); ++i) {
         if (context.shows(context.cuts[i].hole)) drawCutMark(cr, context, context.cuts[i]);
     }
-    for (std::size_t i = 0; i < context.cuts.size(); ++i) {
-        if (context.shows(context.cuts[i].hole)) {
-            drawCutNumber(cr, context, context.cuts[i], static_cast<int>(i) + 1);
-        }
-    }
+    drawPlacedLabels(cr, context,
+                     copperSideLabels(cr, context.board, context.cuts, context.pitch()));
 }
 
 }  // namespace

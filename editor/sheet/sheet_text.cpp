@@ -43,11 +43,25 @@ void drawText(cairo_t* cr, double x, double y, std::string_view text, Align alig
     cairo_new_path(cr);
 }
 
-void drawLabel(cairo_t* cr, double x, double y, std::string_view text, Rgb ink) {
+namespace {
+
+// Cap height is close to 0.73 em in DejaVu Sans; centring on it looks centred for digits.
+double capHeight(cairo_t* cr) {
     cairo_font_extents_t font;
     cairo_font_extents(cr, &font);
-    // Cap height is close to 0.73 em in DejaVu Sans; centring on it looks centred for digits.
-    double size = font.ascent / 0.928 * 0.73;
+    return font.ascent / 0.928 * 0.73;
+}
+
+}  // namespace
+
+LabelSize labelSize(cairo_t* cr, std::string_view text) {
+    const double size = capHeight(cr);
+    const double pad = size * 0.25;
+    return {textWidth(cr, text) + 2 * pad, size + 2 * pad};
+}
+
+void drawLabel(cairo_t* cr, double x, double y, std::string_view text, Rgb ink) {
+    double size = capHeight(cr);
     double width = textWidth(cr, text);
     double pad = size * 0.25;
     cairo_set_source_rgba(cr, 1, 1, 1, 0.85);

@@ -46,6 +46,12 @@ void drawText(cairo_t* cr, double x, double y, std::string_view text, Align alig
 /// over a white box so it stays readable above holes and strips.
 void drawLabel(cairo_t* cr, double x, double y, std::string_view text, Rgb ink = kInk);
 
+/// Width and height of the white box `drawLabel` puts behind `text` in the current font.
+struct LabelSize {
+    double w = 0, h = 0;
+};
+LabelSize labelSize(cairo_t* cr, std::string_view text);
+
 /// Splits `text` into lines no wider than `widthMm` in the current font (breaking at spaces; a
 /// word longer than the width gets a line of its own).
 std::vector<std::string> wrapText(cairo_t* cr, std::string_view text, double widthMm);

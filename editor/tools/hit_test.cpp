@@ -3,6 +3,9 @@
 #include <algorithm>
 #include <cmath>
 
+#include "editor/canvas/part_style.hpp"
+#include "editor/canvas/wire_route.hpp"
+
 namespace stripsmith {
 
 using netcheck::edit::ElementRef;
@@ -11,7 +14,23 @@ namespace {
 
 ImVec2 centre(netcheck::Hole h) { return {static_cast<float>(h.col) + 0.5f, static_cast<float>(h.row) + 0.5f}; }
 
+/// Inside a transistor's D-shaped body as the canvas draws it: a half disc on one side of the
+/// line through the first and last lead, its flat face 0.3 pitch behind that line.
+bool toPackageBodyHit(const netcheck::Part& part, ImVec2 p) {
+    const ImVec2 a = centre(part.pins.front().hole), b = centre(part.pins.back().hole);
+    const float dx = b.x - a.x, dy = b.y - a.y;
+    const float len = std::sqrt(dx * dx + dy * dy);
+    const ImVec2 d = len > 0.01f ? ImVec2{dx / len, dy / len} : ImVec2{1, 0};
+    const ImVec2 n{-d.y, d.x};
+    const float radius = std::max(len * 0.5f + 0.45f, 0.8f);
+    const ImVec2 flat{(a.x + b.x) / 2 - n.x * 0.3f, (a.y + b.y) / 2 - n.y * 0.3f};
+    const float rx = p.x - flat.x, ry = p.y - flat.y;
+    return rx * n.x + ry * n.y >= 0 && rx * rx + ry * ry <= radius * radius;
+}
+
 bool partHit(const netcheck::Part& part, ImVec2 p) {
+    if (part.pins.size() >= 2 && bodyStyleOf(part) == BodyStyle::ToPackage && toPackageBodyHit(part, p))
+        return true;
     for (std::size_t i = 0; i < part.pins.size(); ++i) {
         if (distanceToSegment(p, centre(part.pins[i].hole), centre(part.pins[i].hole)) < 0.45f) return true;
         if (i > 0 && distanceToSegment(p, centre(part.pins[i - 1].hole), centre(part.pins[i].hole)) < 0.35f) return true;
@@ -47,9 +66,10 @@ std::optional<ElementRef> elementAt(const netcheck::Board& board, const std::vec
         if (distanceToSegment(point, centre(board.links[i].from), centre(board.links[i].to)) < 0.3f)
             return ElementRef{ElementRef::Kind::Link, i};
     for (std::size_t i = board.wires.size(); i-- > 0;) {
-        const auto a = endpointPosition(board, spots, board.wires[i].from);
-        const auto b = endpointPosition(board, spots, board.wires[i].to);
-        if (a && b && distanceToSegment(point, *a, *b) < 0.3f) return ElementRef{ElementRef::Kind::Wire, i};
+        // Along the path the wire is drawn on, bend by bend.
+        const std::vector<ImVec2> route = wireRoute(board, spots, board.wires[i], i);
+        for (std::size_t j = 1; j < route.size(); ++j)
+            if (distanceToSegment(point, route[j - 1], route[j]) < 0.3f) return ElementRef{ElementRef::Kind::Wire, i};
     }
     if (auto index = offboardAt(spots, point)) return ElementRef{ElementRef::Kind::Offboard, *index};
     const int row = static_cast<int>(std::floor(point.y));
