@@ -49,12 +49,11 @@ void drawBoardPanel(const Document& doc, Commands commands, Selected& selection,
         const auto& board = doc.board();
         ImGui::Text("%s", netcheck::sizeInHoles(board.cols, board.rows).c_str());
         log.item("board-size");
-        ImGui::SameLine();
-        ImGui::TextDisabled("(%s)", netcheck::kHolesOrder);
         ImGui::Text("%s", netcheck::sizeInMm(board.widthMm(), board.heightMm()).c_str());
-        ImGui::SameLine();
-        ImGui::TextDisabled("(%s)", netcheck::kMillimetresOrder);
-        ImGui::TextDisabled("pitch %.2f mm", board.pitchMm);
+        ImGui::PushStyleColor(ImGuiCol_Text, ImGui::GetStyleColorVec4(ImGuiCol_TextDisabled));
+        ImGui::TextWrapped("(%s; %s), pitch %.2f mm", netcheck::kHolesOrder, netcheck::kMillimetresOrder,
+                           board.pitchMm);
+        ImGui::PopStyleColor();
         int rows = board.rows, cols = board.cols;
         ImGui::SetNextItemWidth(110);
         if (ImGui::InputInt("strips (rows)", &rows, 1, 5, ImGuiInputTextFlags_EnterReturnsTrue) && rows != board.rows)

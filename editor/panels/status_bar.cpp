@@ -61,7 +61,16 @@ const char* toolHint(const ToolState& state) {
 
 void drawStatusBar(const Document& doc, const HoverState& hover, const ToolState& tool, const std::string& status,
                    ImVec2 pos, ImVec2 size, const netcheck::BenchVoltages* voltages, TestLog& log) {
-    if (beginPanel("##status", pos, size)) {
+    // No title bar: a panel's title bar filled the whole strip and hid the line under it.
+    ImGui::SetNextWindowPos(pos, ImGuiCond_Always);
+    ImGui::SetNextWindowSize(size, ImGuiCond_Always);
+    ImGui::PushStyleVar(ImGuiStyleVar_WindowPadding, {10.0f, 4.0f});
+    const bool shown = ImGui::Begin("##status", nullptr,
+                                    ImGuiWindowFlags_NoDecoration | ImGuiWindowFlags_NoMove |
+                                        ImGuiWindowFlags_NoBringToFrontOnFocus |
+                                        ImGuiWindowFlags_NoSavedSettings);
+    ImGui::PopStyleVar();
+    if (shown) {
         const auto& board = doc.board();
         // The hole (or lug) under the mouse, its net, and with Bench voltages on what a meter
         // should read there; the tool's hint when the mouse is over no hole.
