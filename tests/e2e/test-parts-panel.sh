@@ -1,5 +1,6 @@
 #!/usr/bin/env bash
 # End to end, the Parts panel and the Check panel:
+#  - a new LED is named D1 (the kind table's reference letters);
 #  - typing in the search box filters the kinds, on and off the board, by name or label (the count
 #    shown is compared with README.md's table of part kinds, which a unit test keeps equal to the
 #    kind table);
@@ -14,6 +15,15 @@ run_under_xvfb "$0"
 board="$WORK/flasher-missing-cut.board.json"
 cp "$STRIPSMITH_SOURCE/samples/flasher-missing-cut.board.json" "$board"
 start_editor "$board"
+
+# An LED placed on the board is named as the diode it is (the kind table's rule): D1, not LED1.
+# (The sample's own LED is LED1, from its circuit; D1 is free.)
+click_at $(item_xy place-led)
+click_at $(hole_xy 0 1)
+click_at $(hole_xy 0 1)
+check "a new LED is named D1" wait_for_log "STRIPSMITH_E2E status Add D1$"
+keys Escape
+keys ctrl+z
 
 # Hints of the Link and Cut tools.
 keys l
