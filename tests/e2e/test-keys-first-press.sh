@@ -25,8 +25,7 @@ start_editor "$board"
 click_at $(item_xy board-title)
 keys ctrl+a
 type_text "Amp"
-keys Return
-keys ctrl+s
+keys Return ctrl+s  # one xdotool call: Ctrl+S follows Enter at once
 check "Ctrl+A selected the whole title (typing replaced it)" [ "$(field 'b["title"]')" = "Amp" ]
 check "Ctrl+S right after Enter in a text field saved on the first press" in_log "STRIPSMITH_E2E status Saved $board"
 
