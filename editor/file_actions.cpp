@@ -2,6 +2,7 @@
 #include "editor/file_actions.hpp"
 
 #include <spawn.h>
+#include <sys/wait.h>
 #include <unistd.h>
 
 #include <algorithm>
@@ -346,19 +347,24 @@ void drawRecoveryOffer(EditorApp& app) {
     ImGui::EndPopup();
 }
 
-// Opens the folder in the desktop's file manager (xdg-open, without a shell, not waited for).
-// Under the end-to-end log the command is logged instead, so tests open no file manager.
+// Opens the folder in the desktop's file manager with xdg-open. A short-lived sh starts it in the
+// background and ends at once (reaped here), so the file manager is never this editor's child and
+// leaves no zombie; the folder is passed as an argument, never as shell text. Under the
+// end-to-end log the command is logged instead, so tests open no file manager.
 void openFolder(EditorApp& app, const std::string& folder) {
     if (app.log.on()) {
         app.log.note("open-folder xdg-open " + folder);
         return;
     }
-    std::string program = "xdg-open";
-    std::string argument = folder;
-    char* argv[] = {program.data(), argument.data(), nullptr};
+    std::string shell = "sh", flag = "-c", script = "xdg-open \"$1\" >/dev/null 2>&1 &", name = "sh",
+                argument = folder;
+    char* argv[] = {shell.data(), flag.data(), script.data(), name.data(), argument.data(), nullptr};
     pid_t child = 0;
-    if (posix_spawnp(&child, "xdg-open", nullptr, nullptr, argv, environ) != 0)
-        app.say("Could not open the folder: xdg-open is not installed");
+    if (posix_spawnp(&child, "sh", nullptr, nullptr, argv, environ) != 0) {
+        app.say("Could not open the folder " + folder);
+        return;
+    }
+    waitpid(child, nullptr, 0);
 }
 
 void sheetPaperChoice(EditorApp& app) {
