@@ -47,9 +47,13 @@ void drawBoardPanel(const Document& doc, Commands commands, Selected& selection,
     const BoardPanel p{doc, commands, selection, view};
     if (beginPanel("Board", pos, size)) {
         const auto& board = doc.board();
-        ImGui::Text("%s", netcheck::sizeInHoles(board.cols, board.rows).c_str());
+        const std::string holes = netcheck::sizeInHoles(board.cols, board.rows);
+        const std::string millimetres = netcheck::sizeInMm(board.widthMm(), board.heightMm());
+        ImGui::TextUnformatted(holes.c_str());
         log.item("board-size");
-        ImGui::Text("%s", netcheck::sizeInMm(board.widthMm(), board.heightMm()).c_str());
+        ImGui::TextUnformatted(millimetres.c_str());
+        if (log.changed("board-size", holes + ", " + millimetres))
+            log.note("board-size " + holes + ", " + millimetres);
         ImGui::PushStyleColor(ImGuiCol_Text, ImGui::GetStyleColorVec4(ImGuiCol_TextDisabled));
         ImGui::TextWrapped("(%s; %s), pitch %.2f mm", netcheck::kHolesOrder, netcheck::kMillimetresOrder,
                            board.pitchMm);

@@ -21,6 +21,11 @@ cuts_before=$(field 'len(b["cuts"])')
 
 start_editor "$board"
 
+# Sizes in one order: holes across (columns) x strips (rows), millimetres width x height, from the
+# file's own numbers (pitch 2.54 mm).
+size=$(field '"%d x %d holes, %.1f x %.1f mm" % (b["board"]["cols"], b["board"]["rows"], b["board"]["cols"] * b["board"]["pitch_mm"], b["board"]["rows"] * b["board"]["pitch_mm"])')
+check "the Board panel writes the size as holes across x strips: $size" wait_for_log "STRIPSMITH_E2E note board-size $size\$"
+
 # Ctrl+A, type, Enter in the title field; then Ctrl+S once.
 click_at $(item_xy board-title)
 keys ctrl+a
