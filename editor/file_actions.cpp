@@ -1,6 +1,10 @@
 // Sections: loading and saving | actions | dialogs | autosave.
 #include "editor/file_actions.hpp"
 
+#include <spawn.h>
+#include <sys/wait.h>
+#include <unistd.h>
+
 #include <algorithm>
 #include <filesystem>
 #include <string>
@@ -114,12 +118,15 @@ bool saveBoardFile(EditorApp& app, const std::string& path, bool overwrite) {
     return true;
 }
 
-void exportSheetTo(EditorApp& app, const std::string& path) {
-    if (auto error = sheet::exportSheet(app.doc.board(), sheet::SheetOptions{}, path)) {
+bool exportSheetTo(EditorApp& app, const std::string& path, bool letter) {
+    sheet::SheetOptions options;
+    options.paper = letter ? sheet::Paper::Letter : sheet::Paper::A4;
+    if (auto error = sheet::exportSheet(app.doc.board(), options, path)) {
         showError(app, "Could not write the build sheet", *error);
-        return;
+        return false;
     }
     app.say("Wrote the build sheet " + path);
+    return true;
 }
 
 // ---- actions -----------------------------------------------------------------------------------
@@ -340,6 +347,75 @@ void drawRecoveryOffer(EditorApp& app) {
     ImGui::EndPopup();
 }
 
+// Opens the folder in the desktop's file manager with xdg-open. A short-lived sh starts it in the
+// background and ends at once (reaped here), so the file manager is never this editor's child and
+// leaves no zombie; the folder is passed as an argument, never as shell text. Under the
+// end-to-end log the command is logged instead, so tests open no file manager.
+void openFolder(EditorApp& app, const std::string& folder) {
+    if (app.log.on()) {
+        app.log.note("open-folder xdg-open " + folder);
+        return;
+    }
+    std::string shell = "sh", flag = "-c", script = "xdg-open \"$1\" >/dev/null 2>&1 &", name = "sh",
+                argument = folder;
+    char* argv[] = {shell.data(), flag.data(), script.data(), name.data(), argument.data(), nullptr};
+    pid_t child = 0;
+    if (posix_spawnp(&child, "sh", nullptr, nullptr, argv, environ) != 0) {
+        app.say("Could not open the folder " + folder);
+        return;
+    }
+    waitpid(child, nullptr, 0);
+}
+
+void sheetPaperChoice(EditorApp& app) {
+    SheetExport& s = app.dialogs.sheet;
+    ImGui::Text("Build sheet: %s", netcheck::escapeControls(s.path).c_str());
+    ImGui::Spacing();
+    ImGui::TextUnformatted("Paper");
+    // ISO 216: A4 is 210 x 297 mm. ANSI/ASME Y14.1: US Letter (size A) is 8.5 x 11 in,
+    // 215.9 x 279.4 mm.
+    if (ImGui::RadioButton("A4 (210 x 297 mm)", !s.letter)) s.letter = false;
+    app.log.item("sheet-a4");
+    if (ImGui::RadioButton("US Letter (8.5 x 11 in)", s.letter)) s.letter = true;
+    app.log.item("sheet-letter");
+    ImGui::Spacing();
+    const bool write = ImGui::Button("Export", {130, 0});
+    app.log.item("sheet-export");
+    ImGui::SameLine();
+    const bool cancel = ImGui::Button("Cancel", {130, 0});
+    app.log.item("sheet-cancel");
+    if (write) {
+        s.stage = exportSheetTo(app, s.path, s.letter) ? SheetExport::Stage::Written
+                                                       : SheetExport::Stage::Closed;
+    } else if (cancel) {
+        s.stage = SheetExport::Stage::Closed;
+    }
+}
+
+void sheetWritten(EditorApp& app) {
+    SheetExport& s = app.dialogs.sheet;
+    ImGui::Text("The build sheet (%s) is written to", s.letter ? "US Letter" : "A4");
+    ImGui::TextUnformatted(netcheck::escapeControls(s.path).c_str());
+    ImGui::Spacing();
+    if (ImGui::Button("Open folder", {130, 0})) openFolder(app, folderOf(s.path).empty() ? "." : folderOf(s.path));
+    app.log.item("sheet-open-folder");
+    ImGui::SameLine();
+    if (ImGui::Button("Close", {130, 0})) s.stage = SheetExport::Stage::Closed;
+    app.log.item("sheet-close");
+}
+
+void drawSheetExport(EditorApp& app) {
+    const char* title = "Export build sheet";
+    const bool wanted = app.dialogs.sheet.stage != SheetExport::Stage::Closed;
+    if (wanted && !ImGui::IsPopupOpen(title)) ImGui::OpenPopup(title);
+    centreNext();
+    if (!ImGui::BeginPopupModal(title, nullptr, ImGuiWindowFlags_AlwaysAutoResize)) return;
+    if (app.dialogs.sheet.stage == SheetExport::Stage::ChoosePaper) sheetPaperChoice(app);
+    else if (app.dialogs.sheet.stage == SheetExport::Stage::Written) sheetWritten(app);
+    if (app.dialogs.sheet.stage == SheetExport::Stage::Closed) ImGui::CloseCurrentPopup();
+    ImGui::EndPopup();
+}
+
 // Which dialogs are open, so scripted tests wait for a dialog before they type or click in it.
 void logDialogs(EditorApp& app) {
     if (!app.log.on()) return;
@@ -350,6 +426,9 @@ void logDialogs(EditorApp& app) {
     if (!app.dialogs.errorText.empty())
         state += " error " + app.dialogs.errorTitle + ": " + app.dialogs.errorText;
     if (!app.dialogs.notice.empty()) state += " note " + app.dialogs.notice;
+    if (app.dialogs.sheet.stage == SheetExport::Stage::ChoosePaper) state += " sheet-paper";
+    if (app.dialogs.sheet.stage == SheetExport::Stage::Written)
+        state += " sheet-written " + app.dialogs.sheet.path;
     std::replace(state.begin(), state.end(), '\n', ' ');
     app.log.dialogs(state);
 }
@@ -369,7 +448,10 @@ void drawFileDialogs(EditorApp& app) {
             break;
         case FileChooser::Purpose::OpenCircuit:
         case FileChooser::Purpose::ExportCircuit: app.chosenForPanel = path; break;
-        case FileChooser::Purpose::ExportSheet: exportSheetTo(app, path); break;
+        case FileChooser::Purpose::ExportSheet:
+            app.dialogs.sheet.path = path;
+            app.dialogs.sheet.stage = SheetExport::Stage::ChoosePaper;
+            break;
         }
     } else if (wasOpen && !app.chooser.isOpen() && !app.dialogs.askUnsaved) {
         app.dialogs.pending = PendingAction::None;  // Save As cancelled: so is what waited for it
@@ -377,6 +459,7 @@ void drawFileDialogs(EditorApp& app) {
     drawUnsavedPrompt(app);
     drawDiskChanged(app);
     drawRecoveryOffer(app);
+    drawSheetExport(app);
     bool clearError = false, clearNotice = false;
     std::string errorTitle = app.dialogs.errorTitle.empty() ? "Problem" : app.dialogs.errorTitle;
     drawMessage(app, errorTitle.c_str(), app.dialogs.errorText, clearError);

@@ -26,8 +26,9 @@ bool loadBoardFile(EditorApp& app, const std::string& path);
 /// is not made: it asks (Save As, Overwrite, Reload) and returns false.
 bool saveBoardFile(EditorApp& app, const std::string& path, bool overwrite = false);
 
-/// Writes the printable build sheet (PDF or SVG by the name's ending); errors in a dialog.
-void exportSheetTo(EditorApp& app, const std::string& path);
+/// Writes the printable build sheet (PDF or SVG by the name's ending) on A4 or US Letter; false
+/// with an error dialog on failure.
+bool exportSheetTo(EditorApp& app, const std::string& path, bool letter);
 
 /// Draws the chooser, the unsaved-changes prompt, error and notice dialogs, and the recovery offer.
 void drawFileDialogs(EditorApp& app);

@@ -2,6 +2,7 @@
 #include "editor/frame.hpp"
 
 #include <imgui.h>
+#include <imgui_internal.h>  // GetActiveID, GetInputTextState: which text field has the keys now
 #include <SFML/Window/Keyboard.hpp>
 
 #include "editor/app/look.hpp"
@@ -129,6 +130,11 @@ void turn(EditorApp& app) {
         rotateSelection(editContext(app));
 }
 
+bool textFieldActive() {
+    const ImGuiID active = ImGui::GetActiveID();
+    return active != 0 && ImGui::GetInputTextState(active) != nullptr;
+}
+
 bool arrowOrMouseHeld() {
     using K = sf::Keyboard;
     for (K::Key key : {K::Left, K::Right, K::Up, K::Down})
@@ -140,7 +146,10 @@ bool arrowOrMouseHeld() {
 
 void handleShortcuts(EditorApp& app) {
     ImGuiIO& io = ImGui::GetIO();
-    if (io.WantTextInput ||
+    // Whether a text field holds the keys now, at the end of this frame's widgets; not
+    // io.WantTextInput, which is last frame's: a field that Enter closed in the last frame still
+    // read as typing, and Ctrl+S in the next frame was lost.
+    if (textFieldActive() ||
         ImGui::IsPopupOpen("", ImGuiPopupFlags_AnyPopupId | ImGuiPopupFlags_AnyPopupLevel))
         return;
     if (io.KeyCtrl) {
@@ -215,8 +224,10 @@ void drawCanvasWindow(EditorApp& app, const PanelLayout& l) {
 void drawPanels(EditorApp& app, const PanelLayout& l) {
     const float top = l.menuHeight;
     const float height = l.display.y - top - l.statusHeight;
-    drawPartsPanel(toolContext(app), app.log, {0, top}, {l.leftWidth, height * 0.68f});
-    drawBoardPanel(app.doc, app.commands(), app.selection, app.view, {0, top + height * 0.68f},
+    // A new off-board part is scrolled into sight.
+    if (const auto added = drawPartsPanel(toolContext(app), app.log, {0, top}, {l.leftWidth, height * 0.68f}))
+        centreOn(app.view, app.doc.board(), *added);
+    drawBoardPanel(app.doc, app.commands(), app.selection, app.view, app.log, {0, top + height * 0.68f},
                    {l.leftWidth, height * 0.32f});
     const float rightX = l.display.x - l.rightWidth;
     drawPropertiesPanel(editContext(app), app.log, {rightX, top}, {l.rightWidth, height * 0.38f});
@@ -226,10 +237,10 @@ void drawPanels(EditorApp& app, const PanelLayout& l) {
     const bool showVoltages = app.view.showBenchVoltages && voltages && voltages->voltages.value;
     drawStatusBar(app.doc, app.hover, app.tool, app.status, {0, l.display.y - l.statusHeight},
                   {l.display.x, l.statusHeight},
-                  showVoltages ? &*voltages->voltages.value : nullptr);
+                  showVoltages ? &*voltages->voltages.value : nullptr, app.log);
     drawCircuitPanel(circuitPanelContext(app));
     drawJfetBiasPanel({app.doc, app.jfetPanel, app.commands(), app.log});
-    drawHelpWindow(app.view.showHelp);
+    drawHelpWindow(app.view.showHelp, app.log);
 }
 
 }  // namespace

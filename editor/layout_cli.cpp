@@ -11,6 +11,7 @@
 #include "netcheck/file/board_file.hpp"
 #include "netcheck/file/file_io.hpp"
 #include "netcheck/layout/layout_engine.hpp"
+#include "netcheck/model/board_size.hpp"
 #include "netcheck/model/printable.hpp"
 #include "netcheck/spice/circuit_loader.hpp"
 
@@ -164,8 +165,8 @@ int runLayoutCommand(int argc, char** argv) {
         return 1;
     }
     const netcheck::LayoutScore& s = result.score;
-    std::printf("area %ld holes (%d strips x %d holes), %d links, %d cuts, link length %d\n",
-                s.area(), s.rows, s.cols, s.links, s.cuts, s.linkLength);
+    std::printf("area %ld holes (%s), %d links, %d cuts, link length %d\n", s.area(),
+                netcheck::sizeInHoles(s.cols, s.rows).c_str(), s.links, s.cuts, s.linkLength);
     std::printf("lower bound: %d strips, %d holes along the strips (area at least %ld); the part "
                 "order found needs %d strips if no net changed strip\n",
                 result.bounds.strips, result.bounds.columns,

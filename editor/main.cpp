@@ -136,7 +136,7 @@ void renderFrame(sf::Window& window, EditorApp& app, float dt, platform::DrawDat
     ImGui::Render();
     const ImVec2 size = ImGui::GetIO().DisplaySize;
     glViewport(0, 0, static_cast<int>(size.x), static_cast<int>(size.y));
-    glClearColor(0.11f, 0.125f, 0.15f, 1.0f);
+    glClearColor(0.925f, 0.918f, 0.894f, 1.0f);  // the theme's panel paper (editor/app/look.cpp)
     glClear(GL_COLOR_BUFFER_BIT);
     splitter.split(ImGui::GetDrawData());
     ImGui_ImplOpenGL2_RenderDrawData(ImGui::GetDrawData());

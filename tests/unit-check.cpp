@@ -256,9 +256,9 @@ TEST_CASE("check") {
         CHECK(*dangling[0]->hole == h("B2"));
         const auto trim = ofType(report.warnings, "trim");
         REQUIRE(trim.size() == 1);
-        // Used rows B..D, columns 2..5: 3x4 holes; 4 x 2.54 = 10.16 mm, 3 x 2.54 = 7.62 mm.
+        // Used rows B..D, columns 2..5: 4 x 3 holes (holes across x strips); 4 x 2.54 = 10.16 mm, 3 x 2.54 = 7.62 mm.
         CHECK(trim[0]->message.find("1 row at the top, 2 rows at the bottom, 1 column at the left "
-                                    "and 5 columns at the right: 3x4 holes") != std::string::npos);
+                                    "and 5 columns at the right: 4 x 3 holes") != std::string::npos);
         CHECK(trim[0]->message.find("10.2 x 7.6 mm") != std::string::npos);
         CHECK(report.islands.size() == 3);
     }

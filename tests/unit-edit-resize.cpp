@@ -46,7 +46,7 @@ TEST_CASE("resize board") {
         CHECK(board.cuts[1].hole == Hole{6, 11});
         CHECK(*board.wires[0].to.hole == Hole{7, 12});
         CHECK(board.parts.size() == start.parts.size());
-        CHECK(grow.label() == "Resize board to 8 \u00d7 14");
+        CHECK(grow.label() == "Resize board to 14 x 8 holes");  // holes across x strips
         CHECK(grow.touched().empty());
         grow.revert(board);
         CHECK(board == start);

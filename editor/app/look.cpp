@@ -46,6 +46,33 @@ std::string missingAssets() {
     return {};
 }
 
+// ---- fonts ---------------------------------------------------------------------------------------
+
+const ImWchar* uiGlyphRanges() {
+    // Every block the interface's own text draws from (tests/editor/unit-glyphs.cpp checks each
+    // character of every string literal in editor/ and netcheck/ against the font built with
+    // these): Latin and Latin-1 (degree sign, micro sign, middle dot, multiplication sign), Greek
+    // (omega for ohms, mu), general punctuation (en and em dashes, bullet, ellipsis), letterlike
+    // symbols (the ohm sign), arrows (the nudge keys, "moved ->"), mathematical operators (minus,
+    // less- and greater-or-equal).
+    static const ImWchar kRanges[] = {
+        0x0020, 0x00FF,  // Basic Latin, Latin-1 Supplement
+        0x0370, 0x03FF,  // Greek and Coptic
+        0x2000, 0x206F,  // General Punctuation
+        0x2100, 0x214F,  // Letterlike Symbols
+        0x2190, 0x21FF,  // Arrows
+        0x2200, 0x22FF,  // Mathematical Operators
+        0,
+    };
+    return kRanges;
+}
+
+ImFont* addUiFont(ImFontAtlas& atlas, const std::string& path, float pixels) {
+    ImFontConfig config;
+    config.OversampleH = 2;
+    return atlas.AddFontFromFileTTF(path.c_str(), pixels, &config, uiGlyphRanges());
+}
+
 bool loadFonts() {
     ImGuiIO& io = ImGui::GetIO();
     const std::string path = assetsFolder() + "/fonts/DejaVuSans.ttf";
@@ -53,44 +80,104 @@ bool loadFonts() {
         io.Fonts->AddFontDefault();
         return false;
     }
-    ImFontConfig config;
-    config.OversampleH = 2;
-    io.Fonts->AddFontFromFileTTF(path.c_str(), 15.0f, &config, io.Fonts->GetGlyphRangesDefault());
-    io.Fonts->AddFontFromFileTTF(path.c_str(), 30.0f, &config, io.Fonts->GetGlyphRangesDefault());
+    addUiFont(*io.Fonts, path, look::kFontPixels);
+    addUiFont(*io.Fonts, path, look::kFontPixels * 2.0f);
     return true;
 }
 
+// ---- the theme -----------------------------------------------------------------------------------
+// Stripsmith's own look, all in this one place. Panels are warm light grey "paper" with near-black
+// ink: easy on the eyes over long sessions under bench lighting, and screenshots print as they
+// look. Colour is kept for meaning: a slate blue marks what is active or chosen (not copper, which
+// on the canvas means copper), and the finding colours are dark enough to read on the paper. The
+// board itself keeps the trade's colours (copper, IEC 60062 bands, red and black supply wires):
+// editor/canvas/palette.hpp.
+
+namespace {
+
+ImVec4 rgb(int r, int g, int b, float a = 1.0f) {
+    return {static_cast<float>(r) / 255.0f, static_cast<float>(g) / 255.0f,
+            static_cast<float>(b) / 255.0f, a};
+}
+
+// Greys from the panel "paper" to the ink, warm (a touch of yellow) so long sessions do not feel
+// clinical.
+const ImVec4 kPaper = rgb(236, 234, 228);        // panel background
+const ImVec4 kPaperDeep = rgb(226, 223, 215);    // menu bar, title bars, headers at rest
+const ImVec4 kPaperRaised = rgb(247, 246, 242);  // text fields, popups
+const ImVec4 kRule = rgb(190, 186, 176);         // separators and borders
+const ImVec4 kControl = rgb(214, 211, 202);      // buttons at rest
+const ImVec4 kControlHover = rgb(200, 196, 186);
+const ImVec4 kInk = rgb(34, 37, 42);             // text: contrast about 13:1 on the paper
+const ImVec4 kInkSoft = rgb(98, 102, 108);       // secondary text: about 5:1, still readable
+// The one accent: slate blue for the active tool, chosen rows, checks, sliders, text selection.
+const ImVec4 kAccent = rgb(58, 96, 150);
+const ImVec4 kAccentSoft = rgb(58, 96, 150, 0.22f);
+const ImVec4 kAccentHover = rgb(58, 96, 150, 0.35f);
+
+void colours(ImGuiStyle& style) {
+    ImVec4* c = style.Colors;
+    c[ImGuiCol_Text] = kInk;
+    c[ImGuiCol_TextDisabled] = kInkSoft;
+    c[ImGuiCol_WindowBg] = kPaper;
+    c[ImGuiCol_ChildBg] = kPaper;
+    c[ImGuiCol_PopupBg] = kPaperRaised;
+    c[ImGuiCol_MenuBarBg] = kPaperDeep;
+    c[ImGuiCol_TitleBg] = c[ImGuiCol_TitleBgActive] = c[ImGuiCol_TitleBgCollapsed] = kPaperDeep;
+    c[ImGuiCol_Border] = kRule;
+    c[ImGuiCol_BorderShadow] = {0, 0, 0, 0};
+    c[ImGuiCol_Separator] = kRule;
+    c[ImGuiCol_FrameBg] = kPaperRaised;
+    c[ImGuiCol_FrameBgHovered] = rgb(255, 255, 252);
+    c[ImGuiCol_FrameBgActive] = rgb(255, 255, 255);
+    c[ImGuiCol_Button] = kControl;
+    c[ImGuiCol_ButtonHovered] = kControlHover;
+    c[ImGuiCol_ButtonActive] = kAccentHover;
+    c[ImGuiCol_Header] = kAccentSoft;  // a chosen row (finding, repair step, menu item)
+    c[ImGuiCol_HeaderHovered] = kAccentHover;
+    c[ImGuiCol_HeaderActive] = kAccentHover;
+    c[ImGuiCol_CheckMark] = kAccent;
+    c[ImGuiCol_SliderGrab] = kAccent;
+    c[ImGuiCol_SliderGrabActive] = kAccent;
+    c[ImGuiCol_TextSelectedBg] = kAccentHover;
+    c[ImGuiCol_ScrollbarBg] = kPaper;
+    c[ImGuiCol_ScrollbarGrab] = kControl;
+    c[ImGuiCol_ScrollbarGrabHovered] = kControlHover;
+    c[ImGuiCol_ScrollbarGrabActive] = kRule;
+    c[ImGuiCol_ModalWindowDimBg] = rgb(34, 37, 42, 0.35f);
+    c[ImGuiCol_TableHeaderBg] = kPaperDeep;
+    c[ImGuiCol_TableBorderLight] = kRule;
+    c[ImGuiCol_TableBorderStrong] = kRule;
+}
+
+// Spacing: a little more air than ImGui's defaults so rows are easy to hit and to read; small
+// rounding on controls only (panels are fixed tiles, square).
+void spacing(ImGuiStyle& style) {
+    style.WindowPadding = {10, 10};
+    style.FramePadding = {8, 5};
+    style.ItemSpacing = {8, 6};
+    style.ItemInnerSpacing = {6, 4};
+    style.IndentSpacing = 18;
+    style.ScrollbarSize = 13;
+    style.WindowRounding = 0;
+    style.ChildRounding = 0;
+    style.PopupRounding = 4;
+    style.FrameRounding = 3;
+    style.GrabRounding = 3;
+    style.ScrollbarRounding = 3;
+    style.TabRounding = 3;
+    style.WindowBorderSize = 1;
+    style.FrameBorderSize = 1;  // fields and buttons keep their edge on the light paper
+    style.PopupBorderSize = 1;
+}
+
+}  // namespace
+
 void applyLook(int uiScale) {
     ImGuiStyle style;
-    ImGui::StyleColorsDark(&style);
-    style.WindowRounding = 0.0f;
-    style.FrameRounding = 4.0f;
-    style.GrabRounding = 4.0f;
-    style.WindowBorderSize = 1.0f;
-    style.FramePadding = {7, 4};
-    style.ItemSpacing = {8, 6};
-    ImVec4* c = style.Colors;
-    const ImVec4 ink{0.11f, 0.125f, 0.15f, 1.0f};
-    c[ImGuiCol_WindowBg] = ink;
-    c[ImGuiCol_ChildBg] = {0.09f, 0.10f, 0.12f, 1.0f};
-    c[ImGuiCol_PopupBg] = {0.13f, 0.145f, 0.17f, 0.98f};
-    c[ImGuiCol_MenuBarBg] = {0.15f, 0.165f, 0.19f, 1.0f};
-    c[ImGuiCol_TitleBg] = c[ImGuiCol_TitleBgActive] = {0.16f, 0.18f, 0.21f, 1.0f};
-    c[ImGuiCol_Text] = {0.93f, 0.94f, 0.95f, 1.0f};
-    c[ImGuiCol_TextDisabled] = {0.60f, 0.63f, 0.67f, 1.0f};
-    // Copper accents for active things.
-    const ImVec4 copper{0.87f, 0.56f, 0.29f, 1.0f};
-    c[ImGuiCol_Button] = {0.22f, 0.25f, 0.29f, 1.0f};
-    c[ImGuiCol_ButtonHovered] = {0.32f, 0.36f, 0.41f, 1.0f};
-    c[ImGuiCol_ButtonActive] = {0.68f, 0.42f, 0.20f, 1.0f};
-    c[ImGuiCol_Header] = {0.25f, 0.28f, 0.33f, 1.0f};
-    c[ImGuiCol_HeaderHovered] = {0.34f, 0.37f, 0.43f, 1.0f};
-    c[ImGuiCol_HeaderActive] = {0.68f, 0.42f, 0.20f, 1.0f};
-    c[ImGuiCol_FrameBg] = {0.17f, 0.19f, 0.22f, 1.0f};
-    c[ImGuiCol_FrameBgHovered] = {0.23f, 0.26f, 0.30f, 1.0f};
-    c[ImGuiCol_CheckMark] = copper;
-    c[ImGuiCol_SliderGrab] = copper;
-    c[ImGuiCol_Separator] = {0.28f, 0.30f, 0.34f, 1.0f};
+    ImGui::StyleColorsLight(&style);
+    colours(style);
+    spacing(style);
     style.ScaleAllSizes(static_cast<float>(uiScale));
     ImGui::GetStyle() = style;
     ImGuiIO& io = ImGui::GetIO();

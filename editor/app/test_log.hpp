@@ -28,6 +28,9 @@ public:
 
     void status(const std::string& message) const { line("status " + message); }
     void note(const std::string& text) const { line("note " + text); }
+    /// The status line's left part as drawn, when it changes: "pointer-line A5  net VCC  meter:
+    /// 9.00 V (8.55 V to 9.45 V)", or the tool's hint. (Not "status ...": that is the last action.)
+    void pointerLine(const std::string& text) const { line("pointer-line " + text); }
     void finding(const netcheck::Finding& finding) const {
         line("finding " + std::string(finding.id()) + " " + finding.message);
     }

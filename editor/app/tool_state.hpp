@@ -24,6 +24,8 @@ struct ToolState {
     std::optional<netcheck::Hole> firstEnd;  ///< two-lead part or link: first end picked
     std::optional<netcheck::Hole> pressHole; ///< where the press of a possible drag began
 
+    std::string partSearch;             ///< the Parts panel's search box: kinds shown by name
+
     // Wires.
     std::string wireColour = "red";
     std::optional<netcheck::Endpoint> wireStart;

@@ -3,6 +3,7 @@
 #pragma once
 
 #include <optional>
+#include <string>
 
 #include <imgui.h>
 
@@ -22,6 +23,8 @@ struct ViewState {
     bool showHelp = false;
     bool showBenchVoltages = false;  ///< View > Bench voltages: expected DC voltage per net
     std::optional<int> focusedFinding;  ///< index into errors then warnings
+    std::string focusedFindingKey;      ///< what the focused finding said, to follow it across edits
+    unsigned focusRevision = 0;         ///< the document revision focusedFinding indexes
     std::optional<int> previewStep;     ///< repair plan step shown ghosted on the board
     ImVec2 canvasMin{0, 0};        ///< the canvas rectangle on screen, last frame
     ImVec2 canvasMax{0, 0};

@@ -120,7 +120,9 @@ bool FileChooser::accept() {
 bool FileChooser::draw() {
     if (!open_) return false;
     const char* title = titleFor(purpose_);
-    if (justOpened_) {
+    // Open while open_ says so: a popup opened in the frame a menu item closed its menu is closed
+    // with the menu (File > Export build sheet never showed the chooser), so it is opened again.
+    if (justOpened_ || !ImGui::IsPopupOpen(title)) {
         ImGui::OpenPopup(title);
         justOpened_ = false;
     }

@@ -1,6 +1,7 @@
 // The menus: File, Edit, View, Help.
 #include <imgui.h>
 
+#include "editor/app/look.hpp"
 #include "editor/panels/panels.hpp"
 
 namespace stripsmith {
@@ -19,7 +20,10 @@ void exportSheet(const MenuContext& c) {
 FileRequest fileMenu(const MenuContext& c) {
     using Kind = FileRequest::Kind;
     FileRequest request;
-    if (!ImGui::BeginMenu("File")) return request;
+    if (!ImGui::BeginMenu("File")) {
+        c.log.item("menu-file");
+        return request;
+    }
     if (ImGui::MenuItem("New board", "Ctrl+N")) request.kind = Kind::New;
     if (ImGui::MenuItem("Open...", "Ctrl+O")) request.kind = Kind::Open;
     if (ImGui::BeginMenu("Open recent", !c.recent.paths().empty())) {
@@ -31,6 +35,7 @@ FileRequest fileMenu(const MenuContext& c) {
     if (ImGui::MenuItem("Save as...", "Ctrl+Shift+S")) request.kind = Kind::SaveAs;
     ImGui::Separator();
     if (ImGui::MenuItem("Export build sheet (PDF/SVG)...")) exportSheet(c);
+    c.log.item("menu-export-sheet");
     ImGui::Separator();
     if (ImGui::MenuItem("Quit", "Ctrl+Q")) request.kind = Kind::Quit;
     ImGui::EndMenu();
@@ -98,10 +103,10 @@ void titleAndCheck(const Document& doc) {
     const std::size_t warnings = report.warnings.size();
     const std::size_t errors = report.errors.size();
     if (report.ok())
-        ImGui::TextColored({0.45f, 0.9f, 0.55f, 1.0f}, "Check: OK (%zu warning%s)", warnings,
+        ImGui::TextColored(look::kGoodText, "Check: OK (%zu warning%s)", warnings,
                            warnings == 1 ? "" : "s");
     else
-        ImGui::TextColored({1.0f, 0.5f, 0.45f, 1.0f}, "Check: %zu error%s", errors,
+        ImGui::TextColored(look::kErrorText, "Check: %zu error%s", errors,
                            errors == 1 ? "" : "s");
 }
 

@@ -4,6 +4,7 @@
 
 #include "editor/panels/panels.hpp"
 #include "netcheck/edit/edit.hpp"
+#include "netcheck/model/board_size.hpp"
 
 namespace stripsmith {
 namespace {
@@ -41,18 +42,27 @@ void edgeRow(const BoardPanel& p, const char* name, netcheck::edit::EdgeChange g
 
 }  // namespace
 
-void drawBoardPanel(const Document& doc, Commands commands, Selected& selection, ViewState& view, ImVec2 pos,
-                    ImVec2 size) {
+void drawBoardPanel(const Document& doc, Commands commands, Selected& selection, ViewState& view, TestLog& log,
+                    ImVec2 pos, ImVec2 size) {
     const BoardPanel p{doc, commands, selection, view};
     if (beginPanel("Board", pos, size)) {
         const auto& board = doc.board();
-        ImGui::Text("%d x %d holes", board.cols, board.rows);
-        ImGui::Text("%.1f x %.1f mm", board.widthMm(), board.heightMm());
-        ImGui::TextDisabled("(%d strips of %d holes, pitch %.2f mm)", board.rows, board.cols, board.pitchMm);
+        const std::string holes = netcheck::sizeInHoles(board.cols, board.rows);
+        const std::string millimetres = netcheck::sizeInMm(board.widthMm(), board.heightMm());
+        ImGui::TextUnformatted(holes.c_str());
+        log.item("board-size");
+        ImGui::TextUnformatted(millimetres.c_str());
+        if (log.changed("board-size", holes + ", " + millimetres))
+            log.note("board-size " + holes + ", " + millimetres);
+        ImGui::PushStyleColor(ImGuiCol_Text, ImGui::GetStyleColorVec4(ImGuiCol_TextDisabled));
+        ImGui::TextWrapped("(%s; %s), pitch %.2f mm", netcheck::kHolesOrder, netcheck::kMillimetresOrder,
+                           board.pitchMm);
+        ImGui::PopStyleColor();
         int rows = board.rows, cols = board.cols;
         ImGui::SetNextItemWidth(110);
         if (ImGui::InputInt("strips (rows)", &rows, 1, 5, ImGuiInputTextFlags_EnterReturnsTrue) && rows != board.rows)
             resize(p, {0, rows - board.rows, 0, 0});
+        log.item("board-strips");
         ImGui::SetNextItemWidth(110);
         if (ImGui::InputInt("holes (cols)", &cols, 1, 5, ImGuiInputTextFlags_EnterReturnsTrue) && cols != board.cols)
             resize(p, {0, 0, 0, cols - board.cols});
@@ -77,6 +87,7 @@ void drawBoardPanel(const Document& doc, Commands commands, Selected& selection,
         if (ImGui::InputTextWithHint("##title", "board title", &title, ImGuiInputTextFlags_EnterReturnsTrue) &&
             title != board.title)
             p.commands.perform(std::make_unique<netcheck::edit::SetTitle>(board, title));
+        log.item("board-title");
     }
     ImGui::End();
 }

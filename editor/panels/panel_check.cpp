@@ -8,6 +8,7 @@
 #include <imgui.h>
 
 #include "editor/app/finding_fix.hpp"
+#include "editor/app/look.hpp"
 #include "editor/canvas/canvas.hpp"
 #include "editor/panels/panels.hpp"
 #include "netcheck/repair/repair_plan.hpp"
@@ -22,27 +23,58 @@ struct CheckPanel {
     TestLog& log;
 };
 
+std::string findingKey(const netcheck::Finding& finding) {
+    return std::string(finding.id()) + " " + finding.message;
+}
+
+// After an edit or an undo the list is made anew and an index may name another finding: the
+// focus follows the finding it was on, or goes when that finding is gone. It never moves the view.
+void followFocusedFinding(const Document& doc, ViewState& view) {
+    if (!view.focusedFinding || view.focusRevision == doc.revision()) return;
+    view.focusRevision = doc.revision();
+    const auto& report = doc.report();
+    int index = 0;
+    for (const auto* list : {&report.errors, &report.warnings})
+        for (const netcheck::Finding& finding : *list) {
+            if (findingKey(finding) == view.focusedFindingKey) {
+                view.focusedFinding = index;
+                return;
+            }
+            ++index;
+        }
+    view.focusedFinding.reset();
+}
+
 // Returns true when its fix button was pressed (applied after the list, which the fix changes).
 bool findingRow(const CheckPanel& p, const netcheck::Finding& finding, int index) {
     bool fixPressed = false;
     ImGui::PushID(index);
     const bool error = finding.severity() == netcheck::Severity::Error;
     const bool focused = p.view.focusedFinding && *p.view.focusedFinding == index;
-    ImGui::PushStyleColor(ImGuiCol_Text, error ? ImVec4(1.0f, 0.5f, 0.45f, 1.0f) : ImVec4(1.0f, 0.78f, 0.35f, 1.0f));
+    ImGui::PushStyleColor(ImGuiCol_Text, error ? look::kErrorText : look::kWarningText);
     const std::string head = std::string(error ? "Error: " : "Warning: ") + std::string(finding.id());
     const bool clicked = ImGui::Selectable(head.c_str(), focused);
     p.log.item("finding-" + std::to_string(index));
-    if (clicked) {
-        p.view.focusedFinding = focused ? std::nullopt : std::optional<int>(index);
-        if (!focused)
-            if (auto where = findingLocation(p.doc.board(), finding)) centreOn(p.view, p.doc.board(), *where);
-    }
     ImGui::PopStyleColor();
+    // The whole row answers a click, not only its header: the message under it too.
     ImGui::Indent();
+    ImGui::BeginGroup();
     ImGui::PushTextWrapPos(0.0f);
     ImGui::TextUnformatted(finding.message.c_str());
     if (!finding.fix.empty()) ImGui::TextDisabled("%s", finding.fix.c_str());
     ImGui::PopTextWrapPos();
+    ImGui::EndGroup();
+    const bool textClicked = ImGui::IsItemHovered() && ImGui::IsMouseClicked(ImGuiMouseButton_Left);
+    p.log.item("finding-text-" + std::to_string(index));
+    ImGui::Unindent();
+    if (clicked || textClicked) {
+        p.view.focusedFinding = focused ? std::nullopt : std::optional<int>(index);
+        p.view.focusedFindingKey = findingKey(finding);
+        p.view.focusRevision = p.doc.revision();
+        if (!focused)
+            if (auto where = findingLocation(p.doc.board(), finding)) centreOn(p.view, p.doc.board(), *where);
+    }
+    ImGui::Indent();
     if (const auto fix = fixCommand(p.doc.board(), finding)) {
         const std::string label = finding.suggestedCut          ? "Apply cut " + netcheck::cutName(*finding.suggestedCut)
                                   : finding.suggestedLinks.empty() ? fix->label()
@@ -70,7 +102,7 @@ std::unique_ptr<netcheck::edit::Command> planRows(const CheckPanel& p, std::opti
         ImGui::TextDisabled("No safe repair found.");
     } else {
         const int cleared = plan.errorsBefore - plan.errorsAfter;
-        ImGui::TextColored({0.55f, 0.8f, 1.0f, 1.0f}, "Repair plan: %zu step%s clear%s %d of %d error%s", plan.steps.size(),
+        ImGui::TextColored(look::kPlanText, "Repair plan: %zu step%s clear%s %d of %d error%s", plan.steps.size(),
                            plan.steps.size() == 1 ? "" : "s", plan.steps.size() == 1 ? "s" : "", cleared, plan.errorsBefore,
                            plan.errorsBefore == 1 ? "" : "s");
         if (ImGui::Button(plan.steps.size() == 1 ? "Apply the repair" : "Apply all steps")) pressed = netcheck::planCommand(p.doc.board(), plan);
@@ -111,11 +143,14 @@ std::unique_ptr<netcheck::edit::Command> planRows(const CheckPanel& p, std::opti
 void drawCheckPanel(const Document& doc, Commands commands, ViewState& view, TestLog& log, ImVec2 pos,
                     ImVec2 size) {
     const CheckPanel p{doc, view, log};
+    followFocusedFinding(doc, view);
+    const std::string focus = view.focusedFinding ? std::to_string(*view.focusedFinding) + " " + view.focusedFindingKey : "-";
+    if (log.changed("focused-finding", focus)) log.note("focused-finding " + focus);
     if (beginPanel("Check", pos, size)) {
         const auto& report = doc.report();
         if (!report.hasCircuit) ImGui::TextDisabled("No intended circuit: checking the board's own faults only.");
         if (report.ok() && report.warnings.empty()) {
-            ImGui::TextColored({0.45f, 0.9f, 0.55f, 1.0f}, "All clear: no errors, no warnings.");
+            ImGui::TextColored(look::kGoodText, "All clear: no errors, no warnings.");
         } else {
             ImGui::Text("%zu error%s, %zu warning%s", report.errors.size(), report.errors.size() == 1 ? "" : "s",
                         report.warnings.size(), report.warnings.size() == 1 ? "" : "s");

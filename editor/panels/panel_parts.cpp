@@ -1,6 +1,7 @@
 // "Parts": tools, the part palette, off-board parts and options for the next placement.
 #include <algorithm>
 #include <array>
+#include <cctype>
 #include <string>
 
 #include <imgui.h>
@@ -50,6 +51,27 @@ void placingOptions(ToolState& t) {
     }
 }
 
+// The hint under the Link and Cut tools, as the part and wire tools have theirs.
+void toolHint(const char* text, TestLog& log) {
+    ImGui::Separator();
+    ImGui::TextWrapped("%s", text);
+    if (log.changed("tool-hint", text)) log.note(std::string("tool-hint ") + text);
+}
+
+// A kind matches the search when its file name or its label holds the text, in any case.
+bool matchesSearch(const netcheck::PartKind& kind, const std::string& search) {
+    if (search.empty()) return true;
+    auto lower = [](std::string_view text) {
+        std::string out(text);
+        std::transform(out.begin(), out.end(), out.begin(),
+                       [](unsigned char c) { return static_cast<char>(std::tolower(c)); });
+        return out;
+    };
+    const std::string wanted = lower(search);
+    return lower(kind.name).find(wanted) != std::string::npos ||
+           lower(kind.label).find(wanted) != std::string::npos;
+}
+
 void wireOptions(ToolState& t) {
     static constexpr std::array<const char*, 10> kColours{"red", "black", "yellow", "green", "blue",
                                                          "white", "orange", "brown", "grey", "violet"};
@@ -66,9 +88,11 @@ void wireOptions(ToolState& t) {
 
 }  // namespace
 
-void drawPartsPanel(const ToolContext& tools, TestLog& log, ImVec2 pos, ImVec2 size) {
+std::optional<ImVec2> drawPartsPanel(const ToolContext& tools, TestLog& log, ImVec2 pos, ImVec2 size) {
     ToolState& t = tools.tool;
+    std::optional<ImVec2> added;
     if (beginPanel("Parts", pos, size)) {
+        std::string& search = t.partSearch;
         ImGui::TextUnformatted("Tools");
         toolButton(t, "Select (V)", Tool::Select, "Click, shift-click or drag a box; drag to move");
         ImGui::SameLine();
@@ -76,11 +100,20 @@ void drawPartsPanel(const ToolContext& tools, TestLog& log, ImVec2 pos, ImVec2 s
         toolButton(t, "Cut (X)", Tool::Cut, "Click a hole for a hole cut, between two holes for a track cut");
         ImGui::SameLine();
         toolButton(t, "Wire (W)", Tool::Wire, "A flying lead from a lug to a hole or lug");
+        if (t.tool == Tool::Link) toolHint("Click two holes; the link joins their strips.", log);
+        if (t.tool == Tool::Cut)
+            toolHint("Click a hole for a hole cut, or the gap between two holes for a track cut. "
+                     "Click a cut again to remove it.", log);
         ImGui::Separator();
+        ImGui::SetNextItemWidth(-1);
+        ImGui::InputTextWithHint("##search", "search parts", &search);
+        log.item("parts-search");
+        int shown = 0;
         ImGui::TextUnformatted("On the board");
         int column = 0;
         for (const netcheck::PartKind& kind : netcheck::partKinds()) {
-            if (kind.offboard) continue;
+            if (kind.offboard || !matchesSearch(kind, search)) continue;
+            ++shown;
             const std::string name(kind.name);
             const bool on = t.tool == Tool::Place && t.placeKind == name;
             if (column++ % 2) ImGui::SameLine();
@@ -97,15 +130,21 @@ void drawPartsPanel(const ToolContext& tools, TestLog& log, ImVec2 pos, ImVec2 s
         ImGui::TextUnformatted("Off the board (wired)");
         column = 0;
         for (const netcheck::PartKind& kind : netcheck::partKinds()) {
-            if (!kind.offboard) continue;
+            if (!kind.offboard || !matchesSearch(kind, search)) continue;
+            ++shown;
             const std::string name(kind.name);
             if (column++ % 2) ImGui::SameLine();
             if (ImGui::Button(("+ " + name).c_str(), {halfWidth(), 0}))
-                addOffboardPart(tools, name);
+                added = addOffboardPart(tools, name);
+            log.item("add-" + name);
             if (ImGui::IsItemHovered()) ImGui::SetTooltip("Add a %s beside the board", std::string(kind.label).c_str());
         }
+        if (shown == 0) ImGui::TextDisabled("No part kind matches \"%s\".", search.c_str());
+        if (log.changed("parts-shown", search + std::to_string(shown)))
+            log.note("parts-shown " + std::to_string(shown) + " for \"" + search + "\"");
     }
     ImGui::End();
+    return added;
 }
 
 }  // namespace stripsmith

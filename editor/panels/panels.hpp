@@ -81,10 +81,11 @@ struct CircuitPanelContext {
 /// File, Edit, View and Help menus.
 FileRequest drawMenuBar(const MenuContext& c);
 /// "Parts": tools, the part palette, off-board parts, and placing options.
-void drawPartsPanel(const ToolContext& tools, TestLog& log, ImVec2 pos, ImVec2 size);
+/// Returns where an off-board part it added is (board units), for the view to scroll to.
+std::optional<ImVec2> drawPartsPanel(const ToolContext& tools, TestLog& log, ImVec2 pos, ImVec2 size);
 /// "Board": size in holes and millimetres, resize by edge, trim, title.
 void drawBoardPanel(const Document& doc, Commands commands, Selected& selection, ViewState& view,
-                    ImVec2 pos, ImVec2 size);
+                    TestLog& log, ImVec2 pos, ImVec2 size);
 /// "Properties": the selected part, link, wire, cut or off-board part.
 void drawPropertiesPanel(const EditContext& edit, TestLog& log, ImVec2 pos, ImVec2 size);
 /// "Check": errors and warnings of the live check; click to show, apply suggested fixes.
@@ -98,9 +99,9 @@ void drawJfetBiasPanel(const JfetPanelContext& c);
 /// board size, zoom, tool hint.
 void drawStatusBar(const Document& doc, const HoverState& hover, const ToolState& tool,
                    const std::string& status, ImVec2 pos, ImVec2 size,
-                   const netcheck::BenchVoltages* voltages = nullptr);
+                   const netcheck::BenchVoltages* voltages, TestLog& log);
 /// The keys reference.
-void drawHelpWindow(bool& open);
+void drawHelpWindow(bool& open, TestLog& log);
 
 /// Fixed, undecorated panel window at a place in the layout.
 bool beginPanel(const char* title, ImVec2 pos, ImVec2 size);

@@ -1,9 +1,11 @@
 // The status line: hovered hole and the net it carries, board size, zoom, last action.
+#include <algorithm>
 #include <string>
 
 #include <imgui.h>
 
 #include "editor/panels/panels.hpp"
+#include "netcheck/model/board_size.hpp"
 #include "netcheck/voltage/voltage_report.hpp"
 
 namespace stripsmith {
@@ -58,26 +60,40 @@ const char* toolHint(const ToolState& state) {
 }  // namespace
 
 void drawStatusBar(const Document& doc, const HoverState& hover, const ToolState& tool, const std::string& status,
-                   ImVec2 pos, ImVec2 size, const netcheck::BenchVoltages* voltages) {
-    if (beginPanel("##status", pos, size)) {
+                   ImVec2 pos, ImVec2 size, const netcheck::BenchVoltages* voltages, TestLog& log) {
+    // No title bar: a panel's title bar filled the whole strip and hid the line under it.
+    ImGui::SetNextWindowPos(pos, ImGuiCond_Always);
+    ImGui::SetNextWindowSize(size, ImGuiCond_Always);
+    ImGui::PushStyleVar(ImGuiStyleVar_WindowPadding, {10.0f, 4.0f});
+    const bool shown = ImGui::Begin("##status", nullptr,
+                                    ImGuiWindowFlags_NoDecoration | ImGuiWindowFlags_NoMove |
+                                        ImGuiWindowFlags_NoBringToFrontOnFocus |
+                                        ImGuiWindowFlags_NoSavedSettings);
+    ImGui::PopStyleVar();
+    if (shown) {
         const auto& board = doc.board();
+        // The hole (or lug) under the mouse, its net, and with Bench voltages on what a meter
+        // should read there; the tool's hint when the mouse is over no hole.
         std::string pointer = hoverText(doc, hover);
         if (voltages && !pointer.empty() && hover.island >= 0) {
             pointer += expectedText(doc, *voltages, hover.island);
         }
-        ImGui::Text("%s", pointer.empty() ? toolHint(tool) : pointer.c_str());
+        const std::string line = pointer.empty() ? toolHint(tool) : pointer;
+        if (log.changed("pointer-line", line)) log.pointerLine(line);
+        ImGui::TextUnformatted(line.c_str());
         ImGui::SameLine(size.x * 0.45f);
-        ImGui::Text("%d x %d holes (%.1f x %.1f mm)", board.cols, board.rows, board.widthMm(), board.heightMm());
+        ImGui::TextUnformatted(netcheck::boardSize(board).c_str());
         ImGui::SameLine(size.x * 0.68f);
         ImGui::TextDisabled("%s", status.c_str());
     }
     ImGui::End();
 }
 
-void drawHelpWindow(bool& open) {
+void drawHelpWindow(bool& open, TestLog& log) {
     if (!open) return;
-    ImGui::SetNextWindowSize({520, 0}, ImGuiCond_FirstUseEver);
-    if (ImGui::Begin("Keys", &open)) {
+    // Sized to what it holds, in two columns as wide as their widest entry: no line is cut off
+    // whatever the font size.
+    if (ImGui::Begin("Keys", &open, ImGuiWindowFlags_AlwaysAutoResize | ImGuiWindowFlags_NoSavedSettings)) {
         static constexpr const char* kKeys[][2] = {
             {"V / L / X / W", "select / link / cut / wire tool"},
             {"R", "turn the part being placed or the selected parts"},
@@ -86,17 +102,29 @@ void drawHelpWindow(bool& open) {
             {"Ctrl+C / Ctrl+V / Ctrl+D", "copy / paste at the mouse / duplicate"},
             {"Ctrl+Z / Ctrl+Y", "undo / redo (Ctrl+Shift+Z redoes too)"},
             {"Ctrl+N / Ctrl+O / Ctrl+S", "new / open / save (Ctrl+Shift+S: save as)"},
-            {"Tab", "component side -> copper side -> see-through"},
+            {"Tab", "component side \u2192 copper side \u2192 see-through"},
             {"F", "fit the board in view"},
+            {"F1", "this window"},
             {"Wheel", "zoom around the mouse"},
             {"Middle or right drag, Space+drag", "pan"},
             {"Esc", "stop the current tool"},
         };
-        for (const auto& row : kKeys) {
-            ImGui::TextUnformatted(row[0]);
-            ImGui::SameLine(230);
-            ImGui::TextDisabled("%s", row[1]);
+        float widest = 0.0f;
+        if (ImGui::BeginTable("keys", 2, ImGuiTableFlags_SizingFixedFit)) {
+            for (const auto& row : kKeys) {
+                ImGui::TableNextRow();
+                ImGui::TableSetColumnIndex(0);
+                ImGui::TextUnformatted(row[0]);
+                ImGui::TableSetColumnIndex(1);
+                ImGui::TextDisabled("%s", row[1]);
+                widest = std::max(widest, ImGui::GetItemRectMax().x);
+            }
+            ImGui::EndTable();
         }
+        // For the end-to-end test: whether the rightmost text ends inside the window.
+        const float inside = ImGui::GetWindowPos().x + ImGui::GetWindowWidth();
+        const std::string fit = widest <= inside ? "fits" : "cut";
+        if (log.changed("keys-window", fit)) log.note("keys-window " + fit);
     }
     ImGui::End();
 }

@@ -1,8 +1,9 @@
 // Dear ImGui 1.86 platform glue for SFML 2.5.
 //
 // Feature checklist:
-//  [x] Keyboard: io.KeysDown indexed by sf::Keyboard::Key, io.KeyMap for ImGui's own keys,
-//      Ctrl/Shift/Alt/Super from the key state (left and right keys both count).
+//  [x] Keyboard: io.KeysDown indexed by sf::Keyboard::Key, io.KeyMap for ImGui's own keys (Tab
+//      left out: no keyboard walk into text fields), Ctrl/Shift/Alt/Super from the key state (left
+//      and right keys both count).
 //  [x] Text input: sf::Event::TextEntered -> io.AddInputCharacter (control characters dropped).
 //  [x] Mouse: position, five buttons, vertical and horizontal wheel; a press and release arriving
 //      within one frame are spread over two frames so no click is lost.
@@ -59,7 +60,10 @@ void loadCursor(BackendData& bd, ImGuiMouseCursor imguiCursor, sf::Cursor::Type 
 
 void mapKeys(ImGuiIO& io) {
     using K = sf::Keyboard;
-    io.KeyMap[ImGuiKey_Tab] = K::Tab;
+    // Tab is left unmapped: it is the editor's own key (it turns the board over), and ImGui's Tab
+    // walks the keyboard into the next text field, where the keys after it would change the board
+    // (digits in the strips box). A text field takes keys only when the user clicked it.
+    io.KeyMap[ImGuiKey_Tab] = -1;
     io.KeyMap[ImGuiKey_LeftArrow] = K::Left;
     io.KeyMap[ImGuiKey_RightArrow] = K::Right;
     io.KeyMap[ImGuiKey_UpArrow] = K::Up;

@@ -7,6 +7,7 @@
 #include <map>
 #include <tuple>
 
+#include "netcheck/model/board_size.hpp"
 #include "netcheck/model/colour_code.hpp"
 #include "netcheck/model/part_kinds.hpp"
 #include "netcheck/model/value.hpp"
@@ -17,12 +18,6 @@ using netcheck::Board;
 using netcheck::Cut;
 
 namespace {
-
-std::string format(const char* pattern, double value) {
-    char buffer[64];
-    std::snprintf(buffer, sizeof buffer, pattern, value);
-    return buffer;
-}
 
 std::string join(const std::vector<std::string>& items, const std::string& separator) {
     std::string out;
@@ -258,8 +253,7 @@ std::vector<AssemblyStep> assemblyOrder(const Board& board) {
 }
 
 std::string boardSizeText(const Board& board) {
-    return std::to_string(board.cols) + " x " + std::to_string(board.rows) + " holes (" +
-           format("%.2f", board.widthMm()) + " x " + format("%.2f", board.heightMm()) + " mm)";
+    return netcheck::boardSize(board, 2);
 }
 
 }  // namespace sheet

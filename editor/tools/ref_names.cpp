@@ -1,26 +1,17 @@
 #include "editor/tools/ref_names.hpp"
 
-#include <array>
 #include <cctype>
 #include <set>
+
+#include "netcheck/model/part_kinds.hpp"
 
 namespace stripsmith {
 
 std::string refPrefix(std::string_view kind) {
-    struct Entry { std::string_view kind, prefix; };
-    static constexpr std::array<Entry, 24> kPrefixes{{
-        {"resistor", "R"}, {"capacitor", "C"}, {"electrolytic", "C"}, {"inductor", "L"},
-        {"diode", "D"}, {"zener", "D"}, {"led", "LED"}, {"bjt", "Q"}, {"jfet", "Q"},
-        {"mosfet", "Q"}, {"regulator", "U"}, {"ic", "U"}, {"trimmer", "RV"}, {"header", "J"},
-        {"crystal", "X"}, {"fuse", "F"}, {"wire-terminal", "TB"}, {"pot", "VR"}, {"jack", "J"},
-        {"mono-jack", "J"}, {"stereo-jack", "J"}, {"switch", "SW"}, {"footswitch", "SW"},
-        {"dc-jack", "J"},
-    }};
-    for (const Entry& e : kPrefixes)
-        if (e.kind == kind) return std::string(e.prefix);
-    if (kind == "battery") return "BT";
-    if (kind == "panel-led") return "LED";
-    return "X";
+    // One rule, from the kind table: a new part is named by what it is (an LED is a diode, D).
+    if (const netcheck::PartKind* known = netcheck::findPartKind(kind); known && !known->refPrefix.empty())
+        return std::string(known->refPrefix);
+    return "X";  // a kind the table does not know: a generic part
 }
 
 std::string prefixOf(std::string_view ref) {

@@ -3,6 +3,7 @@
 // Sections: helpers | place | link | cut | wire | switching tools.
 #include <algorithm>
 
+#include "editor/canvas/offboard_layout.hpp"
 #include "editor/canvas/palette.hpp"
 #include "editor/tools/part_factory.hpp"
 #include "editor/tools/ref_names.hpp"
@@ -204,7 +205,26 @@ void runActiveTool(const ToolContext& c, const CanvasInput& in, const CanvasFram
     }
 }
 
-void addOffboardPart(const ToolContext& c, const std::string& kind) {
+namespace {
+
+// The first slot from the top of the column right of the board that no off-board part covers: a
+// new part stands beside the board, in sight, not below the parts dragged away from the column.
+ImVec2 freeSlotBesideBoard(const netcheck::Board& board, std::size_t lugs) {
+    constexpr float kGap = 3.0f, kStep = 4.2f, kLugPitch = 1.5f, kHeight = 3.2f;
+    const std::vector<OffboardSpot> spots = layoutOffboard(board);
+    const float x = static_cast<float>(board.cols) + kGap;
+    const float width = std::max(4.0f, 1.0f + static_cast<float>(std::max<std::size_t>(lugs, 1)) * kLugPitch);
+    for (float y = 0.5f;; y += kStep) {
+        const bool taken = std::any_of(spots.begin(), spots.end(), [&](const OffboardSpot& s) {
+            return s.min.x < x + width && s.max.x + 0.1f > x && s.min.y < y + kHeight && s.max.y + 1.4f > y;
+        });
+        if (!taken) return {x, y};
+    }
+}
+
+}  // namespace
+
+std::optional<ImVec2> addOffboardPart(const ToolContext& c, const std::string& kind) {
     const netcheck::PartKind* k = netcheck::findPartKind(kind);
     netcheck::OffboardPart part;
     part.kind = kind;
@@ -216,8 +236,11 @@ void addOffboardPart(const ToolContext& c, const std::string& kind) {
         // Switches: a common on-on toggle has three lugs.
         part.pins = {"1", "2", "3"};
     }
-    if (c.commands.perform(std::make_unique<netcheck::edit::AddOffboard>(part)))
-        selectOnly(c, ElementRef::Kind::Offboard, c.doc.board().offboard.size() - 1);
+    const ImVec2 corner = freeSlotBesideBoard(c.doc.board(), part.pins.size());
+    part = placedAt(std::move(part), corner);
+    if (!c.commands.perform(std::make_unique<netcheck::edit::AddOffboard>(part))) return std::nullopt;
+    selectOnly(c, ElementRef::Kind::Offboard, c.doc.board().offboard.size() - 1);
+    return ImVec2{corner.x + 2.0f, corner.y + 1.0f};
 }
 
 }  // namespace stripsmith

@@ -1,6 +1,7 @@
 // The canvas tools. Each reads the mouse over the canvas, emits commands, and draws its preview.
 #pragma once
 
+#include <optional>
 #include <string>
 
 #include "editor/app/commands.hpp"
@@ -35,7 +36,9 @@ void selectTool(ToolState& state, Tool tool);
 /// Picks a part kind to place (switches to the place tool).
 void startPlacing(ToolState& state, const std::string& kind);
 
-/// Adds an off-board part of a kind beside the board (ref numbered automatically).
-void addOffboardPart(const ToolContext& c, const std::string& kind);
+/// Adds an off-board part of a kind beside the board, in the first free slot of the column right of
+/// it (ref numbered automatically), and selects it. Returns the middle of its body in board units
+/// (for the view to scroll to), or nullopt when nothing was added.
+std::optional<ImVec2> addOffboardPart(const ToolContext& c, const std::string& kind);
 
 }  // namespace stripsmith

@@ -9,6 +9,7 @@
 #include "netcheck/edit/part_commands.hpp"
 #include "netcheck/edit/shift_holes.hpp"
 #include "netcheck/edit/wire_commands.hpp"
+#include "netcheck/model/board_size.hpp"
 
 namespace netcheck::edit {
 
@@ -118,7 +119,7 @@ void ResizeBoard::revert(Board& board) {
 
 std::string ResizeBoard::label() const {
     if (!label_.empty()) return label_;
-    return "Resize board to " + std::to_string(newRows()) + " \u00d7 " + std::to_string(newCols());
+    return "Resize board to " + sizeInHoles(newCols(), newRows());
 }
 
 std::vector<Hole> ResizeBoard::touched() const {

@@ -9,6 +9,7 @@
 
 #include "netcheck/file/circuit_json.hpp"
 #include "netcheck/file/detail/json_reader.hpp"
+#include "netcheck/model/board_size.hpp"
 #include "netcheck/model/name_rules.hpp"
 
 namespace netcheck {
@@ -136,8 +137,8 @@ private:
 
     void expectInside(Hole hole, std::string_view name) const {
         if (!board_.contains(hole)) {
-            r_.fail("hole " + inQuotes(name) + " is outside a " + std::to_string(board_.rows) +
-                    "x" + std::to_string(board_.cols) + " board");
+            r_.fail("hole " + inQuotes(name) + " is outside the board (" +
+                    sizeInHoles(board_.cols, board_.rows) + ")");
         }
     }
 

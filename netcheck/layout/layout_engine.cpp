@@ -7,6 +7,7 @@
 #include <random>
 
 #include "netcheck/layout/column_order.hpp"
+#include "netcheck/model/board_size.hpp"
 #include "netcheck/layout/detail/layout_circuit.hpp"
 #include "netcheck/layout/detail/strip_sweep.hpp"
 
@@ -353,9 +354,9 @@ LayoutResult layOut(const Circuit& circuit, const LayoutOptions& options, const 
     }
     if ((options.maxRows > 0 && best.score.rows > options.maxRows) ||
         (options.maxCols > 0 && best.score.cols > options.maxCols)) {
-        result.problem = "the best layout found needs " + std::to_string(best.score.rows) + "x" +
-                         std::to_string(best.score.cols) + " holes, more than the board's " +
-                         std::to_string(options.maxRows) + "x" + std::to_string(options.maxCols);
+        result.problem = "the best layout found needs " +
+                         sizeInHoles(best.score.cols, best.score.rows) + ", more than the board's " +
+                         sizeInHoles(options.maxCols, options.maxRows);
         result.score = best.score;
         return result;
     }

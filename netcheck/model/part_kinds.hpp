@@ -16,6 +16,7 @@ struct PartKind {
     bool quantity = false;               ///< value is a quantity (compared numerically)
     bool offboard = false;               ///< normally lives off the board
     int span = 0;  ///< default lead span in holes for two-lead parts lying flat
+    std::string_view refPrefix;  ///< letters of a new part's reference, e.g. "R" for R1
 };
 
 std::span<const PartKind> partKinds();

@@ -23,6 +23,27 @@ while read -r line; do
     check "the overlay shows $line" eventually grep -q "STRIPSMITH_E2E note bench-voltages revision [0-9]* .*$line" "$LOG"
 done <<<"$expected"
 screenshot bench-voltages
+
+# The status line under the mouse: the hole, its net and what a meter should read there, as
+# netcheck --voltages --json gives them for this board (nominal, then the tolerance range).
+"$STRIPSMITH_BIN/netcheck" --voltages --json "$board" >"$WORK/ranges.json"
+read -r probe row col status_line < <(python3 - "$WORK/ranges.json" <<'PY'
+import json, sys
+def volts(v):  # netcheck's own rounding: three places under 1 V, else two
+    return ("%.3f V" if abs(v) < 1 else "%.2f V") % v
+net = [n for n in json.load(open(sys.argv[1]))["nets"] if n["net"] == "L1"][0]
+probe = net["probe"]
+letters = probe.rstrip("0123456789")
+row = 0
+for ch in letters:
+    row = row * 26 + ord(ch) - ord("A") + 1
+print(probe, row - 1, int(probe[len(letters):]) - 1,
+      "%s  net L1  meter: %s (%s to %s)" % (probe, volts(net["nominal"]), volts(net["min"]), volts(net["max"])))
+PY
+)
+move_to $(hole_xy "$row" "$col")
+check "the status line over $probe reads \"$status_line\"" wait_for_log "STRIPSMITH_E2E pointer-line $status_line\$"
+screenshot bench-voltages-status
 first=$(grep -c "STRIPSMITH_E2E note bench-voltages revision" "$LOG")
 revision=$(frame_field revision)
 keys x

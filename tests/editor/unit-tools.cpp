@@ -20,6 +20,10 @@ TEST_CASE("ref numbering") {
         CHECK(refPrefix("bjt") == "Q");
         CHECK(refPrefix("ic") == "U");
         CHECK(refPrefix("pot") == "VR");
+        // The kind table's rule: an LED is named as the diode it is (the issue: it was LED1).
+        CHECK(refPrefix("led") == "D");
+        CHECK(refPrefix("panel-led") == "D");
+        CHECK(refPrefix("no-such-kind") == "X");
         CHECK(prefixOf("VR12") == "VR");
     }
     SUBCASE("the lowest free number, counting off-board parts and gaps") {

@@ -5,6 +5,7 @@
 #include <cstdio>
 
 #include "netcheck/check/detail/finders.hpp"
+#include "netcheck/model/board_size.hpp"
 
 namespace netcheck {
 
@@ -34,12 +35,6 @@ std::string plural(int count, const std::string& word) {
     return std::to_string(count) + " " + word + (count == 1 ? "" : "s");
 }
 
-// One decimal, rounded half away from zero.
-std::string millimetres(double value) {
-    char text[32];
-    std::snprintf(text, sizeof text, "%.1f", std::round(value * 10) / 10);
-    return text;
-}
 
 }  // namespace
 
@@ -125,10 +120,8 @@ void findTrim(const CheckedBoard& checked, std::vector<Finding>& warnings) {
     }
     const int rows = last.row - first.row + 1;
     const int cols = last.col - first.col + 1;
-    finding.message = text + ": " + std::to_string(rows) + "x" + std::to_string(cols) + " holes (" +
-                      holeName(first) + " to " + holeName(last) + "), " +
-                      millimetres(cols * board.pitchMm) + " x " + millimetres(rows * board.pitchMm) +
-                      " mm";
+    finding.message = text + ": " + sizeInHoles(cols, rows) + " (" + holeName(first) + " to " +
+                      holeName(last) + "), " + sizeInMm(cols * board.pitchMm, rows * board.pitchMm);
     warnings.push_back(std::move(finding));
 }
 
