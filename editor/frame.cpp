@@ -7,6 +7,7 @@
 #include "editor/app/look.hpp"
 #include "editor/canvas/canvas.hpp"
 #include "editor/file_actions.hpp"
+#include "editor/panels/panel_layout.hpp"
 #include "editor/panels/panels.hpp"
 #include "editor/platform/imgui_impl_sfml.hpp"
 #include "editor/tools/edit_actions.hpp"
@@ -29,7 +30,7 @@ ToolContext toolContext(EditorApp& app) {
 
 MenuContext menuContext(EditorApp& app) {
     return {app.doc,  app.recent,      app.chooser, app.view, editContext(app), app.hover.hole,
-            app.log, &app.jfetPanel.open};
+            app.log, &app.jfetPanel.open, &app.layoutDialog};
 }
 
 CanvasContext canvasContext(EditorApp& app) {
@@ -229,6 +230,7 @@ void drawPanels(EditorApp& app, const PanelLayout& l) {
                   showVoltages ? &*voltages->voltages.value : nullptr);
     drawCircuitPanel(circuitPanelContext(app));
     drawJfetBiasPanel({app.doc, app.jfetPanel, app.commands(), app.log});
+    drawLayoutDialog({app.doc, app.layoutDialog, app.commands(), app.log, app.view});
     drawHelpWindow(app.view.showHelp);
 }
 

@@ -20,7 +20,7 @@ namespace {
 
 constexpr const char* kUsage =
     "usage: stripsmith --layout OUT.board.json [--board RxC] [--seconds S] [--seed N]\n"
-    "                  [--iterations N] INPUT\n"
+    "                  [--iterations N] [--rails] INPUT\n"
     "       INPUT: a circuit file (JSON or SPICE deck) or a board file with its circuit\n";
 
 struct LayoutArgs {
@@ -31,6 +31,7 @@ struct LayoutArgs {
     double seconds = 10;
     unsigned long long seed = 1;
     long iterations = 1L << 40;  // the time budget ends the run unless this is given
+    bool rails = false;
 };
 
 std::optional<LayoutArgs> parseArgs(int argc, char** argv) {
@@ -63,6 +64,8 @@ std::optional<LayoutArgs> parseArgs(int argc, char** argv) {
             } else if (std::sscanf(value.c_str(), "%llu%c", &args.seed, &extra) != 1) {
                 return fail("--seed wants a whole number, not \"" + value + "\"");
             }
+        } else if (arg == "--rails") {
+            args.rails = true;
         } else if (arg.size() > 1 && arg[0] == '-') {
             return fail("unknown option \"" + arg + "\"");
         } else if (!args.input.empty()) {
@@ -138,6 +141,7 @@ int runLayoutCommand(int argc, char** argv) {
     options.iterations = args->iterations;
     options.maxRows = args->rows;
     options.maxCols = args->cols;
+    options.rails = args->rails;
     const auto deadline =
         std::chrono::steady_clock::now() + std::chrono::duration<double>(args->seconds);
     options.stop = [&] { return std::chrono::steady_clock::now() >= deadline; };

@@ -278,6 +278,31 @@ std::string wireColour(const std::string& netName, int& nextColour) {
     return kColours[nextColour++ % 5];
 }
 
+// Off-board parts stand beside the edge their wires go to (the board file's `place`: body's
+// top-left corner in pitches; the stacking pitch and box width follow the editor's default column
+// right of the board), so no wire crosses the board to reach its part.
+void placeBesideTheirEdge(Board& board, const Built& built) {
+    constexpr double kGap = 3.0;    // room for the row letters
+    constexpr double kStack = 4.2;  // one part below the other
+    int left = 0;
+    int right = 0;
+    for (std::size_t p = 0; p < board.offboard.size(); ++p) {
+        double sum = 0;
+        int wired = 0;
+        for (const Hole& hole : built.offboardHoles[p]) {
+            if (hole.col < 0) continue;
+            sum += hole.col;
+            ++wired;
+        }
+        if (board.offboard[p].extra.contains("place")) continue;
+        const bool onLeft = wired > 0 && sum / wired < (board.cols - 1) / 2.0;
+        const double width = std::max(4.0, 1.0 + 1.5 * static_cast<double>(board.offboard[p].pins.size()));
+        const double x = onLeft ? -kGap - width : board.cols + kGap;
+        const double y = 0.5 + kStack * (onLeft ? left++ : right++);
+        board.offboard[p].extra["place"] = {{"x", x}, {"y", y}};
+    }
+}
+
 Board makeBoard(const Circuit& circuit, const LayoutCircuit& described, const Built& built,
                 const Board* placed) {
     Board board;
@@ -307,7 +332,10 @@ Board makeBoard(const Circuit& circuit, const LayoutCircuit& described, const Bu
     for (std::size_t p = 0; p < described.offboard.size(); ++p) {
         const auto& off = described.offboard[p];
         const CircuitPart& source = circuit.parts.at(off.ref);
-        board.offboard.push_back({off.ref, source.kind, source.value, off.rule.pins, nlohmann::json::object()});
+        // The maker's own drawing hints (where the part was dragged to) stay.
+        const OffboardPart* kept = placed != nullptr ? placed->findOffboard(off.ref) : nullptr;
+        board.offboard.push_back({off.ref, source.kind, source.value, off.rule.pins,
+                                  kept != nullptr ? kept->extra : nlohmann::json::object()});
         for (std::size_t lug = 0; lug < off.nets.size(); ++lug) {
             const int net = off.nets[lug];
             if (net < 0) continue;
@@ -328,6 +356,7 @@ Board makeBoard(const Circuit& circuit, const LayoutCircuit& described, const Bu
                                    nlohmann::json::object()});
         }
     }
+    placeBesideTheirEdge(board, built);
     board.circuit = circuit;
     return board;
 }
