@@ -170,10 +170,9 @@ int runLayoutCommand(int argc, char** argv) {
     const netcheck::LayoutScore& s = result.score;
     std::printf("area %ld holes (%d strips x %d holes), %d links, %d cuts, link length %d\n",
                 s.area(), s.rows, s.cols, s.links, s.cuts, s.linkLength);
-    std::printf("lower bound: %d strips, %d holes along the strips (area at least %ld); the part "
-                "order found needs %d strips if no net changed strip\n",
-                result.bounds.strips, result.bounds.columns,
-                long{result.bounds.strips} * result.bounds.columns, result.bounds.orderStrips);
+    std::printf("lower bound: %d strips, area at least %ld holes; the part order found needs %d "
+                "strips if no net changed strip\n",
+                result.bounds.strips, result.bounds.area, result.bounds.orderStrips);
     std::printf("wrote %s (%ld part orders tried)\n", netcheck::escapeControls(args->out).c_str(),
                 result.iterationsUsed);
     return 0;

@@ -3,7 +3,9 @@
 // command that accepts a layout as one undo step. Every layout is checked by netcheck::check.
 #include <doctest/doctest.h>
 
+#include <map>
 #include <random>
+#include <set>
 
 #include "netcheck/check/check.hpp"
 #include "netcheck/check/connectivity.hpp"
@@ -155,4 +157,22 @@ TEST_CASE("a layout replaces the board as one command, undone exactly") {
     Board other = before;
     other.title = "changed meanwhile";
     CHECK_THROWS(command.apply(other));
+}
+
+TEST_CASE("parts share columns where their strips allow, and the board stays correct") {
+    int stacked = 0;
+    for (const std::string& path : test_support::sourceFiles("samples", ".board.json")) {
+        CAPTURE(path);
+        const Board hand = readSample(path);
+        netcheck::LayoutOptions options;
+        options.iterations = 100;
+        const netcheck::LayoutResult result = netcheck::layOut(*hand.circuit, options);
+        REQUIRE(result.ok);
+        CHECK(errors(result.board) == "");
+        std::map<int, std::set<std::string>> partsInColumn;
+        for (const auto& part : result.board.parts)
+            for (const auto& pin : part.pins) partsInColumn[pin.hole.col].insert(part.ref);
+        for (const auto& [col, refs] : partsInColumn) stacked += refs.size() > 1;
+    }
+    CHECK(stacked > 0);
 }

@@ -171,10 +171,9 @@ void drawResults(const LayoutDialogContext& c) {
         c.log.item("layout-alternative-" + std::to_string(i + 1));
     }
     const auto& bounds = s.results[static_cast<std::size_t>(s.chosen)].bounds;
-    ImGui::TextDisabled("Lower bound: %d strips x %d holes = %ld holes; the part order found needs "
-                        "%d strips if no net changed strip.",
-                        bounds.strips, bounds.columns, long{bounds.strips} * bounds.columns,
-                        bounds.orderStrips);
+    ImGui::TextDisabled("Lower bound: %d strips, %ld holes; the part order found needs %d strips "
+                        "if no net changed strip.",
+                        bounds.strips, bounds.area, bounds.orderStrips);
     const bool stale = c.doc.revision() != s.startRevision;
     const float buttons = ImGui::GetFrameHeightWithSpacing() * (stale ? 2.2f : 1.2f);
     drawPreview(c, {-1, -buttons});

@@ -7,6 +7,7 @@
 #include <random>
 
 #include "netcheck/layout/column_order.hpp"
+#include "netcheck/layout/detail/column_merge.hpp"
 #include "netcheck/layout/detail/layout_circuit.hpp"
 #include "netcheck/layout/detail/strip_sweep.hpp"
 #include "netcheck/layout/detail/supply_rails.hpp"
@@ -102,6 +103,30 @@ void scatterLugHoles(const LayoutCircuit& circuit, const Arrangement& arrangemen
     }
 }
 
+// Parts stacked in shared columns where their strips allow (column_merge.hpp); placed parts and
+// everything left of them stay.
+void stackColumns(const LayoutCircuit& circuit, int fixedCols, Built& built) {
+    std::vector<std::vector<Hole>> groups = built.partHoles;
+    for (const auto& placed : circuit.placed) {
+        std::vector<Hole> pins;
+        for (const Pin& pin : placed.part->pins) pins.push_back(pin.hole);
+        groups.push_back(pins);
+    }
+    for (const auto& lugs : built.offboardHoles) {
+        for (const Hole& hole : lugs) {
+            if (hole.row >= 0) groups.push_back({hole});
+        }
+    }
+    const std::vector<int> newColumn = layout_detail::mergeColumns(built.copper, groups, fixedCols);
+    auto move = [&](Hole& hole) { hole.col = newColumn[static_cast<std::size_t>(hole.col)]; };
+    for (auto& holes : built.partHoles) std::for_each(holes.begin(), holes.end(), move);
+    for (auto& holes : built.offboardHoles) {
+        for (Hole& hole : holes) {
+            if (hole.row >= 0) move(hole);
+        }
+    }
+}
+
 // The nets the rails carry (-1: none, or no rails wanted).
 struct Rails {
     int positive = -1;
@@ -189,6 +214,7 @@ Built build(const LayoutCircuit& circuit, const Arrangement& arrangement, int ma
         scatterLugHoles(circuit, arrangement, right, *holes, built);
     }
     built.copper = sweep.finish();
+    stackColumns(circuit, fixedCols, built);
     if (rails.wanted() && !addRails(circuit, rails, built)) return built;
     built.cuts = cutsBetweenNets(built.copper);
     built.score.rows = built.copper.rows;
@@ -364,6 +390,8 @@ Board makeBoard(const Circuit& circuit, const LayoutCircuit& described, const Bu
 LayoutBounds bounds(const LayoutCircuit& described, const ColumnProblem& problem,
                     const std::vector<int>& order) {
     LayoutBounds result;
+    long footprint = 0;
+    int widest = 1;
     for (const auto& part : described.parts) {
         int tallest = 1 << 30;  // the shortest shape of the part
         for (const auto& shape : part.shapes) {
@@ -380,8 +408,12 @@ LayoutBounds bounds(const LayoutCircuit& described, const ColumnProblem& problem
                                   ? static_cast<int>((distinct + 1) / 2)
                                   : static_cast<int>(distinct);
         result.strips = std::max({result.strips, tallest, perColumn});
-        result.columns += part.rule.shape == LeadShape::Dip ? 4 : 1;
+        // Holes no other part can use: a DIP's pins (links may pass under its body), every
+        // other part's leads and the body between them.
+        footprint += part.rule.shape == LeadShape::Dip ? static_cast<long>(part.nets.size()) : tallest;
+        widest = std::max(widest, part.rule.shape == LeadShape::Dip ? 4 : 1);
     }
+    result.area = std::max(footprint, long{result.strips} * widest);
     result.orderStrips = openStrips(problem, order);
     return result;
 }

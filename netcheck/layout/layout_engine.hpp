@@ -54,7 +54,8 @@ struct LayoutBounds {
     int strips = 0;       ///< the most nets one column of a part touches; the tallest part
     int orderStrips = 0;  ///< strips the part order found needs if every net kept one strip
                           ///< (a DIP counted as one column): the density the sweep starts from
-    int columns = 0;      ///< one column per on-board part (four for a DIP)
+    long area = 0;        ///< holes: the parts' leads and bodies (no two share a hole), and at
+                          ///< least `strips` times the widest part
 };
 
 struct LayoutResult {
