@@ -230,7 +230,7 @@ void drawPanels(EditorApp& app, const PanelLayout& l) {
                   showVoltages ? &*voltages->voltages.value : nullptr);
     drawCircuitPanel(circuitPanelContext(app));
     drawJfetBiasPanel({app.doc, app.jfetPanel, app.commands(), app.log});
-    drawLayoutDialog({app.doc, app.layoutDialog, app.commands(), app.log, app.view});
+    drawLayoutDialog({app.doc, app.layoutDialog, app.commands(), app.log, app.view, app.selection});
     drawHelpWindow(app.view.showHelp);
 }
 

@@ -89,6 +89,10 @@ void accept(const LayoutDialogContext& c) {
         s.open = false;
         s.results.clear();
         s.reports.clear();
+        // Nothing selected or pointed at survives: the elements are all new.
+        c.selection.clear();
+        c.view.focusedFinding.reset();
+        c.view.previewStep.reset();
         c.view.fitPending = true;
     }
 }

@@ -6,6 +6,7 @@
 #include "editor/app/commands.hpp"
 #include "editor/app/document.hpp"
 #include "editor/app/layout_dialog_state.hpp"
+#include "editor/app/selection.hpp"
 #include "editor/app/test_log.hpp"
 #include "editor/app/view_state.hpp"
 
@@ -17,6 +18,7 @@ struct LayoutDialogContext {
     Commands commands;
     TestLog& log;
     ViewState& view;
+    Selected& selection;  ///< cleared when a layout replaces the board
 };
 
 /// Opens the dialog for a fresh layout or for placing the parts not yet on the board.

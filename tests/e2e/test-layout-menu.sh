@@ -3,7 +3,9 @@
 # run is short and fixed (STRIPSMITH_LAYOUT_ITERATIONS orders per alternative; seeds 1, 2, 3), so
 # the dialog's best alternative must be exactly the best of `stripsmith --layout` run with the same
 # seeds and budget. Accept it (one undo step), save and check it with netcheck; undo and save: the
-# hand layout is back; redo and save: the layout again, still passing.
+# hand layout is back; redo and save: the layout again, still passing. Then Board > Place the
+# remaining parts on the hand layout with every other part removed: the kept parts stay where
+# they are and the saved board passes netcheck.
 source "$(dirname "$0")/e2e_lib.sh"
 run_under_xvfb "$0"
 
@@ -68,4 +70,34 @@ shortcut ctrl+y "Redid: Lay out from the circuit"
 shortcut ctrl+s Saved
 check "redo lays it out again" same_layout "$board" "$WORK/cli-$best_seed.board.json"
 check "netcheck passes it again" "$STRIPSMITH_BIN/netcheck" "$board"
+keys ctrl+q
+check "the editor quits (everything saved)" wait_exit
+
+half="$WORK/flasher-half.board.json"
+python3 - "$sample" "$half" <<'PY'
+import json, sys
+board = json.load(open(sys.argv[1]))
+board["parts"] = board["parts"][::2]
+board["cuts"], board["links"], board["wires"] = [], [], []
+json.dump(board, open(sys.argv[2], "w"), indent=1)
+PY
+cp "$half" "$WORK/kept.board.json"
+start_editor "$half"
+click_at $(item_xy menu-board)
+click_at $(item_xy menu-place-rest)
+click_item layout-start
+check "place the rest finds layouts" wait_for_log "STRIPSMITH_E2E note layout found [1-3]: 1 area .* errors 0"
+wait_settled "STRIPSMITH_E2E item layout-accept "
+screenshot layout-place-rest
+click_item layout-accept
+check "Accept places the remaining parts in one command" \
+    wait_for_log "STRIPSMITH_E2E status Place the remaining parts"
+shortcut ctrl+s Saved
+check "netcheck passes the board with every part placed" eventually "$STRIPSMITH_BIN/netcheck" "$half"
+check "the parts that were on the board did not move" python3 - "$WORK/kept.board.json" "$half" <<'PY'
+import json, sys
+kept, after = (json.load(open(p)) for p in sys.argv[1:])
+now = {p["ref"]: p for p in after["parts"]}
+sys.exit(0 if all(now.get(p["ref"]) == p for p in kept["parts"]) and len(now) > len(kept["parts"]) else 1)
+PY
 finish
