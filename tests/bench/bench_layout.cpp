@@ -2,8 +2,8 @@
 // instance (tests/layout-bench/) with the layout engine's column ordering and prints one line,
 // `strips N order P1 P2 ...` (products 1-based, in the order found). Exit 2 for unusable input.
 //
-// bench_layout --planted N [--stacked 0|1] [--seconds S]: N planted cases (planted_boards.hpp,
-// seeds 1..N): random compact correct boards stripped to their circuits and laid out again; one
+// bench_layout --planted N [--stacked 0|1] [--cols C] [--seconds S]: N planted cases
+// (planted_boards.hpp, seeds 1..N; with --cols, 10 strips of C holes): random compact correct boards stripped to their circuits and laid out again; one
 // line per case and the median, worst and best ratio of the engine's area to the planted area.
 #include <atomic>
 #include <chrono>
@@ -26,18 +26,22 @@ namespace {
 int usage(const std::string& problem) {
     std::fprintf(stderr,
                  "bench_layout: %s\nusage: bench_layout --dzn FILE [--seconds S] [--seed N]\n"
-                 "       bench_layout --planted N [--stacked 0|1] [--seconds S]\n",
+                 "       bench_layout --planted N [--stacked 0|1] [--cols C] [--seconds S]\n",
                  problem.c_str());
     return 2;
 }
 
-int plantedCases(int count, bool stacked, double seconds) {
+int plantedCases(int count, bool stacked, double seconds, int fixedCols) {
     std::vector<double> ratios;
     int refused = 0;
     for (int seed = 1; seed <= count; ++seed) {
         std::mt19937 random(static_cast<unsigned>(seed));
-        const int rows = 6 + static_cast<int>(random() % 5);
-        const int cols = 8 + static_cast<int>(random() % 13);
+        int rows = 6 + static_cast<int>(random() % 5);
+        int cols = 8 + static_cast<int>(random() % 13);
+        if (fixedCols > 0) {  // larger circuits: the tallest boards, this wide
+            rows = 10;
+            cols = fixedCols;
+        }
         const netcheck::Board board = planted::plantedBoard(random, rows, cols, stacked);
         if (!netcheck::check(board).ok()) {  // the generator's own promise
             ++refused;
@@ -75,6 +79,7 @@ int plantedCases(int count, bool stacked, double seconds) {
 int main(int argc, char** argv) {
     std::string path;
     int planted = 0;
+    int plantedCols = 0;
     bool stacked = true;
     double seconds = 10;
     unsigned long long seed = 1;
@@ -88,6 +93,9 @@ int main(int argc, char** argv) {
             } else if (arg == "--planted") {
                 planted = std::stoi(value);
                 if (planted < 1 || planted > 10000) return usage("--planted wants 1 to 10000");
+            } else if (arg == "--cols") {
+                plantedCols = std::stoi(value);
+                if (plantedCols < 2 || plantedCols > 500) return usage("--cols wants 2 to 500");
             } else if (arg == "--stacked") {
                 stacked = value != "0";
             } else if (arg == "--seconds") {
@@ -102,7 +110,7 @@ int main(int argc, char** argv) {
             return usage(arg + " wants a number, not \"" + value + "\"");
         }
     }
-    if (planted > 0) return plantedCases(planted, stacked, seconds);
+    if (planted > 0) return plantedCases(planted, stacked, seconds, plantedCols);
     if (path.empty()) return usage("--dzn FILE or --planted N is required");
     std::ifstream in(path);
     if (!in) return usage("cannot read " + path);
