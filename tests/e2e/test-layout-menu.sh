@@ -100,4 +100,21 @@ kept, after = (json.load(open(p)) for p in sys.argv[1:])
 now = {p["ref"]: p for p in after["parts"]}
 sys.exit(0 if all(now.get(p["ref"]) == p for p in kept["parts"]) and len(now) > len(kept["parts"]) else 1)
 PY
+keys ctrl+q
+check "the editor quits again" wait_exit
+
+# Cancel: a run of hours is stopped from its progress window; nothing changes.
+cp "$sample" "$board"
+STRIPSMITH_LAYOUT_ITERATIONS=100000000 start_editor "$board"
+click_at $(item_xy menu-board)
+click_at $(item_xy menu-layout)
+click_item layout-start
+wait_for_log "STRIPSMITH_E2E note layout started"
+screenshot layout-running
+click_item layout-cancel
+check "Cancel stops the run" wait_for_log "STRIPSMITH_E2E note layout cancelled"
+check "no layout was found or applied" bash -c "! grep -q 'note layout found\|status Lay out from the circuit' '$LOG'"
+keys ctrl+q
+check "the editor quits without asking (nothing changed)" wait_exit
+check "the board file is untouched" cmp -s "$board" "$sample"
 finish
