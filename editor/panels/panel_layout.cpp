@@ -40,7 +40,7 @@ void start(const LayoutDialogContext& c) {
     if (s.placeTheRest) request.placed = board;
     request.options.seed = static_cast<std::uint64_t>(std::max(1, s.seed));
     request.options.iterations = std::max(1, s.iterations);
-    request.options.rails = s.rails;
+    request.options.rails = s.rails && !s.placeTheRest;
     s.results.clear();
     s.reports.clear();
     s.problem.clear();
@@ -137,8 +137,10 @@ void drawOptions(const LayoutDialogContext& c) {
         ImGui::TextWrapped("Lays out the circuit's %zu parts on a new, trimmed board that passes "
                            "the check. The board you have now comes back with Undo.",
                            parts);
-    ImGui::Checkbox("Supply rails on the top and bottom strips", &s.rails);
-    c.log.item("layout-rails");
+    if (!s.placeTheRest) {  // rails would move the placed parts down a strip
+        ImGui::Checkbox("Supply rails on the top and bottom strips", &s.rails);
+        c.log.item("layout-rails");
+    }
     ImGui::SetNextItemWidth(120);
     ImGui::InputInt("Part orders tried per alternative", &s.iterations, 1000, 10000);
     s.iterations = std::clamp(s.iterations, 1, 10'000'000);

@@ -5,7 +5,8 @@
 # seeds and budget. Accept it (one undo step), save and check it with netcheck; undo and save: the
 # hand layout is back; redo and save: the layout again, still passing. Then Board > Place the
 # remaining parts on the hand layout with every other part removed: the kept parts stay where
-# they are and the saved board passes netcheck.
+# they are and the saved board passes netcheck. Cancel stops a long run; the rails checkbox puts
+# the battery on the top and bottom strips.
 source "$(dirname "$0")/e2e_lib.sh"
 run_under_xvfb "$0"
 
@@ -23,15 +24,20 @@ board = json.load(open(sys.argv[1]))
 board["parts"], board["cuts"], board["links"], board["wires"] = [], [], [], []
 json.dump(board, open(sys.argv[2], "w"))
 PY
-best_seed=""
-best_key=""
-for seed in 1 2 3; do
-    line=$("$STRIPSMITH_BIN/stripsmith" --layout "$WORK/cli-$seed.board.json" --iterations 150 \
-        --seconds 600 --seed "$seed" "$circuit_only" | head -1)
-    key=$(echo "$line" | awk '{ gsub(",", ""); printf "%08d %04d %04d %04d", $2, $9, $11, $15 }')
-    if [ -z "$best_key" ] || [[ "$key" < "$best_key" ]]; then best_key=$key; best_seed=$seed; fi
-done
-echo "best from the command line: seed $best_seed ($best_key)"
+best_cli() {  # best_cli PREFIX [OPTION...]: the best seed of 1, 2, 3 (PREFIX-SEED.board.json)
+    local prefix=$1 seed line key best_key="" best=""
+    shift
+    for seed in 1 2 3; do
+        line=$("$STRIPSMITH_BIN/stripsmith" --layout "$prefix-$seed.board.json" --iterations 150 \
+            --seconds 600 --seed "$seed" "$@" "$circuit_only" | head -1)
+        key=$(echo "$line" | awk '{ gsub(",", ""); printf "%08d %04d %04d %04d", $2, $9, $11, $15 }')
+        if [ -z "$best_key" ] || [[ "$key" < "$best_key" ]]; then best_key=$key; best=$seed; fi
+    done
+    echo "$best"
+}
+best_seed=$(best_cli "$WORK/cli")
+rails_seed=$(best_cli "$WORK/rails" --rails)
+echo "best from the command line: seed $best_seed; with --rails: seed $rails_seed"
 
 # same_layout A B: the two boards have the same parts, cuts, links and wires (same copper work).
 same_layout() {
@@ -117,4 +123,27 @@ check "no layout was found or applied" bash -c "! grep -q 'note layout found\|st
 keys ctrl+q
 check "the editor quits without asking (nothing changed)" wait_exit
 check "the board file is untouched" cmp -s "$board" "$sample"
+
+# Supply rails from the dialog's checkbox: the battery's + wire ends on the top strip and its -
+# wire on the bottom strip, and the saved board passes netcheck.
+start_editor "$board"
+click_at $(item_xy menu-board)
+click_at $(item_xy menu-layout)
+click_item layout-rails
+click_item layout-start
+check "with rails the run finds layouts" wait_for_log "STRIPSMITH_E2E note layout found [1-3]: 1 area .* errors 0"
+wait_settled "STRIPSMITH_E2E item layout-accept "
+click_item layout-accept
+wait_for_log "STRIPSMITH_E2E status Lay out from the circuit"
+shortcut ctrl+s Saved
+check "netcheck passes the layout with rails" eventually "$STRIPSMITH_BIN/netcheck" "$board"
+check "the layout with rails is the command line's best with --rails" \
+    same_layout "$board" "$WORK/rails-$rails_seed.board.json"
+check "the battery is wired to the top and bottom strips" python3 - "$board" <<'PY'
+import json, sys
+board = json.load(open(sys.argv[1]))
+ends = {w["from"]: w["to"] for w in board["wires"]}
+last = chr(ord("A") + board["board"]["rows"] - 1)
+sys.exit(0 if ends["BT1.+"].startswith("A") and ends["BT1.-"].startswith(last) else 1)
+PY
 finish
