@@ -8,6 +8,7 @@
 #include "editor/app/look.hpp"
 #include "editor/canvas/canvas.hpp"
 #include "editor/file_actions.hpp"
+#include "editor/panels/panel_layout.hpp"
 #include "editor/panels/panels.hpp"
 #include "editor/platform/imgui_impl_sfml.hpp"
 #include "editor/tools/edit_actions.hpp"
@@ -30,7 +31,7 @@ ToolContext toolContext(EditorApp& app) {
 
 MenuContext menuContext(EditorApp& app) {
     return {app.doc,  app.recent,      app.chooser, app.view, editContext(app), app.hover.hole,
-            app.log, &app.jfetPanel.open};
+            app.log, &app.jfetPanel.open, &app.layoutDialog};
 }
 
 CanvasContext canvasContext(EditorApp& app) {
@@ -240,6 +241,7 @@ void drawPanels(EditorApp& app, const PanelLayout& l) {
                   showVoltages ? &*voltages->voltages.value : nullptr, app.log);
     drawCircuitPanel(circuitPanelContext(app));
     drawJfetBiasPanel({app.doc, app.jfetPanel, app.commands(), app.log});
+    drawLayoutDialog({app.doc, app.layoutDialog, app.commands(), app.log, app.view, app.selection});
     drawHelpWindow(app.view.showHelp, app.log);
 }
 

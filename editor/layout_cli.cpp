@@ -21,7 +21,7 @@ namespace {
 
 constexpr const char* kUsage =
     "usage: stripsmith --layout OUT.board.json [--board RxC] [--seconds S] [--seed N]\n"
-    "                  [--iterations N] INPUT\n"
+    "                  [--iterations N] [--rails] INPUT\n"
     "       INPUT: a circuit file (JSON or SPICE deck) or a board file with its circuit\n";
 
 struct LayoutArgs {
@@ -32,6 +32,7 @@ struct LayoutArgs {
     double seconds = 10;
     unsigned long long seed = 1;
     long iterations = 1L << 40;  // the time budget ends the run unless this is given
+    bool rails = false;
 };
 
 std::optional<LayoutArgs> parseArgs(int argc, char** argv) {
@@ -64,6 +65,8 @@ std::optional<LayoutArgs> parseArgs(int argc, char** argv) {
             } else if (std::sscanf(value.c_str(), "%llu%c", &args.seed, &extra) != 1) {
                 return fail("--seed wants a whole number, not \"" + value + "\"");
             }
+        } else if (arg == "--rails") {
+            args.rails = true;
         } else if (arg.size() > 1 && arg[0] == '-') {
             return fail("unknown option \"" + arg + "\"");
         } else if (!args.input.empty()) {
@@ -139,6 +142,7 @@ int runLayoutCommand(int argc, char** argv) {
     options.iterations = args->iterations;
     options.maxRows = args->rows;
     options.maxCols = args->cols;
+    options.rails = args->rails;
     const auto deadline =
         std::chrono::steady_clock::now() + std::chrono::duration<double>(args->seconds);
     options.stop = [&] { return std::chrono::steady_clock::now() >= deadline; };
@@ -167,10 +171,9 @@ int runLayoutCommand(int argc, char** argv) {
     const netcheck::LayoutScore& s = result.score;
     std::printf("area %ld holes (%s), %d links, %d cuts, link length %d\n", s.area(),
                 netcheck::sizeInHoles(s.cols, s.rows).c_str(), s.links, s.cuts, s.linkLength);
-    std::printf("lower bound: %d strips, %d holes along the strips (area at least %ld); the part "
-                "order found needs %d strips if no net changed strip\n",
-                result.bounds.strips, result.bounds.columns,
-                long{result.bounds.strips} * result.bounds.columns, result.bounds.orderStrips);
+    std::printf("lower bound: %d strips, area at least %ld holes; the part order found needs %d "
+                "strips if no net changed strip\n",
+                result.bounds.strips, result.bounds.area, result.bounds.orderStrips);
     std::printf("wrote %s (%ld part orders tried)\n", netcheck::escapeControls(args->out).c_str(),
                 result.iterationsUsed);
     return 0;

@@ -13,6 +13,7 @@
 #include "editor/app/dialogs.hpp"
 #include "editor/app/document.hpp"
 #include "editor/app/jfet_panel_state.hpp"
+#include "editor/app/layout_dialog_state.hpp"
 #include "editor/app/hover.hpp"
 #include "editor/app/selection.hpp"
 #include "editor/app/test_log.hpp"
@@ -55,6 +56,7 @@ struct EditorApp {
     BenchVoltagesWorker benchVoltages;       ///< computes off the frame (View > Bench voltages)
     std::optional<unsigned> benchRequested;  ///< the revision last asked for
     JfetPanelState jfetPanel;                ///< the JFET bias panel's figures
+    LayoutDialogState layoutDialog;          ///< Board > Lay out ...: options, run, results
 
     /// The way to change the document: commands, reported in the status line.
     Commands commands() { return Commands(doc, status, log); }

@@ -1,7 +1,8 @@
-// The menus: File, Edit, View, Help.
+// The menus: File, Edit, View, Board, Help.
 #include <imgui.h>
 
 #include "editor/app/look.hpp"
+#include "editor/panels/panel_layout.hpp"
 #include "editor/panels/panels.hpp"
 
 namespace stripsmith {
@@ -92,6 +93,25 @@ void viewMenu(const MenuContext& c) {
     ImGui::EndMenu();
 }
 
+// Board: the layout engine's two entries, which open the layout dialog (they need a circuit).
+void boardMenu(const MenuContext& c) {
+    if (!ImGui::BeginMenu("Board")) {
+        c.log.item("menu-board");
+        return;
+    }
+    const netcheck::Board& board = c.doc.board();
+    const bool circuit = board.circuit && !board.circuit->parts.empty() && c.layout != nullptr;
+    if (ImGui::MenuItem("Lay out from the circuit...", nullptr, false, circuit))
+        openLayoutDialog(*c.layout, false);
+    c.log.item("menu-layout");
+    if (ImGui::MenuItem("Place the remaining parts...", nullptr, false,
+                        circuit && !board.parts.empty()))
+        openLayoutDialog(*c.layout, true);
+    c.log.item("menu-place-rest");
+    if (!circuit) ImGui::TextDisabled("(load a circuit in the Circuit panel first)");
+    ImGui::EndMenu();
+}
+
 void titleAndCheck(const Document& doc) {
     const auto& report = doc.report();
     const std::string title = (doc.path().empty() ? std::string("untitled") : doc.path()) +
@@ -117,6 +137,7 @@ FileRequest drawMenuBar(const MenuContext& c) {
     const FileRequest request = fileMenu(c);
     editMenu(c);
     viewMenu(c);
+    boardMenu(c);
     if (ImGui::BeginMenu("Help")) {
         ImGui::MenuItem("Keys", "F1", &c.view.showHelp);
         ImGui::EndMenu();

@@ -10,6 +10,7 @@
 
 #include "editor/app/circuit_panel_state.hpp"
 #include "editor/app/jfet_panel_state.hpp"
+#include "editor/app/layout_dialog_state.hpp"
 #include "editor/app/commands.hpp"
 #include "editor/app/dialogs.hpp"
 #include "editor/app/document.hpp"
@@ -56,6 +57,7 @@ struct MenuContext {
     std::optional<netcheck::Hole> pasteAt;  ///< the hole under the mouse
     TestLog& log;
     bool* showJfetBias = nullptr;  ///< View > JFET bias helper
+    LayoutDialogState* layout = nullptr;  ///< Board > Lay out ... opens it
 };
 
 /// What the JFET bias panel reads and changes.
@@ -78,7 +80,7 @@ struct CircuitPanelContext {
     TestLog& log;
 };
 
-/// File, Edit, View and Help menus.
+/// File, Edit, View, Board and Help menus.
 FileRequest drawMenuBar(const MenuContext& c);
 /// "Parts": tools, the part palette, off-board parts, and placing options.
 /// Returns where an off-board part it added is (board units), for the view to scroll to.

@@ -7,9 +7,12 @@
 #include <random>
 
 #include "netcheck/layout/column_order.hpp"
-#include "netcheck/model/board_size.hpp"
+#include "netcheck/layout/detail/column_merge.hpp"
 #include "netcheck/layout/detail/layout_circuit.hpp"
 #include "netcheck/layout/detail/strip_sweep.hpp"
+#include "netcheck/layout/detail/supply_rails.hpp"
+#include "netcheck/layout/supply_nets.hpp"
+#include "netcheck/model/board_size.hpp"
 
 namespace netcheck {
 
@@ -101,7 +104,86 @@ void scatterLugHoles(const LayoutCircuit& circuit, const Arrangement& arrangemen
     }
 }
 
-Built build(const LayoutCircuit& circuit, const Arrangement& arrangement, int maxRows) {
+// Parts stacked in shared columns where their strips allow (column_merge.hpp); placed parts and
+// everything left of them stay.
+void stackColumns(const LayoutCircuit& circuit, int fixedCols, Built& built) {
+    std::vector<std::vector<Hole>> groups = built.partHoles;
+    for (const auto& placed : circuit.placed) {
+        std::vector<Hole> pins;
+        for (const Pin& pin : placed.part->pins) pins.push_back(pin.hole);
+        groups.push_back(pins);
+    }
+    for (const auto& lugs : built.offboardHoles) {
+        for (const Hole& hole : lugs) {
+            if (hole.row >= 0) groups.push_back({hole});
+        }
+    }
+    const std::vector<int> newColumn = layout_detail::mergeColumns(built.copper, groups, fixedCols);
+    auto move = [&](Hole& hole) { hole.col = newColumn[static_cast<std::size_t>(hole.col)]; };
+    for (auto& holes : built.partHoles) std::for_each(holes.begin(), holes.end(), move);
+    for (auto& holes : built.offboardHoles) {
+        for (Hole& hole : holes) {
+            if (hole.row >= 0) move(hole);
+        }
+    }
+}
+
+// The nets the rails carry (-1: none, or no rails wanted).
+struct Rails {
+    int positive = -1;
+    int ground = -1;
+    bool wanted() const { return positive >= 0 || ground >= 0; }
+};
+
+// Off-board supply wires go to their rail in the column they are in, when the rail's hole there
+// is free: the rail is where a maker looks for them.
+void wiresToRails(const LayoutCircuit& circuit, const Rails& rails, Built& built) {
+    auto linkAt = [&](Hole hole) {
+        return std::any_of(built.copper.links.begin(), built.copper.links.end(), [&](const auto& l) {
+            return l.from.col == hole.col && l.from.row <= hole.row && hole.row <= l.to.row;
+        });
+    };
+    for (std::size_t p = 0; p < circuit.offboard.size(); ++p) {
+        for (std::size_t lug = 0; lug < circuit.offboard[p].nets.size(); ++lug) {
+            Hole& hole = built.offboardHoles[p][lug];
+            const int net = circuit.offboard[p].nets[lug];
+            if (hole.row < 0 || net < 0) continue;
+            const int railRow = net == rails.positive ? 0
+                                : net == rails.ground ? built.copper.rows - 1
+                                                      : -1;
+            const Hole onRail{railRow, hole.col};
+            if (railRow < 0 || linkAt(onRail)) continue;
+            const auto& column = built.copper.owner[static_cast<std::size_t>(hole.col)];
+            if (column[static_cast<std::size_t>(railRow)] != net) continue;
+            hole = onRail;
+        }
+    }
+}
+
+// Adds the rails to a built layout; false when one cannot be joined to its net.
+bool addRails(const LayoutCircuit& circuit, const Rails& rails, Built& built) {
+    std::vector<std::vector<Hole>> groups = built.partHoles;
+    for (const auto& lugs : built.offboardHoles) {
+        for (const Hole& hole : lugs) {
+            if (hole.row >= 0) groups.push_back({hole});
+        }
+    }
+    const auto shift = layout_detail::addSupplyRails(built.copper, groups, rails.positive, rails.ground);
+    if (!shift) return false;
+    for (auto& holes : built.partHoles) {
+        for (Hole& hole : holes) hole.row += *shift;
+    }
+    for (auto& holes : built.offboardHoles) {
+        for (Hole& hole : holes) {
+            if (hole.row >= 0) hole.row += *shift;
+        }
+    }
+    wiresToRails(circuit, rails, built);
+    return true;
+}
+
+Built build(const LayoutCircuit& circuit, const Arrangement& arrangement, int maxRows,
+            const Rails& rails) {
     Built built;
     StripSweep sweep(circuit.uses, maxRows);
     int fixedCols = 0;
@@ -133,6 +215,8 @@ Built build(const LayoutCircuit& circuit, const Arrangement& arrangement, int ma
         scatterLugHoles(circuit, arrangement, right, *holes, built);
     }
     built.copper = sweep.finish();
+    stackColumns(circuit, fixedCols, built);
+    if (rails.wanted() && !addRails(circuit, rails, built)) return built;
     built.cuts = cutsBetweenNets(built.copper);
     built.score.rows = built.copper.rows;
     built.score.cols = built.copper.cols;
@@ -221,6 +305,31 @@ std::string wireColour(const std::string& netName, int& nextColour) {
     return kColours[nextColour++ % 5];
 }
 
+// Off-board parts stand beside the edge their wires go to (the board file's `place`: body's
+// top-left corner in pitches; the stacking pitch and box width follow the editor's default column
+// right of the board), so no wire crosses the board to reach its part.
+void placeBesideTheirEdge(Board& board, const Built& built) {
+    constexpr double kGap = 3.0;    // room for the row letters
+    constexpr double kStack = 4.2;  // one part below the other
+    int left = 0;
+    int right = 0;
+    for (std::size_t p = 0; p < board.offboard.size(); ++p) {
+        double sum = 0;
+        int wired = 0;
+        for (const Hole& hole : built.offboardHoles[p]) {
+            if (hole.col < 0) continue;
+            sum += hole.col;
+            ++wired;
+        }
+        if (board.offboard[p].extra.contains("place")) continue;
+        const bool onLeft = wired > 0 && sum / wired < (board.cols - 1) / 2.0;
+        const double width = std::max(4.0, 1.0 + 1.5 * static_cast<double>(board.offboard[p].pins.size()));
+        const double x = onLeft ? -kGap - width : board.cols + kGap;
+        const double y = 0.5 + kStack * (onLeft ? left++ : right++);
+        board.offboard[p].extra["place"] = {{"x", x}, {"y", y}};
+    }
+}
+
 Board makeBoard(const Circuit& circuit, const LayoutCircuit& described, const Built& built,
                 const Board* placed) {
     Board board;
@@ -250,7 +359,10 @@ Board makeBoard(const Circuit& circuit, const LayoutCircuit& described, const Bu
     for (std::size_t p = 0; p < described.offboard.size(); ++p) {
         const auto& off = described.offboard[p];
         const CircuitPart& source = circuit.parts.at(off.ref);
-        board.offboard.push_back({off.ref, source.kind, source.value, off.rule.pins, nlohmann::json::object()});
+        // The maker's own drawing hints (where the part was dragged to) stay.
+        const OffboardPart* kept = placed != nullptr ? placed->findOffboard(off.ref) : nullptr;
+        board.offboard.push_back({off.ref, source.kind, source.value, off.rule.pins,
+                                  kept != nullptr ? kept->extra : nlohmann::json::object()});
         for (std::size_t lug = 0; lug < off.nets.size(); ++lug) {
             const int net = off.nets[lug];
             if (net < 0) continue;
@@ -271,6 +383,7 @@ Board makeBoard(const Circuit& circuit, const LayoutCircuit& described, const Bu
                                    nlohmann::json::object()});
         }
     }
+    placeBesideTheirEdge(board, built);
     board.circuit = circuit;
     return board;
 }
@@ -278,6 +391,8 @@ Board makeBoard(const Circuit& circuit, const LayoutCircuit& described, const Bu
 LayoutBounds bounds(const LayoutCircuit& described, const ColumnProblem& problem,
                     const std::vector<int>& order) {
     LayoutBounds result;
+    long footprint = 0;
+    int widest = 1;
     for (const auto& part : described.parts) {
         int tallest = 1 << 30;  // the shortest shape of the part
         for (const auto& shape : part.shapes) {
@@ -294,21 +409,64 @@ LayoutBounds bounds(const LayoutCircuit& described, const ColumnProblem& problem
                                   ? static_cast<int>((distinct + 1) / 2)
                                   : static_cast<int>(distinct);
         result.strips = std::max({result.strips, tallest, perColumn});
-        result.columns += part.rule.shape == LeadShape::Dip ? 4 : 1;
+        // Holes no other part can use: a DIP's pins (links may pass under its body), every
+        // other part's leads and the body between them.
+        footprint += part.rule.shape == LeadShape::Dip ? static_cast<long>(part.nets.size()) : tallest;
+        widest = std::max(widest, part.rule.shape == LeadShape::Dip ? 4 : 1);
     }
+    result.area = std::max(footprint, long{result.strips} * widest);
     result.orderStrips = openStrips(problem, order);
     return result;
+}
+
+// Parts on the board that the circuit does not name: their pins have no net to lay out, so they
+// cannot be kept as they stand.
+std::string partsNotInCircuit(const Circuit& circuit, const Board& placed) {
+    std::string refs;
+    int count = 0;
+    for (const Part& part : placed.parts) {
+        if (circuit.parts.count(part.ref) > 0) continue;
+        refs += (count++ > 0 ? ", " : "") + part.ref;
+    }
+    if (count == 0) return {};
+    return "the board holds " + std::string(count == 1 ? "a part" : "parts") +
+           " the circuit does not name (" + refs +
+           "): add them to the circuit or delete them from the board first";
+}
+
+Rails railNets(const LayoutCircuit& described, const Circuit& circuit) {
+    Rails rails;
+    const SupplyNets supply = findSupplyNets(circuit);
+    for (std::size_t net = 0; net < described.netNames.size(); ++net) {
+        if (supply.positive && described.netNames[net] == *supply.positive) rails.positive = static_cast<int>(net);
+        if (supply.ground && described.netNames[net] == *supply.ground) rails.ground = static_cast<int>(net);
+    }
+    return rails;
 }
 
 }  // namespace
 
 LayoutResult layOut(const Circuit& circuit, const LayoutOptions& options, const Board* placed) {
     LayoutResult result;
+    if (placed != nullptr) {
+        result.problem = partsNotInCircuit(circuit, *placed);
+        if (result.problem.empty() && options.rails && !placed->parts.empty())
+            result.problem = "supply rails are laid out only from the circuit, not around parts "
+                             "already placed";
+        if (!result.problem.empty()) return result;
+    }
     const LayoutCircuit described = layout_detail::describeCircuit(circuit, placed);
+    const Rails rails = options.rails ? railNets(described, circuit) : Rails{};
+    if (options.rails && !rails.wanted()) {
+        result.problem = "the circuit has no supply nets for the rails (a battery or DC jack, or "
+                         "nets named like VCC and GND)";
+        return result;
+    }
     // Room for every net at once plus a few strips to move nets across; a fixed board caps it.
     int maxRows = static_cast<int>(described.netNames.size()) + 8;
     if (placed != nullptr) maxRows = std::max(maxRows, placed->rows + 8);
     if (options.maxRows > 0) maxRows = std::min(maxRows, options.maxRows);
+    if (options.maxRows > 0 && rails.wanted()) maxRows = std::min(maxRows, options.maxRows - 2);
     const ColumnProblem problem = orderingProblem(described);
     OrderOptions orderOptions;
     orderOptions.seed = options.seed;
@@ -318,7 +476,7 @@ LayoutResult layOut(const Circuit& circuit, const LayoutOptions& options, const 
     current.rightEdge = nearerEdges(described, current.order);
     result.bounds = bounds(described, problem, current.order);
 
-    Built best = build(described, current, maxRows);
+    Built best = build(described, current, maxRows, rails);
     Arrangement bestArrangement = current;
     double currentWeight = weight(best);
     std::mt19937_64 random(options.seed);
@@ -330,7 +488,7 @@ LayoutResult layOut(const Circuit& circuit, const LayoutOptions& options, const 
         if (options.stop && options.stop()) break;
         Arrangement candidate = current;
         mutate(candidate, random);
-        const Built built = build(described, candidate, maxRows);
+        const Built built = build(described, candidate, maxRows, rails);
         const double w = weight(built);
         const double t = hot * std::pow(cold / hot, static_cast<double>(iteration) /
                                                         static_cast<double>(options.iterations));

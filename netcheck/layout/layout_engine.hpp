@@ -44,6 +44,9 @@ struct LayoutOptions {
     std::function<void(const LayoutProgress&)> progress;
     int maxRows = 0;  ///< a fixed board: at most this many strips (0: any)
     int maxCols = 0;  ///< and holes per strip (0: any)
+    /// The positive supply on the top strip and 0 V on the bottom strip, each the whole length
+    /// (supply_nets.hpp says which nets those are). Only for a layout from scratch.
+    bool rails = false;
 };
 
 /// Bounds no layout of the circuit beats, shown beside the result.
@@ -51,7 +54,8 @@ struct LayoutBounds {
     int strips = 0;       ///< the most nets one column of a part touches; the tallest part
     int orderStrips = 0;  ///< strips the part order found needs if every net kept one strip
                           ///< (a DIP counted as one column): the density the sweep starts from
-    int columns = 0;      ///< one column per on-board part (four for a DIP)
+    long area = 0;        ///< holes: the parts' leads and bodies (no two share a hole), and at
+                          ///< least `strips` times the widest part
 };
 
 struct LayoutResult {
@@ -63,9 +67,10 @@ struct LayoutResult {
     long iterationsUsed = 0;
 };
 
-/// Lays out `circuit`. With `placed`, its parts that the circuit names (and any others on it)
-/// stay exactly where they are and the rest go to their right; its cuts, links and wires are
-/// made anew. Deterministic for a given seed and iteration count.
+/// Lays out `circuit`. With `placed`, its parts stay exactly where they are and the rest go to
+/// their right; its cuts, links and wires are made anew. A placed part the circuit does not name
+/// is refused (named in the problem), as are rails around placed parts. Deterministic for a
+/// given seed and iteration count.
 LayoutResult layOut(const Circuit& circuit, const LayoutOptions& options = {},
                     const Board* placed = nullptr);
 

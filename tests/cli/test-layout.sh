@@ -62,6 +62,16 @@ done
 layout_and_check "fixed-board" "$out/astable.circuit.json" --board 20x40
 grep -q '"rows": 20' "$out/fixed-board.board.json" || fail "fixed board: size not kept"
 
+# Supply rails: laid out and checked like the rest; the strips' nets are checked below.
+layout_and_check "astable-rails" "$out/astable.circuit.json" --rails
+python3 - "$out/astable-rails.board.json" <<'PY' || fail "--rails: the battery's wires do not start on the top and bottom strips"
+import json, sys
+board = json.load(open(sys.argv[1]))
+ends = {w["from"]: w["to"] for w in board["wires"]}
+last = chr(ord("A") + board["board"]["rows"] - 1)
+sys.exit(0 if ends["BT1.+"].startswith("A") and ends["BT1.-"].startswith(last) else 1)
+PY
+
 # Every report clean of link contacts; every placed part where it was.
 python3 - "$out" "${checked[@]}" <<'PY' || fail "reports or placed parts"
 import json, sys
@@ -87,6 +97,17 @@ PY
 [ $? = 1 ] || fail "board too small: exit not 1"
 [ -e "$out/small.board.json" ] && fail "board too small: a file was written"
 grep -q "no layout" "$out/small.err" || fail "board too small: no message"
+
+# Place the rest with a placed part the circuit does not name: exit 1, the part named.
+python3 - "$out/astable.placed.board.json" "$out/stray.board.json" <<'PY'
+import json, sys
+board = json.load(open(sys.argv[1]))
+board["parts"].append({"ref": "R99", "kind": "resistor", "value": "1k", "pins": {"1": "A20", "2": "E20"}})
+board["board"]["cols"] = max(board["board"]["cols"], 20)
+json.dump(board, open(sys.argv[2], "w"))
+PY
+"$bin/stripsmith" --layout "$out/stray-out.board.json" --iterations 20 "$out/stray.board.json" > /dev/null 2> "$out/stray.err"
+[ $? = 1 ] && grep -q "does not name (R99)" "$out/stray.err" || { fail "stray placed part: not exit 1 naming R99"; cat "$out/stray.err"; }
 
 # Unusable input: exit 2 with the file named.
 printf '{"parts": {"R1": {"kind": "resistor"}}, "nets": 7}\n' > "$out/bad.json"
