@@ -231,6 +231,19 @@ TEST_CASE("circuit text: empty text is an empty circuit") {
     CHECK(parsed("\n  # only a comment\n\n") == Circuit{});
 }
 
+TEST_CASE("circuit text: the example in docs/editor.md reads as the seven-part circuit and one net") {
+    const std::string doc = test_support::readTextFile(test_support::sourcePath("docs/editor.md"));
+    const auto section = doc.find("### The circuit as text");
+    REQUIRE(section != std::string::npos);
+    const auto open = doc.find("```\n", section);
+    const auto close = doc.find("```", open + 4);
+    REQUIRE(close != std::string::npos);
+    Circuit circuit = parsed(doc.substr(open + 4, close - open - 4));
+    CHECK(circuit.nets.at("IN") == pins({"J1.T", "C2.1"}));
+    circuit.nets.erase("IN");
+    CHECK(circuit == parsed(kSevenParts));
+}
+
 TEST_CASE("circuit text: every sample circuit goes circuit -> text -> circuit unchanged") {
     int circuits = 0;
     for (const std::string& path : test_support::sourceFiles("samples", ".board.json")) {
