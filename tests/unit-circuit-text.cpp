@@ -11,10 +11,10 @@
 #include "test_support.hpp"
 
 using netcheck::Circuit;
-using netcheck::CircuitTextError;
-using netcheck::PinRef;
 using netcheck::circuitText;
+using netcheck::CircuitTextError;
 using netcheck::parseCircuitText;
+using netcheck::PinRef;
 
 namespace {
 
@@ -134,7 +134,8 @@ TEST_CASE("circuit text: kinds without pin names number their pins 1..N") {
 }
 
 TEST_CASE("circuit text: pins by name with PIN=NET") {
-    const Circuit circuit = parsed("Q1 BJT 2N3904 : E=GND B=IN C=OUT\nSW1 switch : COM=VCC NO=LAMP\n");
+    const Circuit circuit =
+        parsed("Q1 BJT 2N3904 : E=GND B=IN C=OUT\nSW1 switch : COM=VCC NO=LAMP\n");
     CHECK(circuit.parts.at("Q1").kind == "bjt");  // kinds in any case
     CHECK(circuit.nets.at("GND") == pins({"Q1.E"}));
     CHECK(circuit.nets.at("OUT") == pins({"Q1.C"}));
@@ -219,7 +220,8 @@ TEST_CASE("circuit text: errors name line and column") {
 }
 
 TEST_CASE("circuit text: every error is listed, in text order") {
-    const auto result = parseCircuitText("X1 widget : A\nR1 resistor 1k : A\nR1 resistor 1k : B C\n");
+    const auto result =
+        parseCircuitText("X1 widget : A\nR1 resistor 1k : A\nR1 resistor 1k : B C\n");
     REQUIRE(result.errors.size() == 3);
     CHECK(result.errors[0].line == 1);
     CHECK(result.errors[1].line == 2);
@@ -231,7 +233,8 @@ TEST_CASE("circuit text: empty text is an empty circuit") {
     CHECK(parsed("\n  # only a comment\n\n") == Circuit{});
 }
 
-TEST_CASE("circuit text: the example in docs/editor.md reads as the seven-part circuit and one net") {
+TEST_CASE(
+    "circuit text: the example in docs/editor.md reads as the seven-part circuit and one net") {
     const std::string doc = test_support::readTextFile(test_support::sourcePath("docs/editor.md"));
     const auto section = doc.find("### The circuit as text");
     REQUIRE(section != std::string::npos);
@@ -283,7 +286,9 @@ TEST_CASE("circuit text: printing what text cannot say in part lines") {
 
 TEST_CASE("circuit text: applying keeps declared pins, unknown keys and pin order") {
     Circuit before;
-    before.parts["U1"] = {"ic", "TL071", {"1", "2", "3", "4", "5", "6", "7", "8"},
+    before.parts["U1"] = {"ic",
+                          "TL071",
+                          {"1", "2", "3", "4", "5", "6", "7", "8"},
                           nlohmann::json{{"note", "socketed"}}};
     before.nets["OUT"] = {{"U1", "6"}, {"R1", "2"}};
     before.extra = nlohmann::json{{"author", "me"}};
@@ -291,9 +296,11 @@ TEST_CASE("circuit text: applying keeps declared pins, unknown keys and pin orde
     const Circuit kept = netcheck::keepWhatTextCannotSay(typed, before);
     CHECK(kept == before);
     // A pin outside the declared list drops the list (the text now says more than it).
-    const Circuit more = netcheck::keepWhatTextCannotSay(
-        parsed("U1 ic TL071 : - - - - - - - - OUT\n"), before);
+    const Circuit more =
+        netcheck::keepWhatTextCannotSay(parsed("U1 ic TL071 : - - - - - - - - OUT\n"), before);
     CHECK(more.parts.at("U1").pins.empty());
     // Another kind drops it too.
-    CHECK(netcheck::keepWhatTextCannotSay(parsed("U1 header : A\n"), before).parts.at("U1").pins.empty());
+    CHECK(netcheck::keepWhatTextCannotSay(parsed("U1 header : A\n"), before)
+              .parts.at("U1")
+              .pins.empty());
 }

@@ -37,8 +37,10 @@ std::string usualPins(const netcheck::PartKind& kind) {
 void kindPicker(const char* id, std::string& kind, std::string& pins, TestLog& log) {
     ImGui::PushID(id);
     ImGui::SetNextItemWidth(110);
-    if (ImGui::InputText("##kind", &kind))
-        if (const netcheck::PartKind* known = netcheck::findPartKind(kind)) pins = usualPins(*known);
+    if (ImGui::InputText("##kind", &kind)) {
+        const netcheck::PartKind* known = netcheck::findPartKind(kind);
+        if (known != nullptr) pins = usualPins(*known);
+    }
     log.item(std::string(id) + "-part-kind");
     ImGui::SameLine(0, 0);
     if (ImGui::BeginCombo("##kinds", nullptr, ImGuiComboFlags_NoPreview)) {

@@ -116,8 +116,7 @@ void drawCircuitText(const CircuitPanelContext& c) {
     const float errorsHeight = line * 4.5f;
     const float below = errorsHeight + ImGui::GetFrameHeightWithSpacing() + line;
     const float boxHeight = std::max(line * 6, ImGui::GetContentRegionAvail().y - below);
-    if (ImGui::InputTextMultiline("##circuit-text", &s.text, {-1, boxHeight}))
-        s.textEdited = true;
+    if (ImGui::InputTextMultiline("##circuit-text", &s.text, {-1, boxHeight})) s.textEdited = true;
     c.log.item("circuit-text");
     readText(s, c.log);
     applyButtons(c);

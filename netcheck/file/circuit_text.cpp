@@ -33,7 +33,9 @@ struct Token {
     }
 };
 
-bool isBlank(char c) { return c == ' ' || c == '\t' || c == '\r'; }
+bool isBlank(char c) {
+    return c == ' ' || c == '\t' || c == '\r';
+}
 
 // Columns count characters, not bytes, so they match what the maker sees.
 int columnAt(std::string_view line, std::size_t byte) {
@@ -45,7 +47,8 @@ int columnAt(std::string_view line, std::size_t byte) {
 
 std::string kindNames() {
     std::string names;
-    for (const PartKind& kind : partKinds()) names += (names.empty() ? "" : ", ") + std::string(kind.name);
+    for (const PartKind& kind : partKinds())
+        names += (names.empty() ? "" : ", ") + std::string(kind.name);
     return names;
 }
 
@@ -103,23 +106,28 @@ private:
     void readLine(std::string_view line, int number) {
         std::vector<Token> tokens;
         if (!tokenize(line, number, tokens) || tokens.empty()) return;
-        const auto colon = std::find_if(tokens.begin(), tokens.end(), [](const Token& t) { return t.colon; });
+        const auto colon =
+            std::find_if(tokens.begin(), tokens.end(), [](const Token& t) { return t.colon; });
         const auto head = static_cast<std::size_t>(colon - tokens.begin());
         if (colon != tokens.end()) {
-            const auto second = std::find_if(colon + 1, tokens.end(), [](const Token& t) { return t.colon; });
+            const auto second =
+                std::find_if(colon + 1, tokens.end(), [](const Token& t) { return t.colon; });
             if (second != tokens.end()) {
-                fail(number, second->column, "a second ':' on one line (names holding ':' go in quotes)");
+                fail(number, second->column,
+                     "a second ':' on one line (names holding ':' go in quotes)");
                 return;
             }
         }
         if (head == 0) {
-            fail(number, tokens[0].column, "the line starts with ':'; write NET: REF.PIN ... or REF KIND VALUE : NETS");
+            fail(number, tokens[0].column,
+                 "the line starts with ':'; write NET: REF.PIN ... or REF KIND VALUE : NETS");
         } else if (head == 1 && colon != tokens.end()) {
             netLine(tokens, number);
         } else if (head == 1) {
             fail(number, tokens[0].column,
-                 "\"" + tokens[0].text + "\" alone: write a part as REF KIND VALUE : NETS (in the kind's pin order) "
-                 "or a net as NET: REF.PIN REF.PIN ...");
+                 "\"" + tokens[0].text +
+                     "\" alone: write a part as REF KIND VALUE : NETS (in the kind's pin order) "
+                     "or a net as NET: REF.PIN REF.PIN ...");
         } else {
             partLine(tokens, head, number);
         }
@@ -178,18 +186,22 @@ private:
         const Token& kindWord = tokens[1];
         const PartKind* kind = kindNamed(kindWord.text);
         if (kind == nullptr) {
-            fail(line, kindWord.column, "unknown kind \"" + kindWord.text + "\"" + nearKind(kindWord.text) +
-                                            "; the kinds are " + kindNames());
+            fail(line, kindWord.column,
+                 "unknown kind \"" + kindWord.text + "\"" + nearKind(kindWord.text) +
+                     "; the kinds are " + kindNames());
             return;
         }
         CircuitPart part;
         part.kind = std::string(kind->name);
         for (std::size_t i = 2; i < head; ++i) part.value += (i > 2 ? " " : "") + tokens[i].text;
-        if (!valueUsable(part.value, *kind, ref.text, head > 2 ? tokens[2].column : 0, line)) return;
+        if (!valueUsable(part.value, *kind, ref.text, head > 2 ? tokens[2].column : 0, line))
+            return;
         circuit_.parts[ref.text] = part;
         if (head == tokens.size()) return;  // no ':': a part not connected yet
-        const std::vector<Token> pins(tokens.begin() + static_cast<std::ptrdiff_t>(head) + 1, tokens.end());
-        const bool named = std::any_of(pins.begin(), pins.end(), [](const Token& t) { return t.equals != kNone; });
+        const std::vector<Token> pins(tokens.begin() + static_cast<std::ptrdiff_t>(head) + 1,
+                                      tokens.end());
+        const bool named =
+            std::any_of(pins.begin(), pins.end(), [](const Token& t) { return t.equals != kNone; });
         if (named) {
             pinsByName(ref.text, *kind, pins, line);
         } else {
@@ -205,9 +217,10 @@ private:
         }
         const auto [at, fresh] = declared_.emplace(refIdentity(ref.text), Declared{ref.text, line});
         if (!fresh) {
-            fail(line, ref.column, "duplicate ref " + ref.text + " (" + at->second.spelling +
-                                       " is on line " + std::to_string(at->second.line) +
-                                       "; refs that differ only in case are one part)");
+            fail(line, ref.column,
+                 "duplicate ref " + ref.text + " (" + at->second.spelling + " is on line " +
+                     std::to_string(at->second.line) +
+                     "; refs that differ only in case are one part)");
         }
         return fresh;
     }
@@ -215,43 +228,51 @@ private:
     static std::string nearKind(std::string_view typed) {
         const std::string start = lowered(typed.substr(0, 3));
         for (const PartKind& kind : partKinds())
-            if (start.size() == 3 && kind.name.substr(0, 3) == start) return " (did you mean " + std::string(kind.name) + "?)";
+            if (start.size() == 3 && kind.name.substr(0, 3) == start)
+                return " (did you mean " + std::string(kind.name) + "?)";
         return {};
     }
 
-    bool valueUsable(const std::string& value, const PartKind& kind, const std::string& ref, int column,
-                     int line) {
+    bool valueUsable(const std::string& value, const PartKind& kind, const std::string& ref,
+                     int column, int line) {
         if (const auto problem = textProblem(value)) {
             fail(line, column, ref + ": the value " + *problem);
             return false;
         }
         if (value.empty() || !kind.quantity || parseQuantity(value)) return true;
-        fail(line, column, ref + ": \"" + value + "\" is not a value a " + std::string(kind.name) +
-                               " can have (write it like 4k7, 100n, 2.2u or 10k lin)");
+        fail(line, column,
+             ref + ": \"" + value + "\" is not a value a " + std::string(kind.name) +
+                 " can have (write it like 4k7, 100n, 2.2u or 10k lin)");
         return false;
     }
 
-    void pinsInOrder(const std::string& ref, const PartKind& kind, const std::vector<Token>& nets, int colonColumn,
-                     int line) {
+    void pinsInOrder(const std::string& ref, const PartKind& kind, const std::vector<Token>& nets,
+                     int colonColumn, int line) {
         if (!kind.pins.empty() && nets.size() != kind.pins.size()) {
-            const int column = nets.size() > kind.pins.size() ? nets[kind.pins.size()].column : colonColumn;
-            fail(line, column, ref + ": a " + std::string(kind.name) + " has " + std::to_string(kind.pins.size()) +
-                                   " pins (" + pinList(kind) + "): write " + std::to_string(kind.pins.size()) +
-                                   " nets in that order, - for a pin not connected; " +
-                                   std::to_string(nets.size()) + " written");
+            const int column =
+                nets.size() > kind.pins.size() ? nets[kind.pins.size()].column : colonColumn;
+            fail(line, column,
+                 ref + ": a " + std::string(kind.name) + " has " +
+                     std::to_string(kind.pins.size()) + " pins (" + pinList(kind) + "): write " +
+                     std::to_string(kind.pins.size()) +
+                     " nets in that order, - for a pin not connected; " +
+                     std::to_string(nets.size()) + " written");
             return;
         }
         for (std::size_t i = 0; i < nets.size(); ++i) {
             if (nets[i].notConnected()) continue;
-            const std::string pin = kind.pins.empty() ? std::to_string(i + 1) : std::string(kind.pins[i]);
+            const std::string pin =
+                kind.pins.empty() ? std::to_string(i + 1) : std::string(kind.pins[i]);
             join({ref, pin}, nets[i].text, line, nets[i].column);
         }
     }
 
-    void pinsByName(const std::string& ref, const PartKind& kind, const std::vector<Token>& pins, int line) {
+    void pinsByName(const std::string& ref, const PartKind& kind, const std::vector<Token>& pins,
+                    int line) {
         for (const Token& token : pins) {
             if (token.equals == kNone) {
-                fail(line, token.column, ref + ": write every pin as PIN=NET, or every net in pin order, not both");
+                fail(line, token.column,
+                     ref + ": write every pin as PIN=NET, or every net in pin order, not both");
                 return;
             }
             const std::string pin = token.text.substr(0, token.equals);
@@ -262,14 +283,18 @@ private:
         }
     }
 
-    bool pinUsable(const std::string& ref, const std::string& pin, const PartKind& kind, int line, int column) {
+    bool pinUsable(const std::string& ref, const std::string& pin, const PartKind& kind, int line,
+                   int column) {
         if (pin.empty() || pin.find_first_of(" \t") != kNone) {
             fail(line, column, ref + ": a pin name is empty or holds a blank");
             return false;
         }
-        if (kind.pins.empty() || std::find(kind.pins.begin(), kind.pins.end(), pin) != kind.pins.end()) return true;
-        fail(line, column, ref + " has no pin \"" + pin + "\": a " + std::string(kind.name) + "'s pins are " +
-                               pinList(kind));
+        if (kind.pins.empty() ||
+            std::find(kind.pins.begin(), kind.pins.end(), pin) != kind.pins.end())
+            return true;
+        fail(line, column,
+             ref + " has no pin \"" + pin + "\": a " + std::string(kind.name) + "'s pins are " +
+                 pinList(kind));
         return false;
     }
 
@@ -280,7 +305,8 @@ private:
         for (std::size_t i = 2; i < tokens.size(); ++i) {
             const auto pin = PinRef::parse(tokens[i].text);
             if (!pin) {
-                fail(line, tokens[i].column, "\"" + tokens[i].text + "\" is not a pin: write REF.PIN, like R1.2 or Q1.B");
+                fail(line, tokens[i].column,
+                     "\"" + tokens[i].text + "\" is not a pin: write REF.PIN, like R1.2 or Q1.B");
                 continue;
             }
             if (const auto problem = refProblem(pin->ref)) {
@@ -296,21 +322,26 @@ private:
         const auto declared = declared_.find(refIdentity(p.pin.ref));
         if (declared != declared_.end()) {
             if (declared->second.spelling != p.pin.ref) {
-                fail(p.line, p.column, p.pin.ref + " is written " + declared->second.spelling + " on line " +
-                                           std::to_string(declared->second.line));
+                fail(p.line, p.column,
+                     p.pin.ref + " is written " + declared->second.spelling + " on line " +
+                         std::to_string(declared->second.line));
                 return;
             }
             const auto part = circuit_.parts.find(p.pin.ref);
-            const PartKind* kind = part == circuit_.parts.end() ? nullptr : findPartKind(part->second.kind);
-            if (kind != nullptr && !pinUsable(p.pin.ref, p.pin.pin, *kind, p.line, p.column)) return;
+            const PartKind* kind =
+                part == circuit_.parts.end() ? nullptr : findPartKind(part->second.kind);
+            if (kind != nullptr && !pinUsable(p.pin.ref, p.pin.pin, *kind, p.line, p.column))
+                return;
         }
         join(p.pin, p.net, p.line, p.column);
     }
 
     bool netNameUsable(const std::string& net, int line, int column) {
         std::optional<std::string> problem;
-        if (net.empty()) problem = "is empty";
-        else problem = textProblem(net);
+        if (net.empty())
+            problem = "is empty";
+        else
+            problem = textProblem(net);
         if (problem) fail(line, column, "the net name " + *problem);
         return !problem;
     }
@@ -319,8 +350,9 @@ private:
         if (!netNameUsable(net, line, column)) return;
         const auto [at, fresh] = netOfPin_.emplace(pin, std::make_pair(net, line));
         if (!fresh) {
-            fail(line, column, pin.name() + " is already in net " + at->second.first + " (line " +
-                                   std::to_string(at->second.second) + "); a pin is in one net only");
+            fail(line, column,
+                 pin.name() + " is already in net " + at->second.first + " (line " +
+                     std::to_string(at->second.second) + "); a pin is in one net only");
             return;
         }
         circuit_.nets[net].push_back(pin);
@@ -343,7 +375,7 @@ private:
 
     Circuit circuit_;
     std::vector<CircuitTextError> errors_;
-    std::map<std::string, Declared> declared_;  ///< by ref identity
+    std::map<std::string, Declared> declared_;                ///< by ref identity
     std::map<PinRef, std::pair<std::string, int>> netOfPin_;  ///< net and line of each pin
     std::vector<PendingPin> netLinePins_;
 };
@@ -354,8 +386,8 @@ private:
 std::string written(std::string_view text) {
     const bool plain = !text.empty() && text != kNotConnected &&
                        std::none_of(text.begin(), text.end(), [](char c) {
-                           return isBlank(c) || c == '\n' || c == '"' || c == '#' || c == ':' || c == '=' ||
-                                  c == '\\';
+                           return isBlank(c) || c == '\n' || c == '"' || c == '#' || c == ':' ||
+                                  c == '=' || c == '\\';
                        });
     if (plain) return std::string(text);
     std::string out = "\"";
@@ -403,7 +435,8 @@ public:
 private:
     std::map<std::string, std::string> netsOf(const std::string& ref) const {
         std::map<std::string, std::string> nets;  // pin -> net
-        for (auto at = netOfPin_.lower_bound(PinRef{ref, ""}); at != netOfPin_.end() && at->first.ref == ref; ++at)
+        for (auto at = netOfPin_.lower_bound(PinRef{ref, ""});
+             at != netOfPin_.end() && at->first.ref == ref; ++at)
             nets[at->first.pin] = at->second;
         return nets;
     }
@@ -416,11 +449,14 @@ private:
         text_ += "\n";
     }
 
-    std::string pinWords(const std::string& ref, const PartKind* kind, const std::map<std::string, std::string>& nets) {
+    std::string pinWords(const std::string& ref, const PartKind* kind,
+                         const std::map<std::string, std::string>& nets) {
         std::vector<std::string> order;
         if (kind != nullptr && !kind->pins.empty()) {
             order.assign(kind->pins.begin(), kind->pins.end());
-        } else if (kind != nullptr && std::all_of(nets.begin(), nets.end(), [](const auto& n) { return pinNumber(n.first) > 0; })) {
+        } else if (kind != nullptr && std::all_of(nets.begin(), nets.end(), [](const auto& n) {
+                       return pinNumber(n.first) > 0;
+                   })) {
             std::size_t last = 0;
             for (const auto& [pin, net] : nets) last = std::max(last, pinNumber(pin));
             for (std::size_t n = 1; n <= last; ++n) order.push_back(std::to_string(n));
@@ -461,9 +497,13 @@ private:
 
 }  // namespace
 
-CircuitTextResult parseCircuitText(std::string_view text) { return TextReader().read(text); }
+CircuitTextResult parseCircuitText(std::string_view text) {
+    return TextReader().read(text);
+}
 
-std::string circuitText(const Circuit& circuit) { return TextWriter(circuit).write(); }
+std::string circuitText(const Circuit& circuit) {
+    return TextWriter(circuit).write();
+}
 
 Circuit keepWhatTextCannotSay(Circuit typed, const Circuit& before) {
     typed.extra = before.extra;
