@@ -158,6 +158,10 @@ TEST_CASE("circuit text: errors name line and column") {
         CHECK(error.message.find("did you mean resistor?") != std::string::npos);
         CHECK(error.describe().starts_with("line 2, column 4: "));
     }
+    SUBCASE("a schematic's word for a kind points at the kind") {
+        const auto error = onlyError("Q1 NPN BC547 : C B E\n");
+        CHECK(error.message.find("unknown kind \"NPN\" (did you mean bjt?)") != std::string::npos);
+    }
     SUBCASE("too many nets for the kind: at the first one too many") {
         const auto error = onlyError("Q1 bjt BC547 : C B E X\n");
         CHECK(error.line == 1);

@@ -66,8 +66,9 @@ void errorList(const CircuitPanelState& s, float height) {
                             circuit.parts.size() == 1 ? "" : "s", circuit.nets.size(),
                             circuit.nets.size() == 1 ? "" : "s");
     }
-    for (const auto& error : s.parsed.errors)
-        ImGui::TextColored(kErrorColour, "%s", error.describe().c_str());
+    ImGui::PushStyleColor(ImGuiCol_Text, kErrorColour);
+    for (const auto& error : s.parsed.errors) ImGui::TextWrapped("%s", error.describe().c_str());
+    ImGui::PopStyleColor();
     ImGui::EndChild();
 }
 

@@ -225,7 +225,15 @@ private:
         return fresh;
     }
 
+    // The kind a maker probably meant: the one starting with the same three letters, or the kind
+    // of the part a schematic's word names ("npn" is a bjt). A hint only: the text is refused.
     static std::string nearKind(std::string_view typed) {
+        static const std::map<std::string, std::string> kSchematicWords = {
+            {"npn", "bjt"},       {"pnp", "bjt"},           {"transistor", "bjt"},
+            {"fet", "jfet"},      {"potentiometer", "pot"}, {"elko", "electrolytic"},
+            {"cap", "capacitor"}, {"res", "resistor"},      {"chip", "ic"}};
+        if (const auto word = kSchematicWords.find(lowered(typed)); word != kSchematicWords.end())
+            return " (did you mean " + word->second + "?)";
         const std::string start = lowered(typed.substr(0, 3));
         for (const PartKind& kind : partKinds())
             if (start.size() == 3 && kind.name.substr(0, 3) == start)

@@ -98,7 +98,7 @@ PY
 # ---- a mistake, located; the fix; Revert ----------------------------------------------------------
 click_at $(item_xy circuit-text)
 type_text "Q2 npn BC547 : A B C"
-check "an unknown kind is shown at line 8, column 4" text_reads "error 8:4 unknown kind \"npn\""
+check "an unknown kind is shown at line 8, column 4" text_reads "error 8:4 unknown kind \"npn\" (did you mean bjt?)"
 screenshot text-entry-3-error
 before=$(status_count)
 click_at $(item_xy circuit-text-apply)
