@@ -3,9 +3,11 @@
 #pragma once
 
 #include <map>
+#include <optional>
 #include <string>
 #include <vector>
 
+#include "netcheck/file/circuit_text.hpp"
 #include "netcheck/spice/spice_import.hpp"
 
 namespace stripsmith {
@@ -22,6 +24,15 @@ struct CircuitPanelState {
     std::map<std::string, std::string> pinNetText;  ///< "REF.PIN" -> net name being typed
     std::string renameFrom, renameTo;
     std::string mergeFrom, mergeInto;
+    std::string newNetName, newNetPins;  ///< the Nets tab's "Add a net" form
+
+    // The Text tab: the circuit as lines the maker types (netcheck/file/circuit_text).
+    std::string text;
+    bool textEdited = false;  ///< typed in since it was printed or applied
+    bool selectTextTab = false;  ///< once: the text was applied before the tabs were shown
+    std::optional<netcheck::Circuit> textFrom;  ///< the board's circuit when printed or applied
+    std::string parsedText;                     ///< the text `parsed` was read from
+    netcheck::CircuitTextResult parsed;         ///< what the text says (read again on change)
 };
 
 }  // namespace stripsmith

@@ -26,6 +26,18 @@ void TestLog::item(const std::string& name) {
     if (changed("item " + name, where)) line("item " + name + " " + where);
 }
 
+void TestLog::fit(const std::string& name, ImVec2 areaMin, ImVec2 areaMax) {
+    if (!on_) return;
+    const ImVec2 a = ImGui::GetItemRectMin(), b = ImGui::GetItemRectMax();
+    char where[160];
+    std::snprintf(where, sizeof where, "%.0f %.0f %.0f %.0f in %.0f %.0f %.0f %.0f",
+                  static_cast<double>(a.x), static_cast<double>(a.y), static_cast<double>(b.x),
+                  static_cast<double>(b.y), static_cast<double>(areaMin.x),
+                  static_cast<double>(areaMin.y), static_cast<double>(areaMax.x),
+                  static_cast<double>(areaMax.y));
+    if (changed("fit " + name, where)) line("fit " + name + " " + where);
+}
+
 void TestLog::view(ImVec2 a1, float pitch, bool mirrored, int rows, int cols) const {
     char text[160];
     std::snprintf(text, sizeof text, "view A1 %.1f %.1f pitch %.3f mirrored %d rows %d cols %d",

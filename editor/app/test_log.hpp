@@ -39,6 +39,18 @@ public:
     }
     /// The last ImGui item's centre, "item NAME X Y", when it moved: scripts click there.
     void item(const std::string& name);
+    /// The Circuit panel's text as last read, when it changes: "circuit-text ok parts P nets N",
+    /// or "circuit-text error LINE:COLUMN MESSAGE" for its first error.
+    void circuitText(const std::string& state) {
+        if (changed("circuit-text", state)) line("circuit-text " + state);
+    }
+    /// The menu bar's check summary as shown, "summary TEXT", when it changes.
+    void summary(const std::string& text) {
+        if (changed("summary", text)) line("summary " + text);
+    }
+    /// The last item's rectangle and the one it has to fit in (its table cell, its window), when
+    /// either changes: "fit NAME X0 Y0 X1 Y1 in X0 Y0 X1 Y1". Scripts check nothing is cut off.
+    void fit(const std::string& name, ImVec2 areaMin, ImVec2 areaMax);
     /// Screen position of hole A1 and the signed hole pitch (negative when mirrored).
     void view(ImVec2 a1, float pitch, bool mirrored, int rows, int cols) const;
     void offboard(const std::string& ref, ImVec2 body) const {

@@ -18,6 +18,9 @@ void drawCircuitParts(const CircuitPanelContext& c, const netcheck::Circuit& cir
 /// Nets with their pins; rename and merge.
 void drawCircuitNets(const CircuitPanelContext& c, const netcheck::Circuit& circuit);
 
+/// The whole circuit as text: typed, read live with located errors, applied as one command.
+void drawCircuitText(const CircuitPanelContext& c);
+
 /// The board beside the circuit, net by net, as the check sees it.
 void drawCircuitDifference(const netcheck::Board& board, CircuitPanelState& state);
 

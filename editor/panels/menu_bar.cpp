@@ -1,6 +1,8 @@
 // The menus: File, Edit, View, Board, Help.
 #include <imgui.h>
 
+#include <algorithm>
+
 #include "editor/app/look.hpp"
 #include "editor/panels/panel_layout.hpp"
 #include "editor/panels/panels.hpp"
@@ -112,22 +114,37 @@ void boardMenu(const MenuContext& c) {
     ImGui::EndMenu();
 }
 
-void titleAndCheck(const Document& doc) {
+// "Check: OK" would claim too much for a circuit of parts whose nets are not typed in yet: the
+// check then has nothing to hold the copper against.
+bool circuitWithoutNets(const netcheck::Board& board) {
+    return board.circuit && !board.circuit->parts.empty() && board.circuit->nets.empty();
+}
+
+void titleAndCheck(const Document& doc, TestLog& log) {
     const auto& report = doc.report();
     const std::string title = (doc.path().empty() ? std::string("untitled") : doc.path()) +
                               (doc.modified() ? " *" : "") +
                               (doc.readOnly() ? "  [read-only]" : "");
     ImGui::SameLine(ImGui::GetWindowWidth() * 0.35f);
     ImGui::TextDisabled("%s", title.c_str());
-    ImGui::SameLine(ImGui::GetWindowWidth() - 220);
     const std::size_t warnings = report.warnings.size();
     const std::size_t errors = report.errors.size();
-    if (report.ok())
-        ImGui::TextColored(look::kGoodText, "Check: OK (%zu warning%s)", warnings,
-                           warnings == 1 ? "" : "s");
-    else
-        ImGui::TextColored(look::kErrorText, "Check: %zu error%s", errors,
-                           errors == 1 ? "" : "s");
+    std::string summary;
+    ImVec4 colour = look::kGoodText;
+    if (!report.ok()) {
+        summary = "Check: " + std::to_string(errors) + " error" + (errors == 1 ? "" : "s");
+        colour = look::kErrorText;
+    } else if (circuitWithoutNets(doc.board())) {
+        summary = "Check: the circuit has no nets yet";
+        colour = look::kWarningText;
+    } else {
+        summary = "Check: OK (" + std::to_string(warnings) + " warning" +
+                  (warnings == 1 ? "" : "s") + ")";
+    }
+    const float width = ImGui::CalcTextSize(summary.c_str()).x;
+    ImGui::SameLine(ImGui::GetWindowWidth() - std::max(220.0f, width + 20.0f));
+    ImGui::TextColored(colour, "%s", summary.c_str());
+    log.summary(summary);
 }
 
 }  // namespace
@@ -142,7 +159,7 @@ FileRequest drawMenuBar(const MenuContext& c) {
         ImGui::MenuItem("Keys", "F1", &c.view.showHelp);
         ImGui::EndMenu();
     }
-    titleAndCheck(c.doc);
+    titleAndCheck(c.doc, c.log);
     ImGui::EndMainMenuBar();
     return request;
 }

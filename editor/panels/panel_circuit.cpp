@@ -1,6 +1,6 @@
 // "Circuit": the intended circuit the board is checked against. Load one from a JSON circuit file
-// or a SPICE deck, take the board's present connectivity as the circuit, type it in part by part,
-// compare it with the board, export it, or remove it. Every change is one SetCircuit command.
+// or a SPICE deck, take the board's present connectivity as the circuit, type it in as text or part
+// by part, compare it with the board, export it, or remove it. Every change is one SetCircuit command.
 #include <imgui.h>
 #include <imgui_stdlib.h>
 
@@ -171,16 +171,29 @@ void drawCircuitPanel(const CircuitPanelContext& c) {
         const auto& board = c.doc.board();
         if (!board.circuit) {
             ImGui::TextWrapped(
-                "No intended circuit yet. Load one, start an empty one and type it in, or take the "
-                "board's connections once you have checked them by eye.");
+                "No intended circuit yet. Load one, type it in below, start an empty one and add "
+                "part by part, or take the board's connections once you have checked them by eye.");
+            drawCircuitText(c);
         } else if (ImGui::BeginTabBar("circuit-views")) {
             const netcheck::Circuit circuit = *board.circuit;  // edits below replace the board's
-            if (ImGui::BeginTabItem("Parts")) {
+            const bool parts = ImGui::BeginTabItem("Parts");
+            c.log.item("circuit-tab-parts");
+            if (parts) {
                 drawCircuitParts(c, circuit);
                 ImGui::EndTabItem();
             }
-            if (ImGui::BeginTabItem("Nets")) {
+            const bool nets = ImGui::BeginTabItem("Nets");
+            c.log.item("circuit-tab-nets");
+            if (nets) {
                 drawCircuitNets(c, circuit);
+                ImGui::EndTabItem();
+            }
+            const bool text = ImGui::BeginTabItem(
+                "Text", nullptr, c.state.selectTextTab ? ImGuiTabItemFlags_SetSelected : 0);
+            c.state.selectTextTab = false;
+            c.log.item("circuit-tab-text");
+            if (text) {
+                drawCircuitText(c);
                 ImGui::EndTabItem();
             }
             const bool comparing = ImGui::BeginTabItem("Board against circuit");

@@ -1,11 +1,73 @@
-// The Circuit panel's nets: each with its pins; rename one, merge two.
+// The Circuit panel's nets: each with its pins; add one, rename one, merge two.
 #include <imgui.h>
 #include <imgui_stdlib.h>
+
+#include <sstream>
 
 #include "editor/panels/circuit_views.hpp"
 
 namespace stripsmith {
 namespace {
+
+// The form's labels sit in one column as wide as the widest, so the boxes line up at any font.
+float formLabelWidth() {
+    return ImGui::CalcTextSize("Rename net").x + ImGui::GetStyle().ItemSpacing.x * 2;
+}
+
+// For scripted tests: the button just drawn lies inside the window.
+void logFitsWindow(TestLog& log, const std::string& name) {
+    const ImVec2 at = ImGui::GetWindowPos();
+    const ImVec2 size = ImGui::GetWindowSize();
+    log.fit(name, at, {at.x + size.x, at.y + size.y});
+}
+
+// "R1.1 D1.A, VR1.2": pins separated by blanks or commas; the first one not written REF.PIN is
+// named in `problem`.
+std::vector<netcheck::PinRef> readPins(const std::string& text, std::string& problem) {
+    std::vector<netcheck::PinRef> pins;
+    std::string spaced = text;
+    for (char& ch : spaced)
+        if (ch == ',') ch = ' ';
+    std::istringstream in(spaced);
+    for (std::string word; in >> word;) {
+        const auto pin = netcheck::PinRef::parse(word);
+        if (!pin) {
+            problem = "\"" + word + "\" is not a pin: write REF.PIN, like R1.2 or Q1.B.";
+            return {};
+        }
+        pins.push_back(*pin);
+    }
+    return pins;
+}
+
+void addNetForm(const CircuitPanelContext& c, const netcheck::Circuit& circuit) {
+    auto& s = c.state;
+    ImGui::TextUnformatted("Add net");
+    ImGui::SameLine(formLabelWidth());
+    ImGui::SetNextItemWidth(140);
+    ImGui::InputTextWithHint("##new-net", "name", &s.newNetName);
+    c.log.item("add-net-name");
+    ImGui::SameLine();
+    ImGui::TextUnformatted("pins");
+    ImGui::SameLine();
+    ImGui::SetNextItemWidth(220);
+    ImGui::InputTextWithHint("##new-net-pins", "R1.2 D1.A ...", &s.newNetPins);
+    c.log.item("add-net-pins");
+    ImGui::SameLine();
+    if (ImGui::Button("Add")) {
+        std::string problem;
+        const auto pins = readPins(s.newNetPins, problem);
+        const auto edit = problem.empty() ? addNet(circuit, s.newNetName, pins)
+                                          : netcheck::CircuitEdit(problem);
+        applyCircuitEdit(c, edit, "Add net " + s.newNetName);
+        if (std::holds_alternative<netcheck::Circuit>(edit)) {
+            s.newNetName.clear();
+            s.newNetPins.clear();
+        }
+    }
+    c.log.item("add-net");
+    logFitsWindow(c.log, "add-net");
+}
 
 std::string pinList(const std::vector<netcheck::PinRef>& pins) {
     std::string list;
@@ -16,7 +78,7 @@ std::string pinList(const std::vector<netcheck::PinRef>& pins) {
 void renameForm(const CircuitPanelContext& c, const netcheck::Circuit& circuit) {
     auto& s = c.state;
     ImGui::TextUnformatted("Rename net");
-    ImGui::SameLine(110);
+    ImGui::SameLine(formLabelWidth());
     netNameInput("rename-from", s.renameFrom, circuit, 140);
     ImGui::SameLine();
     ImGui::TextUnformatted("to");
@@ -29,12 +91,13 @@ void renameForm(const CircuitPanelContext& c, const netcheck::Circuit& circuit) 
         applyCircuitEdit(c, edit, "Rename net " + s.renameFrom + " to " + s.renameTo);
         if (std::holds_alternative<netcheck::Circuit>(edit)) s.renameFrom = s.renameTo;
     }
+    logFitsWindow(c.log, "rename-net");
 }
 
 void mergeForm(const CircuitPanelContext& c, const netcheck::Circuit& circuit) {
     auto& s = c.state;
     ImGui::TextUnformatted("Merge net");
-    ImGui::SameLine(110);
+    ImGui::SameLine(formLabelWidth());
     netNameInput("merge-from", s.mergeFrom, circuit, 140);
     ImGui::SameLine();
     ImGui::TextUnformatted("into");
@@ -46,12 +109,14 @@ void mergeForm(const CircuitPanelContext& c, const netcheck::Circuit& circuit) {
         applyCircuitEdit(c, edit, "Merge net " + s.mergeFrom + " into " + s.mergeInto);
         if (std::holds_alternative<netcheck::Circuit>(edit)) s.mergeFrom.clear();
     }
+    logFitsWindow(c.log, "merge-net");
 }
 
 }  // namespace
 
 void drawCircuitNets(const CircuitPanelContext& c, const netcheck::Circuit& circuit) {
     auto& s = c.state;
+    addNetForm(c, circuit);
     renameForm(c, circuit);
     mergeForm(c, circuit);
     ImGui::Separator();
@@ -61,7 +126,11 @@ void drawCircuitNets(const CircuitPanelContext& c, const netcheck::Circuit& circ
             ImGuiTableFlags_RowBg | ImGuiTableFlags_Resizable | ImGuiTableFlags_BordersInnerV)) {
         ImGui::TableSetupColumn("Net", ImGuiTableColumnFlags_WidthFixed, 120);
         ImGui::TableSetupColumn("Pins");
-        ImGui::TableSetupColumn("", ImGuiTableColumnFlags_WidthFixed, 110);
+        // Wide enough for both small buttons at any font size (a fixed width cut "Merge" off).
+        const ImGuiStyle& style = ImGui::GetStyle();
+        const float buttons = ImGui::CalcTextSize("Rename").x + ImGui::CalcTextSize("Merge").x +
+                              style.FramePadding.x * 4 + style.ItemSpacing.x;
+        ImGui::TableSetupColumn("", ImGuiTableColumnFlags_WidthFixed, buttons);
         ImGui::TableHeadersRow();
         for (const auto& [name, pins] : circuit.nets) {
             ImGui::PushID(name.c_str());
@@ -75,9 +144,13 @@ void drawCircuitNets(const CircuitPanelContext& c, const netcheck::Circuit& circ
                 ImGui::TextDisabled("(one pin: joins nothing)");
             }
             ImGui::TableNextColumn();
+            const ImVec2 cell = ImGui::GetCursorScreenPos();
+            const float cellWidth = ImGui::GetContentRegionAvail().x;
             if (ImGui::SmallButton("Rename")) s.renameFrom = s.renameTo = name;
             ImGui::SameLine();
             if (ImGui::SmallButton("Merge")) s.mergeFrom = name;
+            if (name == circuit.nets.begin()->first)
+                c.log.fit("net-row-buttons", cell, {cell.x + cellWidth, ImGui::GetItemRectMax().y});
             ImGui::PopID();
         }
         ImGui::EndTable();

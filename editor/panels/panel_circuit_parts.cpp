@@ -26,11 +26,22 @@ std::string joinPins(const std::vector<std::string>& pins) {
     return text;
 }
 
-/// Kind box with a list of the known kinds; picking one fills in its usual pin names.
-void kindPicker(const char* id, std::string& kind, std::string& pins) {
+std::string usualPins(const netcheck::PartKind& kind) {
+    std::string names;
+    for (auto pin : kind.pins) names += (names.empty() ? "" : " ") + std::string(pin);
+    return names.empty() ? "1 2" : names;
+}
+
+/// Kind box with a list of the known kinds; typing a known kind or picking one from the list
+/// fills in its usual pin names.
+void kindPicker(const char* id, std::string& kind, std::string& pins, TestLog& log) {
     ImGui::PushID(id);
     ImGui::SetNextItemWidth(110);
-    ImGui::InputText("##kind", &kind);
+    if (ImGui::InputText("##kind", &kind)) {
+        const netcheck::PartKind* known = netcheck::findPartKind(kind);
+        if (known != nullptr) pins = usualPins(*known);
+    }
+    log.item(std::string(id) + "-part-kind");
     ImGui::SameLine(0, 0);
     if (ImGui::BeginCombo("##kinds", nullptr, ImGuiComboFlags_NoPreview)) {
         for (const netcheck::PartKind& known : netcheck::partKinds()) {
@@ -38,9 +49,7 @@ void kindPicker(const char* id, std::string& kind, std::string& pins) {
                 std::string(known.label) + " (" + std::string(known.name) + ")";
             if (!ImGui::Selectable(label.c_str(), kind == known.name)) continue;
             kind = known.name;
-            std::string names;
-            for (auto pin : known.pins) names += (names.empty() ? "" : " ") + std::string(pin);
-            pins = names.empty() ? "1 2" : names;
+            pins = usualPins(known);
         }
         ImGui::EndCombo();
     }
@@ -52,14 +61,16 @@ void addPartForm(const CircuitPanelContext& c, const netcheck::Circuit& circuit)
     ImGui::TextUnformatted("Add a part:");
     ImGui::SetNextItemWidth(70);
     ImGui::InputTextWithHint("##ref", "ref", &s.newRef);
+    c.log.item("add-part-ref");
     ImGui::SameLine();
-    kindPicker("new", s.newKind, s.newPins);
+    kindPicker("add", s.newKind, s.newPins, c.log);
     ImGui::SameLine();
     ImGui::SetNextItemWidth(80);
     ImGui::InputTextWithHint("##value", "value", &s.newValue);
     ImGui::SameLine();
     ImGui::SetNextItemWidth(110);
     ImGui::InputTextWithHint("##pins", "pins: 1 2", &s.newPins);
+    c.log.item("add-part-pins");
     if (ImGui::IsItemHovered())
         ImGui::SetTooltip("Pin names separated by spaces, e.g. 1 2, or A K, or C B E");
     ImGui::SameLine();
@@ -67,9 +78,10 @@ void addPartForm(const CircuitPanelContext& c, const netcheck::Circuit& circuit)
         const netcheck::CircuitPart part{s.newKind, s.newValue, splitPins(s.newPins),
                                          nlohmann::json::object()};
         const auto edit = addCircuitPart(circuit, s.newRef, part);
-        if (std::holds_alternative<netcheck::Circuit>(edit)) s.newRef.clear();
         applyCircuitEdit(c, edit, "Add " + s.newRef + " to the circuit");
+        if (std::holds_alternative<netcheck::Circuit>(edit)) s.newRef.clear();
     }
+    c.log.item("add-part");
 }
 
 void editPartForm(const CircuitPanelContext& c, const netcheck::Circuit& circuit, const std::string& ref) {
@@ -78,7 +90,7 @@ void editPartForm(const CircuitPanelContext& c, const netcheck::Circuit& circuit
     ImGui::SetNextItemWidth(70);
     ImGui::InputText("##eref", &s.editRef);
     ImGui::SameLine();
-    kindPicker("edit", s.editKind, s.editPins);
+    kindPicker("edit", s.editKind, s.editPins, c.log);
     ImGui::SameLine();
     ImGui::SetNextItemWidth(80);
     ImGui::InputText("##evalue", &s.editValue);

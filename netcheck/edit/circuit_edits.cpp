@@ -78,6 +78,22 @@ CircuitEdit assignPinToNet(const Circuit& circuit, const PinRef& pin, const std:
     return out;
 }
 
+CircuitEdit addNet(const Circuit& circuit, const std::string& name,
+                   const std::vector<PinRef>& pins) {
+    if (name.empty()) return "A net needs a name.";
+    if (circuit.nets.count(name))
+        return "There is already a net " + name + "; give its pins their net in the Parts tab.";
+    if (pins.empty()) return "A net needs at least one pin, such as R1.2.";
+    Circuit out = circuit;
+    removePinsWhere(out, [&](const PinRef& p) {
+        return std::find(pins.begin(), pins.end(), p) != pins.end();
+    });
+    auto& added = out.nets[name];
+    for (const PinRef& pin : pins)
+        if (std::find(added.begin(), added.end(), pin) == added.end()) added.push_back(pin);
+    return out;
+}
+
 CircuitEdit renameNet(const Circuit& circuit, const std::string& from, const std::string& to) {
     if (!circuit.nets.count(from)) return "There is no net " + from + ".";
     if (to.empty()) return "A net needs a name.";

@@ -27,6 +27,10 @@ CircuitEdit editCircuitPart(const Circuit& circuit, const std::string& ref,
 /// `net` only takes it out. Nets left with no pin go.
 CircuitEdit assignPinToNet(const Circuit& circuit, const PinRef& pin,
                            const std::string& net);
+/// Adds net `name` holding `pins`, each taken out of any net it was in. Refused when the name is
+/// empty or taken, or when no pin is given (a net of no pin joins nothing).
+CircuitEdit addNet(const Circuit& circuit, const std::string& name,
+                   const std::vector<PinRef>& pins);
 /// Renames a net. Refused when the new name is empty or already names another net.
 CircuitEdit renameNet(const Circuit& circuit, const std::string& from,
                       const std::string& to);

@@ -103,6 +103,16 @@ TEST_CASE("circuit panel edits") {
               std::vector<PinRef>{{"R1", "2"}, {"R2", "1"}, {"C1", "1"}, {"R1", "1"}});
         CHECK_FALSE(refused(mergeNets(before, "MID", "MID")).empty());
     }
+    SUBCASE("add a net: its pins leave their old nets; a taken name or no pin is refused") {
+        const Circuit after = edited(addNet(before, "TAP", {{"C1", "1"}, {"Q1", "B"}}));
+        CHECK(after.nets.at("TAP") == std::vector<PinRef>{{"C1", "1"}, {"Q1", "B"}});
+        CHECK(after.nets.at("MID") == std::vector<PinRef>{{"R1", "2"}, {"R2", "1"}});
+        const Circuit moved = edited(addNet(before, "VIN", {{"R1", "1"}}));
+        CHECK_FALSE(moved.nets.count("IN"));  // its only pin left
+        CHECK(refused(addNet(before, "GND", {{"R1", "1"}})).find("already") != std::string::npos);
+        CHECK_FALSE(refused(addNet(before, "", {{"R1", "1"}})).empty());
+        CHECK_FALSE(refused(addNet(before, "NEW", {})).empty());
+    }
     SUBCASE("add, edit and remove parts") {
         const Circuit added =
             edited(addCircuitPart(before, "D1", {"diode", "1N4148", {"A", "K"}, {}}));
