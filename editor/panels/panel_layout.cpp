@@ -5,7 +5,6 @@
 #include "editor/panels/panel_layout.hpp"
 
 #include <algorithm>
-#include <cstdio>
 #include <memory>
 #include <string>
 
@@ -15,6 +14,7 @@
 #include "editor/canvas/layers.hpp"
 #include "editor/canvas/offboard_layout.hpp"
 #include "netcheck/check/check.hpp"
+#include "netcheck/model/board_size.hpp"
 #include "netcheck/edit/replace_board.hpp"
 
 namespace stripsmith {
@@ -26,10 +26,11 @@ const char* title(const LayoutDialogState& s) {
 }
 
 std::string scoreText(const netcheck::LayoutScore& s) {
-    char text[160];
-    std::snprintf(text, sizeof text, "%d x %d = %ld holes, %d link%s, %d cut%s", s.rows, s.cols,
-                  s.area(), s.links, s.links == 1 ? "" : "s", s.cuts, s.cuts == 1 ? "" : "s");
-    return text;
+    auto count = [](int n, const char* what) {
+        return std::to_string(n) + " " + what + (n == 1 ? "" : "s");
+    };
+    return netcheck::sizeInHoles(s.cols, s.rows) + " (" + std::to_string(s.area()) + " in all), " +
+           count(s.links, "link") + ", " + count(s.cuts, "cut");
 }
 
 void start(const LayoutDialogContext& c) {
