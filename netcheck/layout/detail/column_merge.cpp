@@ -6,29 +6,6 @@ namespace netcheck::layout_detail {
 
 namespace {
 
-using Taken = std::vector<std::vector<char>>;  // [col][row]
-
-Taken takenHoles(const SweepResult& copper, const std::vector<std::vector<Hole>>& groups) {
-    Taken taken(static_cast<std::size_t>(copper.cols), std::vector<char>(static_cast<std::size_t>(copper.rows), 0));
-    auto mark = [&](Hole a, Hole b) {
-        for (int col = std::min(a.col, b.col); col <= std::max(a.col, b.col); ++col)
-            for (int row = std::min(a.row, b.row); row <= std::max(a.row, b.row); ++row)
-                taken[static_cast<std::size_t>(col)][static_cast<std::size_t>(row)] = 1;
-    };
-    for (const auto& group : groups) {
-        if (group.empty()) continue;
-        Hole lo = group.front();
-        Hole hi = group.front();
-        for (const Hole& h : group) {
-            lo = {std::min(lo.row, h.row), std::min(lo.col, h.col)};
-            hi = {std::max(hi.row, h.row), std::max(hi.col, h.col)};
-        }
-        mark(lo, hi);
-    }
-    for (const auto& link : copper.links) mark(link.from, link.to);
-    return taken;
-}
-
 bool fits(const std::vector<int>& ownerA, const std::vector<char>& takenA,
           const std::vector<int>& ownerB, const std::vector<char>& takenB) {
     for (std::size_t row = 0; row < ownerA.size(); ++row) {
@@ -42,10 +19,10 @@ bool fits(const std::vector<int>& ownerA, const std::vector<char>& takenA,
 
 std::vector<int> mergeColumns(SweepResult& copper, const std::vector<std::vector<Hole>>& groups,
                               int first) {
-    const Taken taken = takenHoles(copper, groups);
+    const Occupancy taken = occupiedHoles(copper, groups);
     std::vector<int> newColumn(static_cast<std::size_t>(copper.cols), 0);
     std::vector<std::vector<int>> owner;
-    Taken merged;
+    Occupancy merged;
     for (int col = 0; col < copper.cols; ++col) {
         const auto c = static_cast<std::size_t>(col);
         if (col >= first && !owner.empty() && fits(owner.back(), merged.back(), copper.owner[c], taken[c])) {

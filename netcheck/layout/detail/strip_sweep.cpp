@@ -459,4 +459,25 @@ SweepResult StripSweep::finish() const {
     return result;
 }
 
+Occupancy occupiedHoles(const SweepResult& copper, const std::vector<std::vector<Hole>>& groups) {
+    Occupancy taken(static_cast<std::size_t>(copper.cols), std::vector<char>(static_cast<std::size_t>(copper.rows), 0));
+    auto mark = [&](Hole a, Hole b) {
+        for (int col = std::min(a.col, b.col); col <= std::max(a.col, b.col); ++col)
+            for (int row = std::min(a.row, b.row); row <= std::max(a.row, b.row); ++row)
+                taken[static_cast<std::size_t>(col)][static_cast<std::size_t>(row)] = 1;
+    };
+    for (const auto& group : groups) {
+        if (group.empty()) continue;
+        Hole lo = group.front();
+        Hole hi = group.front();
+        for (const Hole& h : group) {
+            lo = {std::min(lo.row, h.row), std::min(lo.col, h.col)};
+            hi = {std::max(hi.row, h.row), std::max(hi.col, h.col)};
+        }
+        mark(lo, hi);
+    }
+    for (const auto& link : copper.links) mark(link.from, link.to);
+    return taken;
+}
+
 }  // namespace netcheck::layout_detail

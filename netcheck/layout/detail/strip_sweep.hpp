@@ -113,4 +113,9 @@ private:
     int height_ = 0;
 };
 
+/// Which holes are taken, [col][row]: by a lead, by a part's body (the box of its leads, one
+/// group per part) or by a link.
+using Occupancy = std::vector<std::vector<char>>;
+Occupancy occupiedHoles(const SweepResult& copper, const std::vector<std::vector<Hole>>& groups);
+
 }  // namespace netcheck::layout_detail

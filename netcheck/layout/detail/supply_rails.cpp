@@ -8,29 +8,6 @@ namespace netcheck::layout_detail {
 
 namespace {
 
-using Grid = std::vector<std::vector<char>>;  // [col][row]: a lead, body or link is there
-
-Grid occupancy(const SweepResult& copper, const std::vector<std::vector<Hole>>& groups) {
-    Grid used(static_cast<std::size_t>(copper.cols), std::vector<char>(static_cast<std::size_t>(copper.rows), 0));
-    auto mark = [&](Hole a, Hole b) {
-        for (int col = std::min(a.col, b.col); col <= std::max(a.col, b.col); ++col)
-            for (int row = std::min(a.row, b.row); row <= std::max(a.row, b.row); ++row)
-                used[static_cast<std::size_t>(col)][static_cast<std::size_t>(row)] = 1;
-    };
-    for (const auto& group : groups) {
-        if (group.empty()) continue;
-        Hole lo = group.front();
-        Hole hi = group.front();
-        for (const Hole& h : group) {
-            lo = {std::min(lo.row, h.row), std::min(lo.col, h.col)};
-            hi = {std::max(hi.row, h.row), std::max(hi.col, h.col)};
-        }
-        mark(lo, hi);
-    }
-    for (const auto& link : copper.links) mark(link.from, link.to);
-    return used;
-}
-
 int owner(const SweepResult& copper, int row, int col) {
     return copper.owner[static_cast<std::size_t>(col)][static_cast<std::size_t>(row)];
 }
@@ -43,7 +20,7 @@ bool hasCopper(const SweepResult& copper, int net) {
 
 // The shortest link from rail row `rail` to a hole of `net` with every hole on its way free:
 // {column, row}, or column -1.
-Hole bestLink(const SweepResult& copper, const Grid& used, int rail, int net) {
+Hole bestLink(const SweepResult& copper, const Occupancy& used, int rail, int net) {
     Hole best{-1, -1};
     for (int col = 0; col < copper.cols; ++col) {
         for (int row = 0; row < copper.rows; ++row) {
@@ -58,7 +35,7 @@ Hole bestLink(const SweepResult& copper, const Grid& used, int rail, int net) {
     return best;
 }
 
-void addColumn(SweepResult& copper, Grid& used) {
+void addColumn(SweepResult& copper, Occupancy& used) {
     copper.owner.emplace_back(static_cast<std::size_t>(copper.rows), -1);
     used.emplace_back(static_cast<std::size_t>(copper.rows), 0);
     ++copper.cols;
@@ -66,7 +43,7 @@ void addColumn(SweepResult& copper, Grid& used) {
 
 // Joins rail row `rail` to its net: where a link fits, else in a new column at the right where
 // the net's own strip is carried on to it. False when neither can be done.
-bool joinRail(SweepResult& copper, Grid& used, int rail, int net) {
+bool joinRail(SweepResult& copper, Occupancy& used, int rail, int net) {
     Hole to = bestLink(copper, used, rail, net);
     if (to.col < 0) {
         int row = -1;  // a strip of the net that reaches the right-hand end, or a free one
@@ -90,7 +67,7 @@ std::optional<int> addSupplyRails(SweepResult& copper, const std::vector<std::ve
                                   int positive, int ground) {
     const bool top = positive >= 0 && hasCopper(copper, positive);
     const bool bottom = ground >= 0 && hasCopper(copper, ground);
-    Grid used = occupancy(copper, groups);
+    Occupancy used = occupiedHoles(copper, groups);
     const int shift = top ? 1 : 0;
     if (top) {
         for (auto& column : copper.owner) column.insert(column.begin(), positive);
