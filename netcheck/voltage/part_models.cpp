@@ -58,7 +58,9 @@ public:
     /// Numeric settings other than `handled`, as "NAME=value" for a .model line.
     std::string extraModelParameters(std::initializer_list<const char*> handled) const {
         std::string out;
-        for (const auto& [key, value] : values_) {
+        for (const auto& entry : values_) {
+            const std::string& key = entry.first;  // a named binding: clang 14 cannot capture one
+            const nlohmann::json& value = entry.second;
             const bool known = std::any_of(handled.begin(), handled.end(),
                                            [&](const char* name) { return lowerCase(name) == key; });
             if (known || !value.is_number()) continue;
