@@ -20,7 +20,7 @@ namespace stripsmith {
 namespace {
 
 constexpr const char* kUsage =
-    "usage: stripsmith --layout OUT.board.json [--board RxC] [--seconds S] [--seed N]\n"
+    "usage: stripsmith --layout OUT.board.json [--board HxS] [--seconds S] [--seed N]\n"
     "                  [--iterations N] [--rails] INPUT\n"
     "       INPUT: a circuit file (JSON or SPICE deck) or a board file with its circuit\n";
 
@@ -51,9 +51,11 @@ std::optional<LayoutArgs> parseArgs(int argc, char** argv) {
             if (arg == "--layout") {
                 args.out = value;
             } else if (arg == "--board") {
-                if (std::sscanf(value.c_str(), "%dx%d%c", &args.rows, &args.cols, &extra) != 2 ||
+                // Holes across x strips, the order every size is given in (board_size.hpp).
+                if (std::sscanf(value.c_str(), "%dx%d%c", &args.cols, &args.rows, &extra) != 2 ||
                     args.rows < 1 || args.cols < 1 || args.rows > 1000 || args.cols > 1000)
-                    return fail("--board wants ROWSxHOLES, e.g. 10x24, not \"" + value + "\"");
+                    return fail("--board wants HOLESxSTRIPS (holes across x strips), e.g. 24x10, not \"" +
+                                value + "\"");
             } else if (arg == "--seconds") {
                 if (std::sscanf(value.c_str(), "%lf%c", &args.seconds, &extra) != 1 ||
                     !(args.seconds > 0 && args.seconds <= 3600))

@@ -1,4 +1,4 @@
-// The `stripsmith --layout OUT.board.json [--board RxC] [--seconds S] [--seed N] [--iterations N]
+// The `stripsmith --layout OUT.board.json [--board HxS] [--seconds S] [--seed N] [--iterations N]
 // INPUT` command (--iterations bounds the work, for results that do not depend on load):
 // lays out a circuit (JSON or SPICE), or the rest of a board file's embedded circuit around its
 // placed parts, with the core's layout engine; no window needed.

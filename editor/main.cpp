@@ -5,7 +5,7 @@
 //                                            render the board as the editor shows it, then exit
 //   stripsmith --sheet OUT.pdf|OUT.svg [--paper a4|letter] BOARD
 //                                            write the printable build sheet, no window
-//   stripsmith --layout OUT.board.json [--board RxC] [--seconds S] [--seed N] [--rails] INPUT
+//   stripsmith --layout OUT.board.json [--board HxS] [--seconds S] [--seed N] [--rails] INPUT
 //                                            lay out a circuit (or a board's rest), no window
 //   stripsmith --help | --version
 //
@@ -54,7 +54,7 @@ constexpr const char* kUsage =
     "usage: stripsmith [--size WxH] [BOARD]\n"
     "       stripsmith --screenshot OUT.png [--size WxH] [--view component|copper|both] BOARD\n"
     "       stripsmith --sheet OUT.pdf|OUT.svg [--paper a4|letter] BOARD\n"
-    "       stripsmith --layout OUT.board.json [--board RxC] [--seconds S] [--seed N] [--rails]\n"
+    "       stripsmith --layout OUT.board.json [--board HxS] [--seconds S] [--seed N] [--rails]\n"
     "                  INPUT\n"
     "       stripsmith --help | --version\n";
 

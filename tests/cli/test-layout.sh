@@ -59,7 +59,7 @@ for deck in "$src"/samples/spice/*.cir; do
     layout_and_check "spice-$(basename "$deck" .cir)" "$deck"
 done
 # A fixed board large enough keeps its size.
-layout_and_check "fixed-board" "$out/astable.circuit.json" --board 20x40
+layout_and_check "fixed-board" "$out/astable.circuit.json" --board 40x20
 grep -q '"rows": 20' "$out/fixed-board.board.json" || fail "fixed board: size not kept"
 
 # Supply rails: laid out and checked like the rest; the strips' nets are checked below.
@@ -93,7 +93,7 @@ sys.exit(1 if bad else 0)
 PY
 
 # A board too small exits 1 and writes nothing.
-"$bin/stripsmith" --layout "$out/small.board.json" --iterations 20 --board 2x4 "$out/astable.circuit.json" > /dev/null 2> "$out/small.err"
+"$bin/stripsmith" --layout "$out/small.board.json" --iterations 20 --board 4x2 "$out/astable.circuit.json" > /dev/null 2> "$out/small.err"
 [ $? = 1 ] || fail "board too small: exit not 1"
 [ -e "$out/small.board.json" ] && fail "board too small: a file was written"
 grep -q "no layout" "$out/small.err" || fail "board too small: no message"
