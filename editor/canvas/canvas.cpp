@@ -163,6 +163,17 @@ void drawLayers(const CanvasContext& c, const CanvasFrame& geometry) {
         f.voltages = &c.voltages->voltages;
         f.voltagesStale = c.voltages->revision != c.doc.revision();
     }
+    drawBoard(f);
+    drawFindingMarks(f);
+    drawFindingHighlight(f);
+    drawRepairPreview(f);
+    drawBenchVoltages(f);
+    drawSideCaption(f);
+}
+
+}  // namespace
+
+void drawBoard(const LayerFrame& f) {
     drawSubstrate(f);
     drawCopper(f);
     drawIslandHighlight(f);
@@ -177,14 +188,7 @@ void drawLayers(const CanvasContext& c, const CanvasFrame& geometry) {
     // Letters and numbers last: pinned to the canvas edges when the board's own edge is out
     // of view, over whatever lies there.
     drawEdgeLabels(f);
-    drawFindingMarks(f);
-    drawFindingHighlight(f);
-    drawRepairPreview(f);
-    drawBenchVoltages(f);
-    drawSideCaption(f);
 }
-
-}  // namespace
 
 CanvasView drawCanvas(const CanvasContext& c, ImVec2 pos, ImVec2 size) {
     const ImVec2 max{pos.x + size.x, pos.y + size.y};

@@ -65,6 +65,10 @@ void drawWires(const LayerFrame& f);
 /// Part names, pin names and polarity marks, placed clear of pins, used holes, cuts and each
 /// other (layer_labels.cpp), above the wires.
 void drawLabels(const LayerFrame& f);
+/// The board itself, every layer above in the one order both the canvas and the layout preview
+/// use: copper, the hovered island, links, cuts under the part bodies, off-board parts, wires,
+/// labels above the wires, and the edge labels last (pinned over whatever lies at the edge).
+void drawBoard(const LayerFrame& f);
 /// Marks every error's hole lightly so faults are visible without opening the list.
 void drawFindingMarks(const LayerFrame& f);
 /// The focused finding: its copper path, pieces, suggested cut or links, and its hole.

@@ -114,14 +114,7 @@ void drawPreview(const LayoutDialogContext& c, ImVec2 size) {
     const LayerFrame f(makeCanvasFrame(draw, t, min, max, c.view.side, board), board, none,
                        s.reports[index]);
     draw->PushClipRect(min, max, true);
-    drawSubstrate(f);
-    drawCopper(f);
-    drawEdgeLabels(f);
-    drawLinks(f);
-    drawParts(f);
-    drawCuts(f);
-    drawOffboardParts(f);
-    drawWires(f);
+    drawBoard(f);  // as the canvas draws it
     draw->PopClipRect();
     ImGui::EndChild();
 }
