@@ -45,7 +45,8 @@ std::string faults(const Board& board) {
 // Every lead in its own hole, inside the board (the check counts shared holes too; this names
 // the part).
 void requireAllPinsPlaced(const Circuit& circuit, const Board& board) {
-    for (const auto& [ref, part] : circuit.parts) {
+    for (const auto& entry : circuit.parts) {
+        const std::string& ref = entry.first;  // CAPTURE takes a lambda: no structured binding
         CAPTURE(ref);
         const bool onBoard = board.findPart(ref) != nullptr;
         const bool offBoard = board.findOffboard(ref) != nullptr;

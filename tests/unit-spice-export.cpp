@@ -47,7 +47,9 @@ Circuit roundTrip(const Circuit& circuit) {
 
 void checkSameParts(const Circuit& expected, const Circuit& got) {
     CHECK(got.parts.size() == expected.parts.size());
-    for (const auto& [ref, part] : expected.parts) {
+    for (const auto& entry : expected.parts) {
+        const std::string& ref = entry.first;  // CAPTURE takes a lambda: no structured binding
+        const CircuitPart& part = entry.second;
         CAPTURE(ref);
         REQUIRE(got.parts.count(ref) == 1);
         const CircuitPart& back = got.parts.at(ref);

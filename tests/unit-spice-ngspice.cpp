@@ -189,7 +189,9 @@ TEST_CASE("spice flattened import against ngspice's listing") {
         std::map<std::string, std::vector<std::string>> listed;
         for (const auto& fields : listedElements(output)) listed[fields[0]] = fields;
         CHECK(listed.size() == circuit.parts.size());
-        for (const auto& [ref, part] : circuit.parts) {
+        for (const auto& entry : circuit.parts) {
+            const std::string& ref = entry.first;  // CAPTURE takes a lambda: no structured binding
+            const netcheck::CircuitPart& part = entry.second;
             CAPTURE(ref);
             const char letter = letterOfKind(part.kind);
             const auto found = listed.find(ngspiceName(ref, letter));
@@ -246,7 +248,9 @@ TEST_CASE("spice decks and exports parse in ngspice without error") {
         decks.emplace_back("export of " + name,
                            netcheck::exportSpice(circuit, "export of " + name));
     }
-    for (const auto& [name, text] : decks) {
+    for (const auto& deck : decks) {
+        const std::string& name = deck.first;  // CAPTURE takes a lambda: no structured binding
+        const std::string& text = deck.second;
         CAPTURE(name);
         const std::string output = runNgspice(text, "listing e\n");
         CAPTURE(output);
