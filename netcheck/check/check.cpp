@@ -75,40 +75,17 @@ std::vector<Finding> findShorts(const CheckedBoard& checked, const std::vector<N
         }
     }
     std::vector<Finding> shorts;
-    for (const auto& [island, islandNets] : shorted) {
-        if (locate) {
-            shorts.push_back(locateShort(checked, island, islandNets));
-            continue;
-        }
-        Finding& named = shorts.emplace_back();
-        named.type = FindingType::Short;
-        for (const Net* net : islandNets) named.nets.emplace_back(net->name);
-    }
+    for (const auto& [island, islandNets] : shorted) shorts.push_back(locateShort(checked, island, islandNets, locate));
     return shorts;
 }
 
 // The opens, one per net whose pins lie in two or more islands.
 std::vector<Finding> findOpens(const CheckedBoard& checked, const std::vector<Net>& nets, bool locate) {
-    std::vector<const Net*> open;
-    for (const Net& net : nets) {
-        for (const NetPin& pin : net.pins) {
-            if (pin.island != net.pins.front().island) {
-                open.push_back(&net);
-                break;
-            }
-        }
-    }
-    if (open.empty()) return {};
-    if (!locate) {
-        std::vector<Finding> named(open.size());
-        for (std::size_t i = 0; i < open.size(); ++i) {
-            named[i].type = FindingType::Open;
-            named[i].net = std::string(open[i]->name);
-        }
-        return named;
-    }
     std::vector<Finding> opens;
-    for (const Net* net : open) opens.push_back(locateOpen(checked, *net));
+    for (const Net& net : nets) {
+        auto elsewhere = [&](const NetPin& pin) { return pin.island != net.pins.front().island; };
+        if (std::any_of(net.pins.begin(), net.pins.end(), elsewhere)) opens.push_back(locateOpen(checked, net, locate));
+    }
     return opens;
 }
 
@@ -116,31 +93,27 @@ std::vector<Finding> findOpens(const CheckedBoard& checked, const std::vector<Ne
 std::vector<Island> pinIslands(const CheckedBoard& checked) {
     const Board& board = checked.board();
     const Connectivity& copper = checked.copper();
-    std::vector<int> slot(static_cast<std::size_t>(copper.islandCount()), -1);
-    std::vector<Island> islands;
+    std::vector<Island> islands(static_cast<std::size_t>(copper.islandCount()));
     auto islandOf = [&](int node) -> Island& {
-        int& at = slot[static_cast<std::size_t>(copper.islandOfNode(node))];
-        if (at < 0) {
-            at = static_cast<int>(islands.size());
-            islands.push_back(Island{copper.islandOfNode(node), {}, {}});
-        }
-        return islands[static_cast<std::size_t>(at)];
+        return islands[static_cast<std::size_t>(copper.islandOfNode(node))];
     };
-    for (const Lead& lead : checked.leads()) {
-        if (lead.kind != Lead::Kind::PartPin) continue;
-        const Part& part = board.parts[static_cast<std::size_t>(lead.item)];
-        islandOf(lead.hole).pins.push_back(PinRef{part.ref, part.pins[static_cast<std::size_t>(lead.sub)].name});
+    for (const Part& part : board.parts) {
+        for (const Pin& pin : part.pins) {
+            if (board.contains(pin.hole)) islandOf(checked.holeIndex(pin.hole)).pins.push_back({part.ref, pin.name});
+        }
     }
     int node = board.holeCount();
     for (const OffboardPart& part : board.offboard) {
-        for (const std::string& lug : part.pins) islandOf(node++).pins.push_back(PinRef{part.ref, lug});
+        for (const std::string& lug : part.pins) islandOf(node++).pins.push_back({part.ref, lug});
     }
     for (int hole = 0; hole < board.holeCount(); ++hole) {
-        const int at = slot[static_cast<std::size_t>(copper.islandOfNode(hole))];
-        if (at >= 0) islands[static_cast<std::size_t>(at)].holes.push_back(checked.holeAt(hole));
+        if (!islandOf(hole).pins.empty()) islandOf(hole).holes.push_back(checked.holeAt(hole));
     }
-    for (Island& island : islands) std::sort(island.pins.begin(), island.pins.end());
-    std::sort(islands.begin(), islands.end(), [](const Island& a, const Island& b) { return a.id < b.id; });
+    for (std::size_t id = 0; id < islands.size(); ++id) {
+        islands[id].id = static_cast<int>(id);
+        std::sort(islands[id].pins.begin(), islands[id].pins.end());
+    }
+    std::erase_if(islands, [](const Island& island) { return island.pins.empty(); });
     return islands;
 }
 

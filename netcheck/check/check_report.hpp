@@ -71,6 +71,15 @@ struct Finding {
     std::string fix;                          ///< the suggested fix in words (may be empty)
     int repairStep = -1;  ///< the repair plan's step (0-based) that clears it; -1: none
 
+    /// A finding of `type` saying `message`, with the holes to highlight.
+    static Finding of(FindingType type, std::string message, std::vector<Hole> holes = {}) {
+        Finding finding;
+        finding.type = type;
+        finding.message = std::move(message);
+        finding.holes = std::move(holes);
+        return finding;
+    }
+
     Severity severity() const { return findingTypeInfo(type).severity; }
     std::string_view id() const { return findingId(type); }
 };

@@ -4,39 +4,6 @@
 
 namespace netcheck {
 
-namespace {
-
-bool isLug(const Board& board, const PinRef& pin) {
-    for (const OffboardPart& part : board.offboard) {
-        if (part.ref == pin.ref && std::find(part.pins.begin(), part.pins.end(), pin.pin) != part.pins.end())
-            return true;
-    }
-    return false;
-}
-
-}  // namespace
-
-Board copperOnly(const Board& board) {
-    Board copper;
-    copper.rows = board.rows;
-    copper.cols = board.cols;
-    copper.copper = board.copper;
-    copper.cuts = board.cuts;
-    copper.links = board.links;
-    for (const OffboardPart& part : board.offboard) copper.offboard.push_back({part.ref, part.kind, {}, part.pins, {}});
-    for (const Wire& wire : board.wires) {
-        Wire bare{wire.from, wire.to, {}, {}};
-        for (Endpoint* end : {&bare.from, &bare.to}) {
-            if (end->isHole() || isLug(board, end->lug)) continue;
-            const Part* part = board.findPart(end->lug.ref);
-            const Pin* lead = part ? part->findPin(end->lug.pin) : nullptr;
-            if (lead) *end = Endpoint::atHole(lead->hole);
-        }
-        copper.wires.push_back(std::move(bare));
-    }
-    return copper;
-}
-
 CheckedBoard::CheckedBoard(const Board& board)
     : board_(&board), copper_(board), leadsInHole_(static_cast<std::size_t>(board.holeCount()), 0) {
     auto add = [&](Lead::Kind kind, std::size_t item, int sub, Hole hole) {
@@ -62,23 +29,15 @@ CheckedBoard::CheckedBoard(const Board& board)
     }
 }
 
-int CheckedBoard::endpointNode(const Endpoint& end) const {
-    if (end.isHole()) return board_->contains(*end.hole) ? holeIndex(*end.hole) : -1;
-    if (const int lug = copper_.lugNode(end.lug); lug >= 0) return lug;
-    const Part* part = board_->findPart(end.lug.ref);
-    const Pin* pin = part ? part->findPin(end.lug.pin) : nullptr;
-    return pin && board_->contains(pin->hole) ? holeIndex(pin->hole) : -1;
-}
-
 std::vector<std::pair<int, int>> CheckedBoard::jumpers() const {
     std::vector<std::pair<int, int>> edges;
     auto add = [&](int a, int b) {
         if (a >= 0 && b >= 0) edges.emplace_back(a, b);
     };
     for (const Link& link : board_->links) {
-        add(endpointNode(Endpoint::atHole(link.from)), endpointNode(Endpoint::atHole(link.to)));
+        add(copper_.endpointNode(Endpoint::atHole(link.from)), copper_.endpointNode(Endpoint::atHole(link.to)));
     }
-    for (const Wire& wire : board_->wires) add(endpointNode(wire.from), endpointNode(wire.to));
+    for (const Wire& wire : board_->wires) add(copper_.endpointNode(wire.from), copper_.endpointNode(wire.to));
     return edges;
 }
 

@@ -11,11 +11,6 @@
 
 namespace netcheck {
 
-/// The board's copper alone: grid, cuts, links, wires and off-board lugs, with each wire end on
-/// an on-board part's lead turned into that lead's hole. It traces exactly like the board and is
-/// cheap to copy, for trying cuts (a board of 100,000 parts and its circuit is not).
-Board copperOnly(const Board& board);
-
 /// Something soldered into a hole: a part pin, one end of a link, or the board end of a wire.
 struct Lead {
     enum class Kind { PartPin, LinkEnd, WireEnd };
@@ -46,9 +41,6 @@ public:
     int holeIndex(Hole hole) const { return hole.row * board_->cols + hole.col; }
     Hole holeAt(int index) const { return Hole{index / board_->cols, index % board_->cols}; }
     bool isHoleNode(int node) const { return node >= 0 && node < board_->holeCount(); }
-    /// Node of a hole or lug a wire ends on (a wire may end on an on-board part's pin); -1 when
-    /// it names nothing on the board.
-    int endpointNode(const Endpoint& end) const;
     /// Every link and wire as a pair of nodes (ends that name nothing are left out).
     std::vector<std::pair<int, int>> jumpers() const;
 

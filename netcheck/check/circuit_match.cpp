@@ -28,6 +28,15 @@ void MatchedPart::swapPins(std::size_t a, std::size_t b) {
     std::swap(pins[a].meant, pins[b].meant);
 }
 
+Finding MatchedPart::finding(FindingType type, std::string message) const {
+    Finding finding = Finding::of(type, std::move(message));
+    finding.ref = std::string(ref);
+    for (std::size_t k = 0; k < pins.size(); ++k) {
+        if (part && pins[k].node >= 0) finding.holes.push_back(part->pins[k].hole);
+    }
+    return finding;
+}
+
 namespace {
 
 std::string joinNames(const std::vector<std::string>& names) {
@@ -43,33 +52,19 @@ std::vector<std::string> pinNames(std::span<const MatchedPin> pins) {
 }
 
 // A declared pin list (empty: whatever the nets name) against the board part's, in any order.
-bool samePinNames(const std::vector<std::string>& declared, std::span<const MatchedPin> pins) {
+bool samePinNames(std::vector<std::string> declared, const MatchedPart& part) {
     if (declared.empty()) return true;
-    std::vector<std::string> present = pinNames(pins);
-    std::vector<std::string> wanted = declared;
+    std::vector<std::string> present = pinNames(part.pins);
     std::sort(present.begin(), present.end());
-    std::sort(wanted.begin(), wanted.end());
-    return present == wanted;
+    std::sort(declared.begin(), declared.end());
+    return present == declared;
 }
 
-Finding partFinding(FindingType type, std::string_view ref, std::string message) {
-    Finding finding;
-    finding.type = type;
-    finding.ref = std::string(ref);
-    finding.message = std::move(message);
-    return finding;
-}
-
-// The finding with the part's holes to highlight and " (at A1, B1)" after the message.
+// The part's finding with " (at A1, B1)" after the message.
 Finding placedPartFinding(FindingType type, const MatchedPart& part, const std::string& message) {
     std::vector<std::string> places;
-    Finding finding = partFinding(type, part.ref, "");
-    for (std::size_t k = 0; k < part.pins.size(); ++k) {
-        places.push_back(part.place(k));
-        if (part.part && part.pins[k].node >= 0) finding.holes.push_back(part.part->pins[k].hole);
-    }
-    finding.message = message + (places.empty() ? "" : " (at " + joinNames(places) + ")");
-    return finding;
+    for (std::size_t k = 0; k < part.pins.size(); ++k) places.push_back(part.place(k));
+    return part.finding(type, message + (places.empty() ? "" : " (at " + joinNames(places) + ")"));
 }
 
 // The ref's part as placed: its pins, appended to `pins`, with their nodes and islands, no net yet.
@@ -78,8 +73,7 @@ void placePart(const CheckedBoard& checked, MatchedPart& matched, std::vector<Ma
     const std::size_t first = pins.size();
     if (matched.part) {
         for (const Pin& pin : matched.part->pins) {
-            const bool on = checked.board().contains(pin.hole);
-            const int node = on ? checked.holeIndex(pin.hole) : -1;
+            const int node = checked.board().contains(pin.hole) ? checked.holeIndex(pin.hole) : -1;
             pins.push_back({pin.name, pin.name, node, copper.islandOfNode(node), -1});
         }
     } else {
@@ -174,8 +168,8 @@ private:
                 const std::string& value = part.declared->value;
                 described = " (" + part.declared->kind + (value.empty() ? "" : " " + value) + ")";
             }
-            match_.errors.push_back(partFinding(
-                FindingType::MissingPart, part.ref,
+            match_.errors.push_back(part.finding(
+                FindingType::MissingPart,
                 std::string(part.ref) + described + " is in the circuit but not on the board"));
         }
     }
@@ -185,21 +179,24 @@ private:
         std::vector<Finding> extra;
         for (const Part& part : board.parts) {
             if (isNamed(part.ref)) continue;
-            Finding finding = partFinding(FindingType::ExtraPart, part.ref, "");
-            std::vector<std::string> holes;
+            std::vector<std::string> names;
+            std::vector<Hole> holes;
             for (const Pin& pin : part.pins) {
-                holes.push_back(holeName(pin.hole));
-                finding.holes.push_back(pin.hole);
+                names.push_back(holeName(pin.hole));
+                holes.push_back(pin.hole);
             }
-            finding.message = part.ref + " (" + part.kind + ") is on the board (at " +
-                              joinNames(holes) + ") but not in the circuit";
-            extra.push_back(std::move(finding));
+            extra.push_back(Finding::of(FindingType::ExtraPart,
+                                        part.ref + " (" + part.kind + ") is on the board (at " +
+                                            joinNames(names) + ") but not in the circuit",
+                                        std::move(holes)));
+            extra.back().ref = part.ref;
         }
         for (const OffboardPart& part : board.offboard) {
             if (isNamed(part.ref)) continue;
-            extra.push_back(partFinding(
-                FindingType::ExtraPart, part.ref,
-                part.ref + " (" + part.kind + ", off the board) is wired up but not in the circuit"));
+            extra.push_back(Finding::of(FindingType::ExtraPart,
+                                        part.ref + " (" + part.kind +
+                                            ", off the board) is wired up but not in the circuit"));
+            extra.back().ref = part.ref;
         }
         std::stable_sort(extra.begin(), extra.end(),
                          [](const Finding& a, const Finding& b) { return a.ref < b.ref; });
@@ -212,7 +209,7 @@ private:
         if (!part.unknownPins.empty()) {
             problem = "the circuit uses pin" + std::string(part.unknownPins.size() > 1 ? "s " : " ") +
                       joinNames(part.unknownPins);
-        } else if (part.declared && !samePinNames(part.declared->pins, part.pins)) {
+        } else if (part.declared && !samePinNames(part.declared->pins, part)) {
             problem = "the circuit declares pins " + joinNames(part.declared->pins);
         }
         if (problem.empty()) return;
@@ -250,7 +247,7 @@ private:
 // each net's pins are one stretch of match.netPins.
 void placeNets(CircuitMatch& match) {
     auto placed = [](const MatchedPart& part, const MatchedPin& pin) {
-        return part.found() && part.unknownPins.empty() && pin.net >= 0 && pin.node >= 0;
+        return part.unknownPins.empty() && pin.net >= 0 && pin.node >= 0;
     };
     std::vector<std::size_t> start(match.nets.size() + 1, 0);
     for (const MatchedPart& part : match.parts) {
@@ -263,14 +260,12 @@ void placeNets(CircuitMatch& match) {
     std::vector<std::size_t> next(start.begin(), start.end() - 1);
     for (const MatchedPart& part : match.parts) {
         for (const MatchedPin& pin : part.pins) {
-            if (!placed(part, pin)) continue;
-            match.netPins[next[static_cast<std::size_t>(pin.net)]++] =
-                NetPin{part.ref, pin.meant, pin.node, pin.island};
+            if (placed(part, pin))
+                match.netPins[next[static_cast<std::size_t>(pin.net)]++] = NetPin{part.ref, pin.meant, pin.node, pin.island};
         }
     }
     for (std::size_t n = 0; n < match.nets.size(); ++n) {
-        match.nets[n].pins =
-            std::span<const NetPin>(match.netPins).subspan(start[n], start[n + 1] - start[n]);
+        match.nets[n].pins = std::span<const NetPin>(match.netPins).subspan(start[n], start[n + 1] - start[n]);
     }
 }
 

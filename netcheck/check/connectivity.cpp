@@ -53,15 +53,7 @@ Connectivity::Connectivity(const Board& board) : board_(&board) {
 
     UnionFind sets(segments);
     auto segmentOf = [&](const Endpoint& end) {
-        int node = -1;
-        if (end.isHole()) {
-            node = board.contains(*end.hole) ? end.hole->row * board.cols + end.hole->col : -1;
-        } else if (node = lugNode(end.lug); node < 0) {
-            // A wire may also end on the lead of an on-board part: it joins that lead's hole.
-            const Part* part = board.findPart(end.lug.ref);
-            const Pin* pin = part ? part->findPin(end.lug.pin) : nullptr;
-            if (pin && board.contains(pin->hole)) node = pin->hole.row * board.cols + pin->hole.col;
-        }
+        const int node = endpointNode(end);
         return node < 0 ? -1 : segmentOfNode[static_cast<std::size_t>(node)];
     };
     auto join = [&](const Endpoint& a, const Endpoint& b) {
@@ -100,11 +92,18 @@ int Connectivity::lugNode(const PinRef& lug) const {
     return it == lugNodes_.end() ? -1 : it->second;
 }
 
+int Connectivity::endpointNode(const Endpoint& end) const {
+    const Board& board = *board_;
+    auto holeNode = [&](Hole hole) { return board.contains(hole) ? hole.row * board.cols + hole.col : -1; };
+    if (end.isHole()) return holeNode(*end.hole);
+    if (const int lug = lugNode(end.lug); lug >= 0) return lug;
+    const Part* part = board.findPart(end.lug.ref);
+    const Pin* pin = part ? part->findPin(end.lug.pin) : nullptr;
+    return pin ? holeNode(pin->hole) : -1;
+}
+
 int Connectivity::islandOfPin(const PinRef& pin) const {
-    if (const int lug = lugNode(pin); lug >= 0) return islandOfNode(lug);
-    const Part* part = board_->findPart(pin.ref);
-    const Pin* onBoard = part ? part->findPin(pin.pin) : nullptr;
-    return onBoard ? islandOfHole(onBoard->hole) : -1;
+    return islandOfNode(endpointNode(Endpoint::atLug(pin)));
 }
 
 bool Connectivity::isHoleCut(Hole hole) const {

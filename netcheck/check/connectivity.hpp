@@ -33,6 +33,9 @@ public:
     int islandOfPin(const PinRef& pin) const;
     /// Node of an off-board lug; -1 if the board has no such lug.
     int lugNode(const PinRef& lug) const;
+    /// Node of the hole or lug a wire ends on (a wire may also end on an on-board part's pin: its
+    /// hole); -1 when it names nothing on the board.
+    int endpointNode(const Endpoint& end) const;
     /// Holes and pins of island `id` (empty when out of range), gathered on demand: a viewer asks
     /// for the one island under the pointer, not for every island on each edit.
     Island island(int id) const;

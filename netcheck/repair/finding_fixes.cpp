@@ -20,6 +20,29 @@ namespace {
 constexpr std::size_t kMaxCutTrials = 48;
 constexpr std::size_t kMaxCutRemovals = 16;
 
+// The board's copper alone: grid, cuts, links, wires and off-board lugs, with each wire end on an
+// on-board part's lead turned into that lead's hole. It traces exactly like the board and is cheap
+// to copy, for trying cuts (a board of 100,000 parts and its circuit is not).
+Board copperOnly(const CheckedBoard& checked) {
+    const Board& board = checked.board();
+    Board copper;
+    copper.rows = board.rows;
+    copper.cols = board.cols;
+    copper.copper = board.copper;
+    copper.cuts = board.cuts;
+    copper.links = board.links;
+    for (const OffboardPart& part : board.offboard) copper.offboard.push_back({part.ref, part.kind, {}, part.pins, {}});
+    for (const Wire& wire : board.wires) {
+        Wire bare{wire.from, wire.to, {}, {}};
+        for (Endpoint* end : {&bare.from, &bare.to}) {
+            const int node = checked.copper().endpointNode(*end);
+            if (checked.isHoleNode(node)) *end = Endpoint::atHole(checked.holeAt(node));
+        }
+        copper.wires.push_back(std::move(bare));
+    }
+    return copper;
+}
+
 // ---- Shorts ----------------------------------------------------------------------------------
 
 // True when the board already has a cut of the same kind in the same column on a neighbouring
@@ -92,7 +115,7 @@ std::optional<Cut> shortCut(const CheckedBoard& checked, const Finding& finding,
             if (pin.island == island) nodes.push_back(pin.node);
         }
     }
-    Board trial = copperOnly(checked.board());
+    Board trial = copperOnly(checked);
     for (const Cut& cut : candidates) {
         trial.cuts.push_back(cut);
         const bool good =
@@ -267,7 +290,7 @@ void suggestFixes(CheckReport& report, const Board& board, const Circuit* circui
     const CircuitMatch match = matchCircuit(checked, *circuit);
     std::map<std::string_view, const Net*> netNamed;
     for (const Net& net : match.nets) netNamed.emplace(net.name, &net);
-    Board repaired = copperOnly(board);  // with every short's cut made, for the opens
+    Board repaired = copperOnly(checked);  // with every short's cut made, for the opens
     for (Finding& error : report.errors) {
         if (error.type != FindingType::Short) continue;
         error.suggestedCut = shortCut(checked, error, netNamed);

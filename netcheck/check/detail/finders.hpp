@@ -12,11 +12,13 @@
 namespace netcheck {
 
 /// The short in `island`, which holds pins of `nets` (two or more, sorted by name): the shortest
-/// copper path between pins of the first net and another.
-Finding locateShort(const CheckedBoard& checked, int island, const std::vector<const Net*>& nets);
+/// copper path between pins of the first net and another. Without `locate`, only its nets.
+Finding locateShort(const CheckedBoard& checked, int island, const std::vector<const Net*>& nets,
+                    bool locate);
 
-/// The open of `net`, whose pins lie in more than one island: its pieces.
-Finding locateOpen(const CheckedBoard& checked, const Net& net);
+/// The open of `net`, whose pins lie in more than one island: its pieces. Without `locate`, only
+/// its net.
+Finding locateOpen(const CheckedBoard& checked, const Net& net, bool locate);
 
 /// shared-hole errors, by hole.
 void findSharedHoles(const CheckedBoard& checked, std::vector<Finding>& errors);

@@ -12,11 +12,8 @@ namespace netcheck {
 namespace {
 
 Finding holeFinding(FindingType type, Hole hole, std::string message) {
-    Finding finding;
-    finding.type = type;
+    Finding finding = Finding::of(type, std::move(message), {hole});
     finding.hole = hole;
-    finding.holes = {hole};
-    finding.message = std::move(message);
     return finding;
 }
 
@@ -79,7 +76,7 @@ void findDanglingLeads(const CheckedBoard& checked, const std::vector<char>* onl
     for (int node = board.holeCount(); node < copper.nodeCount(); ++node) add(node, 1);
     for (const Wire& wire : board.wires) {
         for (const Endpoint* end : {&wire.from, &wire.to}) {
-            if (!end->isHole()) add(checked.endpointNode(*end), 2);
+            if (!end->isHole()) add(checked.copper().endpointNode(*end), 2);
         }
     }
     for (const Lead* lead : leadsWhere(checked, [&](const Lead& lead) {

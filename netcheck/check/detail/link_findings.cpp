@@ -44,13 +44,6 @@ void forEachHoleUnder(const Link& link, double reach, Visit visit) {
     const bool alongCols = std::abs(dc) >= std::abs(dr);
     const int steps = alongCols ? std::abs(dc) : std::abs(dr);
     const int minorSpan = alongCols ? dr : dc;
-    if (minorSpan == 0) {  // along a strip or straight across: every hole between is under it
-        for (int s = 1; s < steps; ++s) {
-            visit(alongCols ? Hole{a.row, a.col + (dc > 0 ? s : -s)}
-                            : Hole{a.row + (dr > 0 ? s : -s), a.col});
-        }
-        return;
-    }
     for (int s = 1; s < steps; ++s) {
         const int major = (alongCols ? a.col : a.row) + ((alongCols ? dc : dr) > 0 ? s : -s);
         const double minor = (alongCols ? a.row : a.col) + double{1} * minorSpan * s / steps;
@@ -175,14 +168,6 @@ std::string leadsPassedOver(const std::vector<Hole>& under, const std::vector<Ho
     return text;
 }
 
-Finding linkFinding(FindingType type, std::string message, std::vector<Hole> holes) {
-    Finding finding;
-    finding.type = type;
-    finding.message = std::move(message);
-    finding.holes = std::move(holes);
-    return finding;
-}
-
 // link-over-lead warnings, in link order. Most links join neighbouring holes and pass over nothing.
 void findLinksOverLeads(const CheckedBoard& checked, const std::vector<int>& bare,
                                     double reach, std::vector<Finding>& warnings) {
@@ -213,7 +198,7 @@ void findLinksOverLeads(const CheckedBoard& checked, const std::vector<int>& bar
                               (under.size() > 1 ? "those leads" : "that lead");
         std::vector<Hole> holes{link.from, link.to};
         holes.insert(holes.end(), under.begin(), under.end());
-        warnings.push_back(linkFinding(FindingType::LinkOverLead, std::move(message), std::move(holes)));
+        warnings.push_back(Finding::of(FindingType::LinkOverLead, std::move(message), std::move(holes)));
         warnings.back().fix = "sleeve the link or route it round";
     }
 }
@@ -225,7 +210,7 @@ void findCrossings(const Board& board, const std::vector<int>& bare, std::vector
         const Link& first = board.links[static_cast<std::size_t>(i)];
         const Link& second = board.links[static_cast<std::size_t>(j)];
         if (!crossInside(first, second)) continue;
-        warnings.push_back(linkFinding(FindingType::LinksTouch,
+        warnings.push_back(Finding::of(FindingType::LinksTouch,
                                        "Bare links " + linkName(first) + " and " +
                                            linkName(second) + " cross " +
                                            crossingPlace(first, second) + ": the wires would touch",
@@ -233,10 +218,9 @@ void findCrossings(const Board& board, const std::vector<int>& bare, std::vector
         warnings.back().fix = "sleeve one of them or route it round";
     }
     if (!complete) {
-        warnings.push_back(linkFinding(FindingType::LinksUnchecked,
+        warnings.push_back(Finding::of(FindingType::LinksUnchecked,
                                        "Too many bare links cross the same places to check every "
-                                       "pair: check by eye where links cross",
-                                       {}));
+                                       "pair: check by eye where links cross"));
     }
 }
 
@@ -267,12 +251,11 @@ void findBareLinkContacts(const CheckedBoard& checked, std::vector<Finding>& war
             1;
     }
     if (passes > kPassesPerHole * board.holeCount() + kPassesFloor) {
-        warnings.push_back(linkFinding(
+        warnings.push_back(Finding::of(
             FindingType::LinksUnchecked,
             "Bare links pass over " + std::to_string(passes) +
                 " holes in all, too many to check for leads under them or links crossing: check "
-                "the links by eye",
-            {}));
+                "the links by eye"));
         return;
     }
     findLinksOverLeads(checked, bare, reach, warnings);

@@ -22,11 +22,12 @@ std::string piecesText(const CheckedBoard& checked, const std::vector<NetPiece>&
 
 }  // namespace
 
-Finding locateOpen(const CheckedBoard& checked, const Net& net) {
-    const std::vector<NetPiece> pieces = netPieces(checked, net);
+Finding locateOpen(const CheckedBoard& checked, const Net& net, bool locate) {
     Finding finding;
     finding.type = FindingType::Open;
     finding.net = std::string(net.name);
+    if (!locate) return finding;
+    const std::vector<NetPiece> pieces = netPieces(checked, net);
     for (const NetPiece& piece : pieces) {
         std::vector<PinRef>& pins = finding.pieces.emplace_back();
         for (const NetPin* pin : piece.pins) {

@@ -13,7 +13,7 @@ namespace netcheck {
 
 namespace {
 
-enum class Freedom { Fixed, EndForEnd, PotEnds, Polarised2, Polarised3 };
+enum class Freedom { Fixed, EndForEnd, PotEnds, Polarised };
 
 Freedom freedomOf(const MatchedPart& part) {
     if (!part.found() || !part.unknownPins.empty()) return Freedom::Fixed;
@@ -24,8 +24,8 @@ Freedom freedomOf(const MatchedPart& part) {
         return hasLugs ? Freedom::PotEnds : Freedom::Fixed;
     }
     if (part.offboard) return Freedom::Fixed;
-    if (part.pins.size() == 2) return kind->polarised ? Freedom::Polarised2 : Freedom::EndForEnd;
-    if (kind->polarised && part.pins.size() == 3 && kind->pins.size() == 3) return Freedom::Polarised3;
+    if (part.pins.size() == 2) return kind->polarised ? Freedom::Polarised : Freedom::EndForEnd;
+    if (kind->polarised && part.pins.size() == 3 && kind->pins.size() == 3) return Freedom::Polarised;
     return Freedom::Fixed;
 }
 
@@ -135,17 +135,6 @@ std::string partLabel(const MatchedPart& part) {
     return std::string(part.ref) + " (" + part.kind() + ")";
 }
 
-Finding partFinding(FindingType type, const MatchedPart& part, std::string message) {
-    Finding finding;
-    finding.type = type;
-    finding.ref = std::string(part.ref);
-    finding.message = std::move(message);
-    for (std::size_t k = 0; k < part.pins.size(); ++k) {
-        if (part.part && part.pins[k].node >= 0) finding.holes.push_back(part.part->pins[k].hole);
-    }
-    return finding;
-}
-
 // Returns whether the part was turned round. A full tie keeps the part as written.
 bool chooseEndForEnd(MatchedPart& part, NetCounts& counts, FlexibleCounts& flexible) {
     counts.add(part, -1);
@@ -181,8 +170,8 @@ void checkPot(MatchedPart& part, NetCounts& counts, const std::vector<Net>& nets
             return net < 0 ? std::string("nothing")
                            : "net " + std::string(nets[static_cast<std::size_t>(net)].name);
         };
-        warnings.push_back(partFinding(
-            FindingType::PotReversed, part,
+        warnings.push_back(part.finding(
+            FindingType::PotReversed,
             partLabel(part) + " end lugs 1 and 3 are swapped against the circuit: " +
                 part.place(one) + " is on " + netLabel(part.pins[one].net) + ", " +
                 part.place(three) + " on " + netLabel(part.pins[three].net) +
@@ -193,24 +182,6 @@ void checkPot(MatchedPart& part, NetCounts& counts, const std::vector<Net>& nets
     counts.add(part, +1);
 }
 
-void checkPolarised2(MatchedPart& part, NetCounts& counts, const std::vector<Net>& nets,
-                     std::vector<Finding>& errors) {
-    counts.add(part, -1);
-    const int placed = counts.score(part);
-    part.swapPins(0, 1);
-    const int swapped = counts.score(part);
-    const int netAtFirst = part.pins[0].net;
-    part.swapPins(0, 1);
-    counts.add(part, +1);
-    if (!clearlyBetter(swapped, placed)) return;
-    const std::string carries =
-        netAtFirst < 0 ? "where the other lead belongs"
-                       : "which carries net " + std::string(nets[static_cast<std::size_t>(netAtFirst)].name);
-    errors.push_back(partFinding(FindingType::ReversedPart, part,
-                                 partLabel(part) + " looks reversed: " + std::string(part.pins[0].name) +
-                                     " is in " + part.place(0) + ", " + carries));
-}
-
 std::string pinList(const MatchedPart& part, const std::array<std::size_t, 3>& order) {
     std::string text;
     for (std::size_t k = 0; k < 3; ++k) {
@@ -219,28 +190,38 @@ std::string pinList(const MatchedPart& part, const std::array<std::size_t, 3>& o
     return text;
 }
 
-// Three-pin transistors and regulators: every order of the pins is tried.
-void checkPolarised3(MatchedPart& part, NetCounts& counts, std::vector<Finding>& errors) {
-    counts.add(part, -1);
-    const std::vector<MatchedPin> placedPins(part.pins.begin(), part.pins.end());
-    const int placed = counts.score(part);
+// Polarised parts keep their pin names: every other order of the pins (the other way round, for
+// two) is tried, and one that agrees clearly better is a reversed-part error.
+void checkPolarised(MatchedPart& part, NetCounts& counts, const std::vector<Net>& nets,
+                    std::vector<Finding>& errors) {
+    const std::size_t n = part.pins.size();  // 2 or 3
+    std::array<int, 3> placedNets{};
+    for (std::size_t k = 0; k < n; ++k) placedNets[k] = part.pins[k].net;
     std::array<std::size_t, 3> order{0, 1, 2};
     std::array<std::size_t, 3> best = order;
+    counts.add(part, -1);
+    const int placed = counts.score(part);
     int bestScore = placed;
-    while (std::next_permutation(order.begin(), order.end())) {
-        for (std::size_t k = 0; k < 3; ++k) part.pins[k].net = placedPins[order[k]].net;
+    while (std::next_permutation(order.begin(), order.begin() + static_cast<std::ptrdiff_t>(n))) {
+        for (std::size_t k = 0; k < n; ++k) part.pins[k].net = placedNets[order[k]];
         if (const int score = counts.score(part); score > bestScore) {
             bestScore = score;
             best = order;
         }
     }
-    std::copy(placedPins.begin(), placedPins.end(), part.pins.begin());
+    for (std::size_t k = 0; k < n; ++k) part.pins[k].net = placedNets[k];
     counts.add(part, +1);
     if (!clearlyBetter(bestScore, placed)) return;
-    errors.push_back(partFinding(FindingType::ReversedPart, part,
-                                 partLabel(part) + " pins look out of order: the copper fits " +
-                                     pinList(part, best) + " (placed: " + pinList(part, {0, 1, 2}) +
-                                     ")"));
+    const int swappedNet = placedNets[1];  // two pins: the other lead's net, carried by the first's hole
+    const std::string message =
+        n == 3 ? partLabel(part) + " pins look out of order: the copper fits " + pinList(part, best) +
+                     " (placed: " + pinList(part, {0, 1, 2}) + ")"
+               : partLabel(part) + " looks reversed: " + std::string(part.pins[0].name) + " is in " +
+                     part.place(0) + ", " +
+                     (swappedNet < 0 ? "where the other lead belongs"
+                                     : "which carries net " +
+                                           std::string(nets[static_cast<std::size_t>(swappedNet)].name));
+    errors.push_back(part.finding(FindingType::ReversedPart, message));
 }
 
 }  // namespace
@@ -264,8 +245,7 @@ void orientParts(const CheckedBoard& checked, CircuitMatch& match) {
     }
     for (std::size_t p = 0; p < parts.size(); ++p) {
         if (freedom[p] == Freedom::PotEnds) checkPot(parts[p], counts, match.nets, match.warnings);
-        if (freedom[p] == Freedom::Polarised2) checkPolarised2(parts[p], counts, match.nets, match.errors);
-        if (freedom[p] == Freedom::Polarised3) checkPolarised3(parts[p], counts, match.errors);
+        if (freedom[p] == Freedom::Polarised) checkPolarised(parts[p], counts, match.nets, match.errors);
     }
 }
 

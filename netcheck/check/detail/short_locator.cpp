@@ -6,6 +6,7 @@
 #include <algorithm>
 #include <cstdlib>
 #include <deque>
+#include <map>
 #include <set>
 #include <unordered_map>
 
@@ -15,87 +16,53 @@ namespace {
 
 struct PinAt {
     const NetPin* pin = nullptr;
-    int net = 0;  // index into the nets list
+    std::size_t net = 0;  // index into the short's nets: 0 is the first
 };
+// Node -> the pins there, in net order (a multimap keeps equal keys in insertion order).
+using PinsAt = std::multimap<int, PinAt>;
 
-class IslandGraph {
-public:
-    IslandGraph(const CheckedBoard& checked) : checked_(checked) {
-        for (auto [a, b] : checked.jumpers()) {
-            jumpers_[a].push_back(b);
-            jumpers_[b].push_back(a);
-        }
+// Nodes from a pin of the first net to the nearest pin of another net, both ends included.
+std::vector<int> shortestPath(const CheckedBoard& checked, const PinsAt& pinsAt) {
+    std::multimap<int, int> jumpers;  // both ways, in board order
+    for (const auto& [a, b] : checked.jumpers()) {
+        jumpers.emplace(a, b);
+        jumpers.emplace(b, a);
     }
-
-    template <class Visit>
-    void forEachNeighbour(int node, Visit visit) const {
-        if (checked_.isHoleNode(node)) {
-            const Hole hole = checked_.holeAt(node);
-            const Connectivity& copper = checked_.copper();
-            if (hole.col > 0 && copper.joinsNext(Hole{hole.row, hole.col - 1})) visit(node - 1);
-            if (copper.joinsNext(hole)) visit(node + 1);
-        }
-        auto it = jumpers_.find(node);
-        if (it == jumpers_.end()) return;
-        for (int other : it->second) visit(other);
-    }
-
-private:
-    const CheckedBoard& checked_;
-    std::unordered_map<int, std::vector<int>> jumpers_;
-};
-
-// Nodes from a pin of net 0 to the nearest pin of another net, both ends included.
-std::vector<int> shortestPath(const IslandGraph& graph,
-                              const std::unordered_map<int, std::vector<PinAt>>& pinsAt, int& start,
-                              int& end) {
-    std::unordered_map<int, int> parent;
+    std::unordered_map<int, int> parent;  // node -> the node it was reached from
     std::deque<int> queue;
-    std::vector<int> sources;
-    for (const auto& [node, pins] : pinsAt) {
-        if (std::any_of(pins.begin(), pins.end(), [](const PinAt& p) { return p.net == 0; })) {
-            sources.push_back(node);
-        }
+    for (const auto& [node, at] : pinsAt) {
+        if (at.net == 0 && parent.emplace(node, node).second) queue.push_back(node);
     }
-    std::sort(sources.begin(), sources.end());
-    for (int node : sources) {
-        parent[node] = node;
-        queue.push_back(node);
-    }
-    auto isTarget = [&](int node) {
-        auto it = pinsAt.find(node);
-        return it != pinsAt.end() && std::any_of(it->second.begin(), it->second.end(),
-                                                 [](const PinAt& p) { return p.net != 0; });
-    };
     while (!queue.empty()) {
         const int node = queue.front();
         queue.pop_front();
-        if (isTarget(node)) {
+        const auto [first, last] = pinsAt.equal_range(node);
+        if (std::any_of(first, last, [](const auto& at) { return at.second.net != 0; })) {
             std::vector<int> path{node};
             while (parent[path.back()] != path.back()) path.push_back(parent[path.back()]);
             std::reverse(path.begin(), path.end());
-            start = path.front();
-            end = node;
             return path;
         }
-        graph.forEachNeighbour(node, [&](int next) {
+        auto visit = [&](int next) {
             if (parent.emplace(next, node).second) queue.push_back(next);
-        });
+        };
+        if (checked.isHoleNode(node)) {
+            const Hole hole = checked.holeAt(node);
+            if (hole.col > 0 && checked.copper().joinsNext(Hole{hole.row, hole.col - 1})) visit(node - 1);
+            if (checked.copper().joinsNext(hole)) visit(node + 1);
+        }
+        const auto [from, to] = jumpers.equal_range(node);
+        for (auto it = from; it != to; ++it) visit(it->second);
     }
     return {};
 }
 
-std::string pinText(const CheckedBoard& checked, const PinAt& pin) {
-    const std::string name = pin.pin->name();
-    return checked.isHoleNode(pin.pin->node) ? name + " (" + checked.nodeName(pin.pin->node) + ")"
-                                             : name + " (off board)";
-}
-
-const PinAt& pinOfNet(const std::vector<PinAt>& pins, bool firstNet) {
-    for (const PinAt& pin : pins) {
-        if ((pin.net == 0) == firstNet) return pin;
-    }
-    return pins.front();
+// "R1.2 (D7)": the first pin at `node` of the first net, or of another net.
+std::string pinText(const CheckedBoard& checked, const PinsAt& pinsAt, int node, bool firstNet) {
+    const auto [first, last] = pinsAt.equal_range(node);
+    const auto it = std::find_if(first, last, [&](const auto& at) { return (at.second.net == 0) == firstNet; });
+    const NetPin& pin = *(it == last ? first : it)->second.pin;
+    return pin.name() + " (" + (checked.isHoleNode(node) ? checked.nodeName(node) : "off board") + ")";
 }
 
 std::string routeText(const CheckedBoard& checked, const std::vector<int>& path) {
@@ -118,38 +85,32 @@ std::string routeText(const CheckedBoard& checked, const std::vector<int>& path)
 
 }  // namespace
 
-Finding locateShort(const CheckedBoard& checked, int island,
-                    const std::vector<const Net*>& nets) {
+Finding locateShort(const CheckedBoard& checked, int island, const std::vector<const Net*>& nets,
+                    bool locate) {
     Finding finding;
     finding.type = FindingType::Short;
     for (const Net* net : nets) finding.nets.emplace_back(net->name);
-    std::unordered_map<int, std::vector<PinAt>> pinsAt;
-    const Connectivity& copper = checked.copper();
+    if (!locate) return finding;
+    PinsAt pinsAt;
     for (std::size_t n = 0; n < nets.size(); ++n) {
         for (const NetPin& pin : nets[n]->pins) {
-            if (copper.islandOfNode(pin.node) == island) {
-                pinsAt[pin.node].push_back(PinAt{&pin, static_cast<int>(n)});
-            }
+            if (pin.island == island) pinsAt.emplace(pin.node, PinAt{&pin, n});
         }
     }
-    const IslandGraph graph(checked);
-    int start = -1;
-    int end = -1;
-    const std::vector<int> path = shortestPath(graph, pinsAt, start, end);
-    std::string names;
-    for (const std::string& name : finding.nets) names += (names.empty() ? "" : ", ") + name;
+    const std::vector<int> path = shortestPath(checked, pinsAt);
     for (int node : path) {
         if (checked.isHoleNode(node)) finding.path.push_back(checked.holeAt(node));
     }
     finding.holes = finding.path;
+    std::string names;
+    for (const std::string& name : finding.nets) names += (names.empty() ? "" : ", ") + name;
     if (path.empty()) {
         finding.message = names + " share one island";
         return finding;
     }
-    const PinAt& from = pinOfNet(pinsAt.at(start), true);
-    const PinAt& to = pinOfNet(pinsAt.at(end), false);
-    finding.message = names + ": " + (start == end ? "one hole holds " : routeText(checked, path)) +
-                      pinText(checked, from) + " and " + pinText(checked, to);
+    finding.message = names + ": " + (path.size() == 1 ? "one hole holds " : routeText(checked, path)) +
+                      pinText(checked, pinsAt, path.front(), true) + " and " +
+                      pinText(checked, pinsAt, path.back(), false);
     return finding;
 }
 
