@@ -12,6 +12,7 @@
 #include <vector>
 
 #include "netcheck/check/check.hpp"
+#include "netcheck/check/circuit_capture.hpp"
 #include "netcheck/check/connectivity.hpp"
 #include "netcheck/model/board.hpp"
 #include "netcheck/model/part_kinds.hpp"

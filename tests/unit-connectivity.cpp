@@ -10,6 +10,7 @@
 #include <random>
 #include <set>
 
+#include "netcheck/check/circuit_capture.hpp"
 #include "netcheck/check/connectivity.hpp"
 #include "test_support.hpp"
 

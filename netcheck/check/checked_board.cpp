@@ -1,16 +1,17 @@
 #include "netcheck/check/checked_board.hpp"
 
-#include <algorithm>
+#include <numeric>
 
 namespace netcheck {
 
 CheckedBoard::CheckedBoard(const Board& board)
-    : board_(&board), copper_(board), leadsInHole_(static_cast<std::size_t>(board.holeCount()), 0) {
+    : board_(&board), copper_(board), leadStart_(static_cast<std::size_t>(board.holeCount()) + 1, 0) {
+    std::vector<Lead> found;
     auto add = [&](Lead::Kind kind, std::size_t item, int sub, Hole hole) {
         if (!board.contains(hole)) return;
         const int index = holeIndex(hole);
-        leads_.push_back(Lead{kind, static_cast<int>(item), sub, index, copper_.islandOfNode(index)});
-        ++leadsInHole_[static_cast<std::size_t>(index)];
+        found.push_back(Lead{kind, static_cast<int>(item), sub, index, copper_.islandOfNode(index)});
+        ++leadStart_[static_cast<std::size_t>(index)];
     };
     for (std::size_t p = 0; p < board.parts.size(); ++p) {
         const std::vector<Pin>& pins = board.parts[p].pins;
@@ -27,6 +28,19 @@ CheckedBoard::CheckedBoard(const Board& board)
         if (wire.from.isHole()) add(Lead::Kind::WireEnd, w, 0, *wire.from.hole);
         if (wire.to.isHole()) add(Lead::Kind::WireEnd, w, 1, *wire.to.hole);
     }
+    // Sorted by hole, by counting: each hole's count becomes the end of its stretch, and placing
+    // the leads from the last back moves each end to the start, keeping the order found.
+    std::partial_sum(leadStart_.begin(), leadStart_.end(), leadStart_.begin());
+    leads_.resize(found.size());
+    for (auto lead = found.rbegin(); lead != found.rend(); ++lead) {
+        leads_[--leadStart_[static_cast<std::size_t>(lead->hole)]] = *lead;
+    }
+}
+
+std::string CheckedBoard::leadNames(int hole) const {
+    std::string names;
+    for (const Lead& lead : leadsAt(hole)) names += (names.empty() ? "" : ", ") + leadName(lead);
+    return names;
 }
 
 std::vector<std::pair<int, int>> CheckedBoard::jumpers() const {

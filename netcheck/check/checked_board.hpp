@@ -2,6 +2,7 @@
 // holes, and how nodes and leads are named in messages. The repair code finds fixes on it too.
 #pragma once
 
+#include <span>
 #include <string>
 #include <utility>
 #include <vector>
@@ -29,10 +30,17 @@ public:
 
     const Board& board() const { return *board_; }
     const Connectivity& copper() const { return copper_; }
-    /// Every lead on the board: part pins, then link ends, then wire ends.
+    /// Every lead on the board, in hole order (in one hole: part pins, link ends, wire ends).
     const std::vector<Lead>& leads() const { return leads_; }
+    /// The leads in one hole.
+    std::span<const Lead> leadsAt(int hole) const {
+        const auto at = static_cast<std::size_t>(hole);
+        return std::span<const Lead>(leads_).subspan(leadStart_[at], leadStart_[at + 1] - leadStart_[at]);
+    }
+    /// "R1.2, link A1-C1": the leads in one hole, named.
+    std::string leadNames(int hole) const;
 
-    int leadsIn(int hole) const { return leadsInHole_[static_cast<std::size_t>(hole)]; }
+    int leadsIn(int hole) const { return static_cast<int>(leadsAt(hole).size()); }
     bool holdsLead(int hole) const { return leadsIn(hole) > 0; }
     bool isHoleCut(int hole) const { return copper_.isHoleCut(holeAt(hole)); }
     /// Copper present and nothing soldered in it: a place for a new link or a hole cut.
@@ -53,7 +61,7 @@ private:
     const Board* board_;
     Connectivity copper_;
     std::vector<Lead> leads_;
-    std::vector<int> leadsInHole_;
+    std::vector<std::size_t> leadStart_;  // by hole, and one past the last: where its leads start
 };
 
 /// A lead touches a bare link when their centres come this close: a 0.6 mm tinned link wire and a

@@ -1,5 +1,6 @@
 #include "netcheck/check/circuit_capture.hpp"
 
+#include <algorithm>
 #include <set>
 
 #include "netcheck/check/connectivity.hpp"
@@ -17,6 +18,30 @@ std::string keptName(const Board& board, const std::vector<PinRef>& group) {
 }
 
 }  // namespace
+
+std::vector<std::vector<PinRef>> boardNets(const Board& board) {
+    const Connectivity copper(board);
+    std::vector<std::vector<PinRef>> byIsland(static_cast<std::size_t>(copper.islandCount()));
+    auto add = [&](int island, PinRef pin) {
+        if (island >= 0) byIsland[static_cast<std::size_t>(island)].push_back(std::move(pin));
+    };
+    for (const Part& part : board.parts) {
+        for (const Pin& pin : part.pins) add(copper.islandOfHole(pin.hole), {part.ref, pin.name});
+    }
+    for (const OffboardPart& part : board.offboard) {
+        for (const std::string& lug : part.pins) {
+            add(copper.islandOfPin({part.ref, lug}), {part.ref, lug});
+        }
+    }
+    std::vector<std::vector<PinRef>> groups;
+    for (auto& pins : byIsland) {
+        if (pins.empty()) continue;
+        std::sort(pins.begin(), pins.end());
+        groups.push_back(std::move(pins));
+    }
+    std::sort(groups.begin(), groups.end());
+    return groups;
+}
 
 Circuit captureCircuit(const Board& board) {
     Circuit circuit;

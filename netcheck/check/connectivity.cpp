@@ -135,28 +135,4 @@ Island Connectivity::island(int id) const {
     return result;
 }
 
-std::vector<std::vector<PinRef>> boardNets(const Board& board) {
-    const Connectivity copper(board);
-    std::vector<std::vector<PinRef>> byIsland(static_cast<std::size_t>(copper.islandCount()));
-    auto add = [&](int island, PinRef pin) {
-        if (island >= 0) byIsland[static_cast<std::size_t>(island)].push_back(std::move(pin));
-    };
-    for (const Part& part : board.parts) {
-        for (const Pin& pin : part.pins) add(copper.islandOfHole(pin.hole), {part.ref, pin.name});
-    }
-    for (const OffboardPart& part : board.offboard) {
-        for (const std::string& lug : part.pins) {
-            add(copper.islandOfPin({part.ref, lug}), {part.ref, lug});
-        }
-    }
-    std::vector<std::vector<PinRef>> groups;
-    for (auto& pins : byIsland) {
-        if (pins.empty()) continue;
-        std::sort(pins.begin(), pins.end());
-        groups.push_back(std::move(pins));
-    }
-    std::sort(groups.begin(), groups.end());
-    return groups;
-}
-
 }  // namespace netcheck

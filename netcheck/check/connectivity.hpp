@@ -53,8 +53,4 @@ private:
     int islandCount_ = 0;
 };
 
-/// The board's connectivity as a netlist: each group the pins joined by copper, links and wires,
-/// sorted within and between groups. A pin alone is a group of one.
-std::vector<std::vector<PinRef>> boardNets(const Board& board);
-
 }  // namespace netcheck

@@ -3,6 +3,7 @@
 // something.
 #include "netcheck/report/report_format.hpp"
 
+#include "netcheck/check/circuit_capture.hpp"
 #include "netcheck/check/connectivity.hpp"
 
 #include <string_view>

@@ -15,6 +15,7 @@
 
 #include "netcheck/file/board_file.hpp"
 #include "netcheck/check/check.hpp"
+#include "netcheck/check/circuit_capture.hpp"
 #include "netcheck/check/connectivity.hpp"
 
 using namespace netcheck;

@@ -17,14 +17,12 @@ Finding holeFinding(FindingType type, Hole hole, std::string message) {
     return finding;
 }
 
-// The leads that `wanted` picks, in hole order (leads in one hole in board order).
+// The leads that `wanted` picks, in hole order.
 std::vector<const Lead*> leadsWhere(const CheckedBoard& checked, auto wanted) {
     std::vector<const Lead*> leads;
     for (const Lead& lead : checked.leads()) {
         if (wanted(lead)) leads.push_back(&lead);
     }
-    std::stable_sort(leads.begin(), leads.end(),
-                     [](const Lead* a, const Lead* b) { return a->hole < b->hole; });
     return leads;
 }
 
@@ -36,19 +34,13 @@ std::string plural(int count, const std::string& word) {
 }  // namespace
 
 void findSharedHoles(const CheckedBoard& checked, std::vector<Finding>& errors) {
-    const std::vector<const Lead*> crowded =
-        leadsWhere(checked, [&](const Lead& lead) { return checked.leadsIn(lead.hole) > 1; });
-    for (std::size_t i = 0; i < crowded.size();) {
-        std::size_t j = i;
-        std::string names;
-        for (; j < crowded.size() && crowded[j]->hole == crowded[i]->hole; ++j) {
-            names += (names.empty() ? "" : ", ") + checked.leadName(*crowded[j]);
-        }
-        const Hole hole = checked.holeAt(crowded[i]->hole);
+    for (const Lead* first : leadsWhere(checked, [&](const Lead& lead) {
+             return checked.leadsIn(lead.hole) > 1 && &checked.leadsAt(lead.hole).front() == &lead;
+         })) {
+        const Hole hole = checked.holeAt(first->hole);
         errors.push_back(holeFinding(FindingType::SharedHole, hole,
-                                     holeName(hole) + " holds " +
-                                         plural(static_cast<int>(j - i), "lead") + ": " + names));
-        i = j;
+                                     holeName(hole) + " holds " + plural(checked.leadsIn(first->hole), "lead") +
+                                         ": " + checked.leadNames(first->hole)));
     }
 }
 

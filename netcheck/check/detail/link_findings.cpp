@@ -138,30 +138,15 @@ std::vector<std::pair<int, int>> crossingCandidates(const Board& board, const st
     return pairs;
 }
 
-// The names of the leads in each of `holes` (sorted, each once), in one pass over the leads.
-std::vector<std::string> leadNamesAt(const CheckedBoard& checked, const std::vector<Hole>& holes) {
-    std::vector<std::string> names(holes.size());
-    for (const Lead& lead : checked.leads()) {
-        const Hole at = checked.holeAt(lead.hole);
-        const auto it = std::lower_bound(holes.begin(), holes.end(), at);
-        if (it == holes.end() || *it != at) continue;
-        std::string& name = names[static_cast<std::size_t>(it - holes.begin())];
-        name += (name.empty() ? "" : ", ") + checked.leadName(lead);
-    }
-    return names;
-}
-
 // "D3 (R1.1)", "D3 (R1.1) and E3 (C2.+)", "C3 (R2.1), D3 (R1.1) and E3 (C2.+)"; past eight holes
 // the rest are counted, not named (the finding's holes list them all).
-std::string leadsPassedOver(const std::vector<Hole>& under, const std::vector<Hole>& named,
-                            const std::vector<std::string>& names) {
+std::string leadsPassedOver(const CheckedBoard& checked, const std::vector<Hole>& under) {
     constexpr std::size_t kNamed = 8;
     const std::size_t shown = under.size() > kNamed ? kNamed - 1 : under.size();
     std::string text;
     for (std::size_t i = 0; i < shown; ++i) {
         if (i > 0) text += i + 1 == under.size() ? " and " : ", ";
-        const auto at = std::lower_bound(named.begin(), named.end(), under[i]) - named.begin();
-        text += holeName(under[i]) + " (" + names[static_cast<std::size_t>(at)] + ")";
+        text += holeName(under[i]) + " (" + checked.leadNames(checked.holeIndex(under[i])) + ")";
     }
     if (shown < under.size())
         text += " and " + std::to_string(under.size() - shown) + " more holes";
@@ -169,13 +154,10 @@ std::string leadsPassedOver(const std::vector<Hole>& under, const std::vector<Ho
 }
 
 // link-over-lead warnings, in link order. Most links join neighbouring holes and pass over nothing.
-void findLinksOverLeads(const CheckedBoard& checked, const std::vector<int>& bare,
-                                    double reach, std::vector<Finding>& warnings) {
-    const Board& board = checked.board();
-    std::vector<std::pair<int, std::vector<Hole>>> crossed;  // (link, holes with leads under it)
-    std::vector<Hole> named;
+void findLinksOverLeads(const CheckedBoard& checked, const std::vector<int>& bare, double reach,
+                        std::vector<Finding>& warnings) {
     for (int l : bare) {
-        const Link& link = board.links[static_cast<std::size_t>(l)];
+        const Link& link = checked.board().links[static_cast<std::size_t>(l)];
         if (std::abs(link.to.row - link.from.row) < 2 && std::abs(link.to.col - link.from.col) < 2)
             continue;
         std::vector<Hole> under;
@@ -184,17 +166,8 @@ void findLinksOverLeads(const CheckedBoard& checked, const std::vector<int>& bar
         });
         if (under.empty()) continue;
         std::sort(under.begin(), under.end());
-        named.insert(named.end(), under.begin(), under.end());
-        crossed.emplace_back(l, std::move(under));
-    }
-    std::sort(named.begin(), named.end());
-    named.erase(std::unique(named.begin(), named.end()), named.end());
-    const std::vector<std::string> names =
-        named.empty() ? std::vector<std::string>{} : leadNamesAt(checked, named);
-    for (auto& [l, under] : crossed) {
-        const Link& link = board.links[static_cast<std::size_t>(l)];
         std::string message = "Bare link " + linkName(link) + " passes over " +
-                              leadsPassedOver(under, named, names) + ": the wire would touch " +
+                              leadsPassedOver(checked, under) + ": the wire would touch " +
                               (under.size() > 1 ? "those leads" : "that lead");
         std::vector<Hole> holes{link.from, link.to};
         holes.insert(holes.end(), under.begin(), under.end());

@@ -3,7 +3,6 @@
 // intended net: the way round that agrees best with the rest of the board is the one meant.
 #include <algorithm>
 #include <array>
-#include <cstdint>
 #include <map>
 
 #include "netcheck/check/circuit_match.hpp"
@@ -29,11 +28,6 @@ Freedom freedomOf(const MatchedPart& part) {
     return Freedom::Fixed;
 }
 
-// One number for a (net, island) pair.
-std::uint64_t key(int net, int island) {
-    return (std::uint64_t{static_cast<std::uint32_t>(net)} << 32) | static_cast<std::uint32_t>(island);
-}
-
 // How many pins of each intended net sit in each island. Pins outside the board and pins the
 // circuit does not care about count nowhere. Most islands carry one net, so its count lives in
 // a plain array by island; only where nets meet (a short) do counts go to a map.
@@ -46,7 +40,7 @@ public:
 
     void add(const MatchedPart& part, int delta) {
         for (const MatchedPin& pin : part.pins) {
-            if (!counts(pin)) continue;
+            if (pin.net < 0 || pin.island < 0) continue;
             NetCount& first = first_[static_cast<std::size_t>(pin.island)];
             if (first.net < 0) first.net = pin.net;
             (first.net == pin.net ? first.count : others_[{pin.island, pin.net}]) += delta;
@@ -62,7 +56,7 @@ public:
     }
 
     int at(const MatchedPin& pin) const {
-        if (!counts(pin)) return 0;
+        if (pin.net < 0 || pin.island < 0) return 0;
         const NetCount& first = first_[static_cast<std::size_t>(pin.island)];
         if (first.net == pin.net) return first.count;
         const auto it = others_.find({pin.island, pin.net});
@@ -77,54 +71,38 @@ private:
         int net = -1;
         int count = 0;
     };
-    static bool counts(const MatchedPin& pin) { return pin.net >= 0 && pin.island >= 0; }
-    std::vector<NetCount> first_;                  // by island: the first net seen there
+    std::vector<NetCount> first_;                // by island: the first net seen there
     std::map<std::pair<int, int>, int> others_;  // (island, net) for the other nets
-    std::vector<int> total_;                       // by net
+    std::vector<int> total_;                     // by net
 };
 
-// Pins of end-for-end parts counted under both of their nets: a neighbour that could be turned
-// round still says which nets meet in an island. Used only to break ties, so built on the first.
-class FlexibleCounts {
+// The end-for-end parts counted either way round: each pin under the nets of both of its part's
+// pins. Such a neighbour could be turned round, but still says which nets meet in an island.
+class EitherWayCounts {
 public:
-    FlexibleCounts(const std::vector<MatchedPart>& parts, const std::vector<Freedom>& freedom)
-        : parts_(parts), freedom_(freedom) {}
-
-    /// Agreement of `part` as oriented, without its own contribution.
-    int score(const MatchedPart& part) {
-        build();
-        int total = 0;
-        for (const MatchedPin& pin : part.pins) {
-            if (pin.net < 0) continue;
-            const auto [first, last] =
-                std::equal_range(keys_.begin(), keys_.end(), key(pin.net, pin.island));
-            if (first == last) continue;
-            const auto own = std::count_if(part.pins.begin(), part.pins.end(),
-                                           [&](const MatchedPin& p) { return p.island == pin.island; });
-            total += static_cast<int>((last - first) - own);
-        }
-        return total;
-    }
-
-private:
-    void build() {
-        if (built_) return;
-        built_ = true;
-        for (std::size_t p = 0; p < parts_.size(); ++p) {
-            if (freedom_[p] != Freedom::EndForEnd) continue;
-            for (const MatchedPin& at : parts_[p].pins) {
-                for (const MatchedPin& of : parts_[p].pins) {
-                    if (of.net >= 0) keys_.push_back(key(of.net, at.island));
+    EitherWayCounts(const std::vector<MatchedPart>& parts, const std::vector<Freedom>& freedom) {
+        for (std::size_t p = 0; p < parts.size(); ++p) {
+            if (freedom[p] != Freedom::EndForEnd) continue;
+            for (const MatchedPin& at : parts[p].pins) {
+                for (const MatchedPin& of : parts[p].pins) {
+                    if (of.net >= 0 && at.island >= 0) keys_.emplace_back(at.island, of.net);
                 }
             }
         }
         std::sort(keys_.begin(), keys_.end());
     }
 
-    const std::vector<MatchedPart>& parts_;
-    const std::vector<Freedom>& freedom_;
-    std::vector<std::uint64_t> keys_;  // sorted: a count is the length of a run of equal keys
-    bool built_ = false;
+    int score(const MatchedPart& part) const {
+        int total = 0;
+        for (const MatchedPin& pin : part.pins) {
+            const auto [first, last] = std::equal_range(keys_.begin(), keys_.end(), std::pair{pin.island, pin.net});
+            total += static_cast<int>(last - first);
+        }
+        return total;
+    }
+
+private:
+    std::vector<std::pair<int, int>> keys_;  // (island, net), sorted: a count is a run of equal keys
 };
 
 // "Clearly better": the other way round explains at least two joins and more than twice as many
@@ -135,17 +113,19 @@ std::string partLabel(const MatchedPart& part) {
     return std::string(part.ref) + " (" + part.kind() + ")";
 }
 
-// Returns whether the part was turned round. A full tie keeps the part as written.
-bool chooseEndForEnd(MatchedPart& part, NetCounts& counts, FlexibleCounts& flexible) {
+// Returns whether the part was turned round. A tie is broken by the end-for-end parts counted
+// either way round: a neighbour that could be turned still says which nets meet in an island (the
+// part's own counts are the same both ways round). A full tie keeps the part as written.
+bool chooseEndForEnd(MatchedPart& part, NetCounts& counts, const EitherWayCounts& eitherWay) {
     counts.add(part, -1);
     const int placed = counts.score(part);
     part.swapPins(0, 1);
     const int swapped = counts.score(part);
     bool better = swapped > placed;
     if (swapped == placed && part.pins[0].net != part.pins[1].net) {
-        const int swappedFlexible = flexible.score(part);
+        const int swappedEitherWay = eitherWay.score(part);
         part.swapPins(0, 1);
-        better = swappedFlexible > flexible.score(part);
+        better = swappedEitherWay > eitherWay.score(part);
         part.swapPins(0, 1);
     }
     if (!better) part.swapPins(0, 1);
@@ -233,14 +213,14 @@ void orientParts(const CheckedBoard& checked, CircuitMatch& match) {
     if (std::all_of(freedom.begin(), freedom.end(), [](Freedom f) { return f == Freedom::Fixed; }))
         return;
     NetCounts counts(parts, checked.copper().islandCount(), match.nets.size());
-    FlexibleCounts flexible(parts, freedom);
+    const EitherWayCounts eitherWay(parts, freedom);
     // Two rounds, so a part flipped in the first round is seen by its neighbours in the second.
     bool flipped = true;
     for (int round = 0; round < 2 && flipped; ++round) {
         flipped = false;
         for (std::size_t p = 0; p < parts.size(); ++p) {
             if (freedom[p] == Freedom::EndForEnd)
-                flipped = chooseEndForEnd(parts[p], counts, flexible) || flipped;
+                flipped = chooseEndForEnd(parts[p], counts, eitherWay) || flipped;
         }
     }
     for (std::size_t p = 0; p < parts.size(); ++p) {

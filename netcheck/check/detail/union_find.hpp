@@ -10,12 +10,8 @@ namespace netcheck {
 
 class UnionFind {
 public:
-    UnionFind() = default;
-    explicit UnionFind(int count) { reset(count); }
-
-    /// `count` sets of one member each, reusing the memory.
-    void reset(int count) {
-        parent_.resize(static_cast<std::size_t>(count));
+    /// `count` sets of one member each.
+    explicit UnionFind(int count) : parent_(static_cast<std::size_t>(count)) {
         std::iota(parent_.begin(), parent_.end(), 0);
     }
 
