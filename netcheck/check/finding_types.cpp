@@ -3,7 +3,7 @@
 #include <algorithm>
 #include <array>
 
-#include "netcheck/check/check_report.hpp"
+#include "netcheck/check/finding_types.hpp"
 
 namespace netcheck {
 

@@ -31,11 +31,11 @@ double contactReach(const Board& board) {
     return std::min(kLinkContactMm / board.pitchMm, 0.5);
 }
 
-// Calls visit(hole) for every hole strictly between the link's ends whose centre lies within
-// `reach` (at most half a pitch) of the wire. Walks the longer axis: in each of its columns (or
-// rows) only the two holes either side of the wire can come that close.
+// Calls visit(hole) for every hole whose centre lies within `reach` (at most a pitch) of the wire,
+// strictly between its ends (with `ends`, at them too). Walks the longer axis: in each of its
+// columns (or rows) a hole that close lies within one hole of where the wire crosses it.
 template <typename Visit>
-void forEachHoleUnder(const Link& link, double reach, Visit visit) {
+void forEachHoleNear(const Link& link, double reach, bool ends, Visit visit) {
     const Hole a = link.from;
     const Hole b = link.to;
     const int dr = b.row - a.row;
@@ -44,12 +44,10 @@ void forEachHoleUnder(const Link& link, double reach, Visit visit) {
     const bool alongCols = std::abs(dc) >= std::abs(dr);
     const int steps = alongCols ? std::abs(dc) : std::abs(dr);
     const int minorSpan = alongCols ? dr : dc;
-    for (int s = 1; s < steps; ++s) {
+    for (int s = ends ? 0 : 1; s <= (ends ? steps : steps - 1) && steps > 0; ++s) {
         const int major = (alongCols ? a.col : a.row) + ((alongCols ? dc : dr) > 0 ? s : -s);
         const double minor = (alongCols ? a.row : a.col) + double{1} * minorSpan * s / steps;
-        const auto below = static_cast<int>(std::floor(minor));
-        const auto above = static_cast<int>(std::ceil(minor));
-        for (int m = below; m <= above; ++m) {
+        for (auto m = static_cast<int>(std::floor(minor)) - 1; m <= static_cast<int>(std::ceil(minor)) + 1; ++m) {
             const Hole h = alongCols ? Hole{m, major} : Hole{major, m};
             const auto area = static_cast<double>(cross(a, b, h));
             if (area * area < reach * reach * length2) visit(h);
@@ -92,32 +90,16 @@ constexpr long kPassesPerHole = 4;
 constexpr long kPassesFloor = 4096;
 constexpr std::size_t kMaxPairs = std::size_t{1} << 22;
 
-// Pairs of links that may cross, each pair once, first < second: wires are listed by the cells of
-// the hole grid they pass through (a one-cell margin on each side), and two crossing wires share a
-// cell. `complete` is cleared when the pairs pass kMaxPairs (those found so far are returned).
+// Pairs of links that may cross, each pair once, first < second: the hole nearest to where two
+// wires cross lies within a pitch of both (within 0.71), so they share a hole in the lists of holes
+// near each wire. `complete` is cleared when the pairs pass kMaxPairs (those found so far are
+// returned).
 std::vector<std::pair<int, int>> crossingCandidates(const Board& board, const std::vector<int>& bare,
                                                     bool& complete) {
-    std::vector<std::pair<std::int64_t, int>> marks;  // (cell, link)
-    const std::int64_t width = std::int64_t{board.cols} + 2;
-    auto cellKey = [&](std::int64_t row, std::int64_t col) { return (row + 1) * width + col + 1; };
+    std::vector<std::pair<Hole, int>> marks;  // (hole, link)
     for (int l : bare) {
-        const Link& link = board.links[static_cast<std::size_t>(l)];
-        const bool alongCols =
-            std::abs(link.to.col - link.from.col) >= std::abs(link.to.row - link.from.row);
-        const Hole a = alongCols ? link.from : Hole{link.from.col, link.from.row};
-        const Hole b = alongCols ? link.to : Hole{link.to.col, link.to.row};
-        auto minorAt = [&](int major) {  // a straight wire between a and b, major axis as col
-            return a.row + double{1} * (b.row - a.row) * (major - a.col) / (b.col - a.col);
-        };
-        for (int t = std::min(a.col, b.col); t < std::max(a.col, b.col); ++t) {
-            const double y0 = minorAt(t);
-            const double y1 = minorAt(t + 1);
-            const auto lo = static_cast<std::int64_t>(std::floor(std::min(y0, y1))) - 1;
-            const auto hi = static_cast<std::int64_t>(std::floor(std::max(y0, y1)));
-            for (std::int64_t m = lo; m <= hi; ++m) {
-                marks.emplace_back(alongCols ? cellKey(m, t) : cellKey(t, m), l);
-            }
-        }
+        forEachHoleNear(board.links[static_cast<std::size_t>(l)], 1.0, true,
+                        [&](Hole h) { marks.emplace_back(h, l); });
     }
     std::sort(marks.begin(), marks.end());
     std::vector<std::pair<int, int>> pairs;
@@ -161,7 +143,7 @@ void findLinksOverLeads(const CheckedBoard& checked, const std::vector<int>& bar
         if (std::abs(link.to.row - link.from.row) < 2 && std::abs(link.to.col - link.from.col) < 2)
             continue;
         std::vector<Hole> under;
-        forEachHoleUnder(link, reach, [&](Hole h) {
+        forEachHoleNear(link, reach, false, [&](Hole h) {
             if (checked.holdsLead(checked.holeIndex(h))) under.push_back(h);
         });
         if (under.empty()) continue;
@@ -202,7 +184,7 @@ void findCrossings(const Board& board, const std::vector<int>& bare, std::vector
 bool liesClear(const CheckedBoard& checked, const Link& link) {
     const Board& board = checked.board();
     bool clear = true;
-    forEachHoleUnder(link, contactReach(board),
+    forEachHoleNear(link, contactReach(board), false,
                      [&](Hole h) { clear = clear && !checked.holdsLead(checked.holeIndex(h)); });
     return clear && std::none_of(board.links.begin(), board.links.end(), [&](const Link& other) {
                return isBare(board, other) && crossInside(link, other);
