@@ -10,9 +10,9 @@
 //   a net) that the board lacks is missing-part; a board part (on or off the board) the circuit
 //   never names is extra-part. A pin the circuit uses that the board part lacks is pin-mismatch,
 //   and that part's pins are then left out of the net comparison; a declared pin list that
-//   differs from the board part's is pin-mismatch too, but its pins still take part. Values: kinds whose value is a quantity compare numerically
-//   (value-mismatch, an error); other kinds compare as text (value-differs, a warning). An empty
-//   value in the circuit is don't-care.
+//   differs from the board part's is pin-mismatch too, but its pins still take part. Values: kinds
+//   whose value is a quantity compare numerically (value-mismatch, an error); other kinds compare
+//   as text (value-differs, a warning). An empty value in the circuit is don't-care.
 // - Orientation: non-polarised two-pin parts of a known kind may sit end for end. Each gets the
 //   orientation whose pins agree best with the copper (the number of pins of other parts in the
 //   same island and the same intended net); a tie keeps the part as written. Two rounds, so
@@ -57,8 +57,8 @@ namespace {
 // The shorts, one per island holding pins of two or more nets. `meantToJoin` flags the islands
 // holding a pin meant to join another (for dangling-lead: a pin the circuit leaves unconnected,
 // or the only pin of its net, is meant to be alone).
-std::vector<Finding> findShorts(const CheckedBoard& checked, const std::vector<Net>& nets,
-                                std::vector<char>& meantToJoin, bool locate) {
+void findShorts(const CheckedBoard& checked, const std::vector<Net>& nets, bool locate,
+                std::vector<Finding>& errors, std::vector<char>& meantToJoin) {
     const auto islands = static_cast<std::size_t>(checked.copper().islandCount());
     meantToJoin.assign(islands, 0);
     std::vector<const Net*> firstNet(islands, nullptr);
@@ -74,19 +74,20 @@ std::vector<Finding> findShorts(const CheckedBoard& checked, const std::vector<N
             if (here.back() != &net) here.push_back(&net);
         }
     }
-    std::vector<Finding> shorts;
-    for (const auto& [island, islandNets] : shorted) shorts.push_back(locateShort(checked, island, islandNets, locate));
-    return shorts;
+    for (const auto& [island, islandNets] : shorted) {
+        errors.push_back(locateShort(checked, island, islandNets, locate));
+    }
 }
 
 // The opens, one per net whose pins lie in two or more islands.
-std::vector<Finding> findOpens(const CheckedBoard& checked, const std::vector<Net>& nets, bool locate) {
-    std::vector<Finding> opens;
+void findOpens(const CheckedBoard& checked, const std::vector<Net>& nets, bool locate,
+               std::vector<Finding>& errors) {
     for (const Net& net : nets) {
         auto elsewhere = [&](const NetPin& pin) { return pin.island != net.pins.front().island; };
-        if (std::any_of(net.pins.begin(), net.pins.end(), elsewhere)) opens.push_back(locateOpen(checked, net, locate));
+        if (std::any_of(net.pins.begin(), net.pins.end(), elsewhere)) {
+            errors.push_back(locateOpen(checked, net, locate));
+        }
     }
-    return opens;
 }
 
 // Islands that hold at least one pin or lug, in id order, with their holes and pins.
@@ -99,7 +100,8 @@ std::vector<Island> pinIslands(const CheckedBoard& checked) {
     };
     for (const Part& part : board.parts) {
         for (const Pin& pin : part.pins) {
-            if (board.contains(pin.hole)) islandOf(checked.holeIndex(pin.hole)).pins.push_back({part.ref, pin.name});
+            if (board.contains(pin.hole))
+                islandOf(checked.holeIndex(pin.hole)).pins.push_back({part.ref, pin.name});
         }
     }
     int node = board.holeCount();
@@ -117,7 +119,8 @@ std::vector<Island> pinIslands(const CheckedBoard& checked) {
     return islands;
 }
 
-CheckReport checkBoard(const CheckedBoard& checked, const Circuit* circuit, const CheckOptions& options) {
+CheckReport checkBoard(const CheckedBoard& checked, const Circuit* circuit,
+                       const CheckOptions& options) {
     if (circuit == nullptr && checked.board().circuit) circuit = &*checked.board().circuit;
     CheckReport report;
     report.hasCircuit = circuit != nullptr;
@@ -126,11 +129,8 @@ CheckReport checkBoard(const CheckedBoard& checked, const Circuit* circuit, cons
         CircuitMatch match = matchCircuit(checked, *circuit);
         report.errors = std::move(match.errors);
         report.warnings = std::move(match.warnings);
-        const std::vector<Finding> shorts =
-            findShorts(checked, match.nets, meantToJoin, options.locateFaults);
-        const std::vector<Finding> opens = findOpens(checked, match.nets, options.locateFaults);
-        report.errors.insert(report.errors.end(), shorts.begin(), shorts.end());
-        report.errors.insert(report.errors.end(), opens.begin(), opens.end());
+        findShorts(checked, match.nets, options.locateFaults, report.errors, meantToJoin);
+        findOpens(checked, match.nets, options.locateFaults, report.errors);
     }
     findSharedHoles(checked, report.errors);
     findLeadsOnCuts(checked, report.errors);
@@ -148,7 +148,8 @@ CheckReport check(const Board& board, const Circuit* circuit, const CheckOptions
     return checkBoard(CheckedBoard(board), circuit, options);
 }
 
-CheckReport Checker::check(const Board& board, const Circuit* circuit, const CheckOptions& options) {
+CheckReport Checker::check(const Board& board, const Circuit* circuit,
+                           const CheckOptions& options) {
     const CheckedBoard checked(board);
     CheckReport report = checkBoard(checked, circuit, options);
     copper_.emplace(checked.copper());

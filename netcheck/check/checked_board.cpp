@@ -5,12 +5,15 @@
 namespace netcheck {
 
 CheckedBoard::CheckedBoard(const Board& board)
-    : board_(&board), copper_(board), leadStart_(static_cast<std::size_t>(board.holeCount()) + 1, 0) {
+    : board_(&board),
+      copper_(board),
+      leadStart_(static_cast<std::size_t>(board.holeCount()) + 1, 0) {
     std::vector<Lead> found;
     auto add = [&](Lead::Kind kind, std::size_t item, int sub, Hole hole) {
         if (!board.contains(hole)) return;
         const int index = holeIndex(hole);
-        found.push_back(Lead{kind, static_cast<int>(item), sub, index, copper_.islandOfNode(index)});
+        found.push_back(
+            Lead{kind, static_cast<int>(item), sub, index, copper_.islandOfNode(index)});
         ++leadStart_[static_cast<std::size_t>(index)];
     };
     for (std::size_t p = 0; p < board.parts.size(); ++p) {
@@ -49,9 +52,11 @@ std::vector<std::pair<int, int>> CheckedBoard::jumpers() const {
         if (a >= 0 && b >= 0) edges.emplace_back(a, b);
     };
     for (const Link& link : board_->links) {
-        add(copper_.endpointNode(Endpoint::atHole(link.from)), copper_.endpointNode(Endpoint::atHole(link.to)));
+        add(copper_.endpointNode(Endpoint::atHole(link.from)),
+            copper_.endpointNode(Endpoint::atHole(link.to)));
     }
-    for (const Wire& wire : board_->wires) add(copper_.endpointNode(wire.from), copper_.endpointNode(wire.to));
+    for (const Wire& wire : board_->wires)
+        add(copper_.endpointNode(wire.from), copper_.endpointNode(wire.to));
     return edges;
 }
 

@@ -35,7 +35,8 @@ public:
     /// The leads in one hole.
     std::span<const Lead> leadsAt(int hole) const {
         const auto at = static_cast<std::size_t>(hole);
-        return std::span<const Lead>(leads_).subspan(leadStart_[at], leadStart_[at + 1] - leadStart_[at]);
+        return std::span<const Lead>(leads_).subspan(leadStart_[at],
+                                                     leadStart_[at + 1] - leadStart_[at]);
     }
     /// "R1.2, link A1-C1": the leads in one hole, named.
     std::string leadNames(int hole) const;

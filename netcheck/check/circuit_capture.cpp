@@ -51,7 +51,8 @@ Circuit captureCircuit(const Board& board) {
         circuit.parts[part.ref] = cp;
     }
     for (const OffboardPart& part : board.offboard)
-        circuit.parts[part.ref] = CircuitPart{part.kind, part.value, part.pins, nlohmann::json::object()};
+        circuit.parts[part.ref] =
+            CircuitPart{part.kind, part.value, part.pins, nlohmann::json::object()};
     int counter = 0;
     for (const auto& group : boardNets(board)) {
         if (group.size() < 2) continue;

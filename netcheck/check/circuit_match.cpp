@@ -98,7 +98,8 @@ public:
         for (const OffboardPart& part : board.offboard) pins += part.pins.size();
         match_.pins.reserve(pins);
         for (const Part& part : board.parts) refs_.emplace(part.ref, Ref{&part, nullptr});
-        for (const OffboardPart& part : board.offboard) refs_.emplace(part.ref, Ref{nullptr, &part});
+        for (const OffboardPart& part : board.offboard)
+            refs_.emplace(part.ref, Ref{nullptr, &part});
     }
 
     CircuitMatch run() {
@@ -207,7 +208,8 @@ private:
         if (!part.found()) return;
         std::string problem;
         if (!part.unknownPins.empty()) {
-            problem = "the circuit uses pin" + std::string(part.unknownPins.size() > 1 ? "s " : " ") +
+            problem = "the circuit uses pin" +
+                      std::string(part.unknownPins.size() > 1 ? "s " : " ") +
                       joinNames(part.unknownPins);
         } else if (part.declared && !samePinNames(part.declared->pins, part)) {
             problem = "the circuit declares pins " + joinNames(part.declared->pins);
@@ -261,11 +263,13 @@ void placeNets(CircuitMatch& match) {
     for (const MatchedPart& part : match.parts) {
         for (const MatchedPin& pin : part.pins) {
             if (placed(part, pin))
-                match.netPins[next[static_cast<std::size_t>(pin.net)]++] = NetPin{part.ref, pin.meant, pin.node, pin.island};
+                match.netPins[next[static_cast<std::size_t>(pin.net)]++] =
+                    NetPin{part.ref, pin.meant, pin.node, pin.island};
         }
     }
     for (std::size_t n = 0; n < match.nets.size(); ++n) {
-        match.nets[n].pins = std::span<const NetPin>(match.netPins).subspan(start[n], start[n + 1] - start[n]);
+        match.nets[n].pins =
+            std::span<const NetPin>(match.netPins).subspan(start[n], start[n + 1] - start[n]);
     }
 }
 

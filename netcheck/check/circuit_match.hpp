@@ -26,11 +26,11 @@ struct MatchedPin {
 /// ref, on-board parts before off-board ones).
 struct MatchedPart {
     std::string_view ref;
-    const Part* part = nullptr;             ///< on the board
+    const Part* part = nullptr;              ///< on the board
     const OffboardPart* offboard = nullptr;  ///< off the board
     const CircuitPart* declared = nullptr;   ///< null when the ref appears only in nets
-    std::span<MatchedPin> pins;              ///< the board part's pins, in its order (in CircuitMatch)
-    std::vector<std::string> unknownPins;    ///< pins the circuit uses that the part lacks, sorted
+    std::span<MatchedPin> pins;  ///< the board part's pins, in its order (in CircuitMatch)
+    std::vector<std::string> unknownPins;  ///< pins the circuit uses that the part lacks, sorted
 
     bool found() const { return part != nullptr || offboard != nullptr; }
     const std::string& kind() const { return part ? part->kind : offboard->kind; }

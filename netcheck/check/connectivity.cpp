@@ -11,9 +11,9 @@ namespace netcheck {
 
 namespace {
 
-// Where copper does not join a hole to the next along its strip: across the board's edge, on pad board,
-// over a cut between them, and on either side of a hole cut (a hole without copper joins neither
-// neighbour).
+// Where copper does not join a hole to the next along its strip: across the board's edge, on pad
+// board, over a cut between them, and on either side of a hole cut (a hole without copper joins
+// neither neighbour).
 std::vector<char> breaksAfter(const Board& board) {
     std::vector<char> breaks(static_cast<std::size_t>(board.holeCount()),
                              board.copper == CopperPattern::Pads ? 1 : 0);
@@ -61,7 +61,8 @@ Connectivity::Connectivity(const Board& board) : board_(&board) {
         const int y = segmentOf(b);
         if (x >= 0 && y >= 0) sets.unite(x, y);
     };
-    for (const Link& link : board.links) join(Endpoint::atHole(link.from), Endpoint::atHole(link.to));
+    for (const Link& link : board.links)
+        join(Endpoint::atHole(link.from), Endpoint::atHole(link.to));
     for (const Wire& wire : board.wires) join(wire.from, wire.to);
 
     // A set's root is its smallest segment, so numbering roots in segment order numbers the
@@ -94,7 +95,9 @@ int Connectivity::lugNode(const PinRef& lug) const {
 
 int Connectivity::endpointNode(const Endpoint& end) const {
     const Board& board = *board_;
-    auto holeNode = [&](Hole hole) { return board.contains(hole) ? hole.row * board.cols + hole.col : -1; };
+    auto holeNode = [&](Hole hole) {
+        return board.contains(hole) ? hole.row * board.cols + hole.col : -1;
+    };
     if (end.isHole()) return holeNode(*end.hole);
     if (const int lug = lugNode(end.lug); lug >= 0) return lug;
     const Part* part = board.findPart(end.lug.ref);

@@ -34,7 +34,7 @@ enum class FindingType {
 /// One row of the table of finding types.
 struct FindingTypeInfo {
     FindingType type;
-    std::string_view id;       ///< as written in reports, e.g. "pin-on-cut"
+    std::string_view id;  ///< as written in reports, e.g. "pin-on-cut"
     Severity severity;
     std::string_view meaning;  ///< one line, for the docs and the editor's tooltips
     std::string_view fields;   ///< the JSON report's fields for this type, in Markdown

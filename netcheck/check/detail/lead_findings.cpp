@@ -30,7 +30,6 @@ std::string plural(int count, const std::string& word) {
     return std::to_string(count) + " " + word + (count == 1 ? "" : "s");
 }
 
-
 }  // namespace
 
 void findSharedHoles(const CheckedBoard& checked, std::vector<Finding>& errors) {
@@ -39,8 +38,9 @@ void findSharedHoles(const CheckedBoard& checked, std::vector<Finding>& errors) 
          })) {
         const Hole hole = checked.holeAt(first->hole);
         errors.push_back(holeFinding(FindingType::SharedHole, hole,
-                                     holeName(hole) + " holds " + plural(checked.leadsIn(first->hole), "lead") +
-                                         ": " + checked.leadNames(first->hole)));
+                                     holeName(hole) + " holds " +
+                                         plural(checked.leadsIn(first->hole), "lead") + ": " +
+                                         checked.leadNames(first->hole)));
     }
 }
 
@@ -64,7 +64,8 @@ void findDanglingLeads(const CheckedBoard& checked, const std::vector<char>* onl
     auto add = [&](int node, int count) {
         if (node >= 0) held[static_cast<std::size_t>(copper.islandOfNode(node))] += count;
     };
-    for (const Lead& lead : checked.leads()) add(lead.hole, lead.kind == Lead::Kind::PartPin ? 1 : 2);
+    for (const Lead& lead : checked.leads())
+        add(lead.hole, lead.kind == Lead::Kind::PartPin ? 1 : 2);
     for (int node = board.holeCount(); node < copper.nodeCount(); ++node) add(node, 1);
     for (const Wire& wire : board.wires) {
         for (const Endpoint* end : {&wire.from, &wire.to}) {
@@ -76,9 +77,9 @@ void findDanglingLeads(const CheckedBoard& checked, const std::vector<char>* onl
              return held[island] == 1 && (onlyIslands == nullptr || (*onlyIslands)[island]);
          })) {
         const Hole hole = checked.holeAt(lead->hole);
-        warnings.push_back(holeFinding(FindingType::DanglingLead, hole,
-                                       checked.leadName(*lead) + " in " + holeName(hole) +
-                                           " touches nothing else"));
+        warnings.push_back(holeFinding(
+            FindingType::DanglingLead, hole,
+            checked.leadName(*lead) + " in " + holeName(hole) + " touches nothing else"));
     }
 }
 
@@ -92,7 +93,8 @@ void findTrim(const CheckedBoard& checked, std::vector<Finding>& warnings) {
         first = {std::min(first.row, hole.row), std::min(first.col, hole.col)};
         last = {std::max(last.row, hole.row), std::max(last.col, hole.col)};
     }
-    const int spare[4] = {first.row, board.rows - 1 - last.row, first.col, board.cols - 1 - last.col};
+    const int spare[4] = {first.row, board.rows - 1 - last.row, first.col,
+                          board.cols - 1 - last.col};
     const char* const what[4] = {"row", "row", "column", "column"};
     const char* const where[4] = {" at the top", " at the bottom", " at the left", " at the right"};
     const auto sides = std::count_if(spare, spare + 4, [](int n) { return n > 0; });

@@ -47,7 +47,8 @@ void forEachHoleNear(const Link& link, double reach, bool ends, Visit visit) {
     for (int s = ends ? 0 : 1; s <= (ends ? steps : steps - 1) && steps > 0; ++s) {
         const int major = (alongCols ? a.col : a.row) + ((alongCols ? dc : dr) > 0 ? s : -s);
         const double minor = (alongCols ? a.row : a.col) + double{1} * minorSpan * s / steps;
-        for (auto m = static_cast<int>(std::floor(minor)) - 1; m <= static_cast<int>(std::ceil(minor)) + 1; ++m) {
+        for (auto m = static_cast<int>(std::floor(minor)) - 1;
+             m <= static_cast<int>(std::ceil(minor)) + 1; ++m) {
             const Hole h = alongCols ? Hole{m, major} : Hole{major, m};
             const auto area = static_cast<double>(cross(a, b, h));
             if (area * area < reach * reach * length2) visit(h);
@@ -94,8 +95,8 @@ constexpr std::size_t kMaxPairs = std::size_t{1} << 22;
 // wires cross lies within a pitch of both (within 0.71), so they share a hole in the lists of holes
 // near each wire. `complete` is cleared when the pairs pass kMaxPairs (those found so far are
 // returned).
-std::vector<std::pair<int, int>> crossingCandidates(const Board& board, const std::vector<int>& bare,
-                                                    bool& complete) {
+std::vector<std::pair<int, int>> crossingCandidates(const Board& board,
+                                                    const std::vector<int>& bare, bool& complete) {
     std::vector<std::pair<Hole, int>> marks;  // (hole, link)
     for (int l : bare) {
         forEachHoleNear(board.links[static_cast<std::size_t>(l)], 1.0, true,
@@ -153,13 +154,15 @@ void findLinksOverLeads(const CheckedBoard& checked, const std::vector<int>& bar
                               (under.size() > 1 ? "those leads" : "that lead");
         std::vector<Hole> holes{link.from, link.to};
         holes.insert(holes.end(), under.begin(), under.end());
-        warnings.push_back(Finding::of(FindingType::LinkOverLead, std::move(message), std::move(holes)));
+        warnings.push_back(
+            Finding::of(FindingType::LinkOverLead, std::move(message), std::move(holes)));
         warnings.back().fix = "sleeve the link or route it round";
     }
 }
 
 // links-touch warnings, in link order (and links-unchecked past kMaxPairs).
-void findCrossings(const Board& board, const std::vector<int>& bare, std::vector<Finding>& warnings) {
+void findCrossings(const Board& board, const std::vector<int>& bare,
+                   std::vector<Finding>& warnings) {
     bool complete = true;
     for (const auto& [i, j] : crossingCandidates(board, bare, complete)) {
         const Link& first = board.links[static_cast<std::size_t>(i)];
@@ -185,7 +188,7 @@ bool liesClear(const CheckedBoard& checked, const Link& link) {
     const Board& board = checked.board();
     bool clear = true;
     forEachHoleNear(link, contactReach(board), false,
-                     [&](Hole h) { clear = clear && !checked.holdsLead(checked.holeIndex(h)); });
+                    [&](Hole h) { clear = clear && !checked.holdsLead(checked.holeIndex(h)); });
     return clear && std::none_of(board.links.begin(), board.links.end(), [&](const Link& other) {
                return isBare(board, other) && crossInside(link, other);
            });

@@ -19,12 +19,14 @@ Freedom freedomOf(const MatchedPart& part) {
     const PartKind* kind = findPartKind(part.kind());
     if (kind == nullptr) return Freedom::Fixed;  // unknown kinds match pin names exactly
     if (kind->name == "pot" || kind->name == "trimmer") {
-        const bool hasLugs = part.findPin("1") >= 0 && part.findPin("2") >= 0 && part.findPin("3") >= 0;
+        const bool hasLugs =
+            part.findPin("1") >= 0 && part.findPin("2") >= 0 && part.findPin("3") >= 0;
         return hasLugs ? Freedom::PotEnds : Freedom::Fixed;
     }
     if (part.offboard) return Freedom::Fixed;
     if (part.pins.size() == 2) return kind->polarised ? Freedom::Polarised : Freedom::EndForEnd;
-    if (kind->polarised && part.pins.size() == 3 && kind->pins.size() == 3) return Freedom::Polarised;
+    if (kind->polarised && part.pins.size() == 3 && kind->pins.size() == 3)
+        return Freedom::Polarised;
     return Freedom::Fixed;
 }
 
@@ -95,19 +97,23 @@ public:
     int score(const MatchedPart& part) const {
         int total = 0;
         for (const MatchedPin& pin : part.pins) {
-            const auto [first, last] = std::equal_range(keys_.begin(), keys_.end(), std::pair{pin.island, pin.net});
+            const auto [first, last] =
+                std::equal_range(keys_.begin(), keys_.end(), std::pair{pin.island, pin.net});
             total += static_cast<int>(last - first);
         }
         return total;
     }
 
 private:
-    std::vector<std::pair<int, int>> keys_;  // (island, net), sorted: a count is a run of equal keys
+    // (island, net), sorted: a count is the length of a run of equal keys.
+    std::vector<std::pair<int, int>> keys_;
 };
 
 // "Clearly better": the other way round explains at least two joins and more than twice as many
 // as the placement does.
-bool clearlyBetter(int other, int placed) { return other >= 2 && other > 2 * placed; }
+bool clearlyBetter(int other, int placed) {
+    return other >= 2 && other > 2 * placed;
+}
 
 std::string partLabel(const MatchedPart& part) {
     return std::string(part.ref) + " (" + part.kind() + ")";
@@ -152,10 +158,10 @@ void checkPot(MatchedPart& part, NetCounts& counts, const std::vector<Net>& nets
         };
         warnings.push_back(part.finding(
             FindingType::PotReversed,
-            partLabel(part) + " end lugs 1 and 3 are swapped against the circuit: " +
-                part.place(one) + " is on " + netLabel(part.pins[one].net) + ", " +
-                part.place(three) + " on " + netLabel(part.pins[three].net) +
-                " (the control works backwards)"));
+            partLabel(part) +
+                " end lugs 1 and 3 are swapped against the circuit: " + part.place(one) +
+                " is on " + netLabel(part.pins[one].net) + ", " + part.place(three) + " on " +
+                netLabel(part.pins[three].net) + " (the control works backwards)"));
     } else {
         part.swapPins(one, three);
     }
@@ -165,7 +171,8 @@ void checkPot(MatchedPart& part, NetCounts& counts, const std::vector<Net>& nets
 std::string pinList(const MatchedPart& part, const std::array<std::size_t, 3>& order) {
     std::string text;
     for (std::size_t k = 0; k < 3; ++k) {
-        text += (k > 0 ? ", " : "") + std::string(part.pins[order[k]].name) + " in " + part.place(k);
+        text +=
+            (k > 0 ? ", " : "") + std::string(part.pins[order[k]].name) + " in " + part.place(k);
     }
     return text;
 }
@@ -192,15 +199,17 @@ void checkPolarised(MatchedPart& part, NetCounts& counts, const std::vector<Net>
     for (std::size_t k = 0; k < n; ++k) part.pins[k].net = placedNets[k];
     counts.add(part, +1);
     if (!clearlyBetter(bestScore, placed)) return;
-    const int swappedNet = placedNets[1];  // two pins: the other lead's net, carried by the first's hole
+    // Two pins: the other lead's net, which the first pin's hole carries.
+    const int swappedNet = placedNets[1];
     const std::string message =
-        n == 3 ? partLabel(part) + " pins look out of order: the copper fits " + pinList(part, best) +
-                     " (placed: " + pinList(part, {0, 1, 2}) + ")"
-               : partLabel(part) + " looks reversed: " + std::string(part.pins[0].name) + " is in " +
-                     part.place(0) + ", " +
-                     (swappedNet < 0 ? "where the other lead belongs"
-                                     : "which carries net " +
-                                           std::string(nets[static_cast<std::size_t>(swappedNet)].name));
+        n == 3 ? partLabel(part) + " pins look out of order: the copper fits " +
+                     pinList(part, best) + " (placed: " + pinList(part, {0, 1, 2}) + ")"
+               : partLabel(part) + " looks reversed: " + std::string(part.pins[0].name) +
+                     " is in " + part.place(0) + ", " +
+                     (swappedNet < 0
+                          ? "where the other lead belongs"
+                          : "which carries net " +
+                                std::string(nets[static_cast<std::size_t>(swappedNet)].name));
     errors.push_back(part.finding(FindingType::ReversedPart, message));
 }
 
@@ -225,7 +234,8 @@ void orientParts(const CheckedBoard& checked, CircuitMatch& match) {
     }
     for (std::size_t p = 0; p < parts.size(); ++p) {
         if (freedom[p] == Freedom::PotEnds) checkPot(parts[p], counts, match.nets, match.warnings);
-        if (freedom[p] == Freedom::Polarised) checkPolarised(parts[p], counts, match.nets, match.errors);
+        if (freedom[p] == Freedom::Polarised)
+            checkPolarised(parts[p], counts, match.nets, match.errors);
     }
 }
 

@@ -48,7 +48,8 @@ std::vector<int> shortestPath(const CheckedBoard& checked, const PinsAt& pinsAt)
         };
         if (checked.isHoleNode(node)) {
             const Hole hole = checked.holeAt(node);
-            if (hole.col > 0 && checked.copper().joinsNext(Hole{hole.row, hole.col - 1})) visit(node - 1);
+            if (hole.col > 0 && checked.copper().joinsNext(Hole{hole.row, hole.col - 1}))
+                visit(node - 1);
             if (checked.copper().joinsNext(hole)) visit(node + 1);
         }
         const auto [from, to] = jumpers.equal_range(node);
@@ -60,9 +61,11 @@ std::vector<int> shortestPath(const CheckedBoard& checked, const PinsAt& pinsAt)
 // "R1.2 (D7)": the first pin at `node` of the first net, or of another net.
 std::string pinText(const CheckedBoard& checked, const PinsAt& pinsAt, int node, bool firstNet) {
     const auto [first, last] = pinsAt.equal_range(node);
-    const auto it = std::find_if(first, last, [&](const auto& at) { return (at.second.net == 0) == firstNet; });
+    const auto it =
+        std::find_if(first, last, [&](const auto& at) { return (at.second.net == 0) == firstNet; });
     const NetPin& pin = *(it == last ? first : it)->second.pin;
-    return pin.name() + " (" + (checked.isHoleNode(node) ? checked.nodeName(node) : "off board") + ")";
+    return pin.name() + " (" + (checked.isHoleNode(node) ? checked.nodeName(node) : "off board") +
+           ")";
 }
 
 std::string routeText(const CheckedBoard& checked, const std::vector<int>& path) {
@@ -108,7 +111,8 @@ Finding locateShort(const CheckedBoard& checked, int island, const std::vector<c
         finding.message = names + " share one island";
         return finding;
     }
-    finding.message = names + ": " + (path.size() == 1 ? "one hole holds " : routeText(checked, path)) +
+    finding.message = names + ": " +
+                      (path.size() == 1 ? "one hole holds " : routeText(checked, path)) +
                       pinText(checked, pinsAt, path.front(), true) + " and " +
                       pinText(checked, pinsAt, path.back(), false);
     return finding;
