@@ -9,35 +9,22 @@
 
 namespace netcheck {
 
-namespace {
-
-// Where copper does not join a hole to the next along its strip: across the board's edge, on pad
-// board, over a cut between them, and on either side of a hole cut (a hole without copper joins
-// neither neighbour).
-std::vector<char> breaksAfter(const Board& board) {
-    std::vector<char> breaks(static_cast<std::size_t>(board.holeCount()),
-                             board.copper == CopperPattern::Pads ? 1 : 0);
-    auto at = [&](int row, int col) { return static_cast<std::size_t>(row * board.cols + col); };
-    for (int row = 0; row < board.rows; ++row) breaks[at(row, board.cols - 1)] = 1;
-    for (const Cut& cut : board.cuts) {
-        if (!board.contains(cut.hole)) continue;
-        breaks[at(cut.hole.row, cut.hole.col)] = 1;
-        if (cut.kind == Cut::Kind::Hole && cut.hole.col > 0)
-            breaks[at(cut.hole.row, cut.hole.col - 1)] = 1;
-    }
-    return breaks;
-}
-
-}  // namespace
-
 Connectivity::Connectivity(const Board& board) : board_(&board) {
     const auto holes = static_cast<std::size_t>(board.holeCount());
+    auto at = [&](Hole hole) { return static_cast<std::size_t>(hole.row * board.cols + hole.col); };
+    // Copper does not join a hole to the next along its strip across the board's edge, on pad
+    // board, over a cut between them, and on either side of a hole cut (a hole without copper
+    // joins neither neighbour).
     holeCut_.assign(holes, 0);
+    breakAfter_.assign(holes, board.copper == CopperPattern::Pads ? 1 : 0);
+    for (int row = 0; row < board.rows; ++row) breakAfter_[at({row, board.cols - 1})] = 1;
     for (const Cut& cut : board.cuts) {
-        if (cut.kind == Cut::Kind::Hole && board.contains(cut.hole))
-            holeCut_[static_cast<std::size_t>(cut.hole.row * board.cols + cut.hole.col)] = 1;
+        if (!board.contains(cut.hole)) continue;
+        breakAfter_[at(cut.hole)] = 1;
+        if (cut.kind != Cut::Kind::Hole) continue;
+        holeCut_[at(cut.hole)] = 1;
+        if (cut.hole.col > 0) breakAfter_[at({cut.hole.row, cut.hole.col - 1})] = 1;
     }
-    breakAfter_ = breaksAfter(board);
     std::vector<int> segmentOfNode(holes);
     int segments = 0;
     for (std::size_t hole = 0; hole < holes; ++hole) {
