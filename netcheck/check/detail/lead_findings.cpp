@@ -1,8 +1,6 @@
 // Findings about where leads sit, with or without a circuit: two leads in one hole, a lead in a
 // hole-cut hole, a lead alone on its copper, and board edges nothing uses.
 #include <algorithm>
-#include <cmath>
-#include <cstdio>
 
 #include "netcheck/check/detail/finders.hpp"
 #include "netcheck/model/board_size.hpp"
@@ -17,15 +15,6 @@ Finding holeFinding(FindingType type, Hole hole, std::string message) {
     return finding;
 }
 
-// The leads that `wanted` picks, in hole order.
-std::vector<const Lead*> leadsWhere(const CheckedBoard& checked, auto wanted) {
-    std::vector<const Lead*> leads;
-    for (const Lead& lead : checked.leads()) {
-        if (wanted(lead)) leads.push_back(&lead);
-    }
-    return leads;
-}
-
 std::string plural(int count, const std::string& word) {
     return std::to_string(count) + " " + word + (count == 1 ? "" : "s");
 }
@@ -33,23 +22,23 @@ std::string plural(int count, const std::string& word) {
 }  // namespace
 
 void findSharedHoles(const CheckedBoard& checked, std::vector<Finding>& errors) {
-    for (const Lead* first : leadsWhere(checked, [&](const Lead& lead) {
-             return checked.leadsIn(lead.hole) > 1 && &checked.leadsAt(lead.hole).front() == &lead;
-         })) {
-        const Hole hole = checked.holeAt(first->hole);
+    for (const Lead& lead : checked.leads()) {
+        const std::span<const Lead> here = checked.leadsAt(lead.hole);
+        if (here.size() < 2 || &here.front() != &lead) continue;
+        const Hole hole = checked.holeAt(lead.hole);
         errors.push_back(holeFinding(FindingType::SharedHole, hole,
                                      holeName(hole) + " holds " +
-                                         plural(checked.leadsIn(first->hole), "lead") + ": " +
-                                         checked.leadNames(first->hole)));
+                                         plural(static_cast<int>(here.size()), "lead") + ": " +
+                                         checked.leadNames(lead.hole)));
     }
 }
 
 void findLeadsOnCuts(const CheckedBoard& checked, std::vector<Finding>& errors) {
-    for (const Lead* lead :
-         leadsWhere(checked, [&](const Lead& lead) { return checked.isHoleCut(lead.hole); })) {
-        const Hole hole = checked.holeAt(lead->hole);
+    for (const Lead& lead : checked.leads()) {
+        if (!checked.isHoleCut(lead.hole)) continue;
+        const Hole hole = checked.holeAt(lead.hole);
         errors.push_back(holeFinding(FindingType::PinOnCut, hole,
-                                     checked.leadName(*lead) + " is in " + holeName(hole) +
+                                     checked.leadName(lead) + " is in " + holeName(hole) +
                                          ", where a hole cut removed the copper"));
     }
 }
@@ -72,14 +61,13 @@ void findDanglingLeads(const CheckedBoard& checked, const std::vector<char>* onl
             if (!end->isHole()) add(checked.copper().endpointNode(*end), 2);
         }
     }
-    for (const Lead* lead : leadsWhere(checked, [&](const Lead& lead) {
-             const auto island = static_cast<std::size_t>(lead.island);
-             return held[island] == 1 && (onlyIslands == nullptr || (*onlyIslands)[island]);
-         })) {
-        const Hole hole = checked.holeAt(lead->hole);
+    for (const Lead& lead : checked.leads()) {
+        const auto island = static_cast<std::size_t>(lead.island);
+        if (held[island] != 1 || (onlyIslands != nullptr && !(*onlyIslands)[island])) continue;
+        const Hole hole = checked.holeAt(lead.hole);
         warnings.push_back(holeFinding(
             FindingType::DanglingLead, hole,
-            checked.leadName(*lead) + " in " + holeName(hole) + " touches nothing else"));
+            checked.leadName(lead) + " in " + holeName(hole) + " touches nothing else"));
     }
 }
 
@@ -99,9 +87,6 @@ void findTrim(const CheckedBoard& checked, std::vector<Finding>& warnings) {
     const char* const where[4] = {" at the top", " at the bottom", " at the left", " at the right"};
     const auto sides = std::count_if(spare, spare + 4, [](int n) { return n > 0; });
     if (sides == 0) return;
-    Finding finding;
-    finding.type = FindingType::Trim;
-    finding.holes = {first, last};
     std::string text = "the board could lose ";
     for (int i = 0, listed = 0; i < 4; ++i) {
         if (spare[i] == 0) continue;
@@ -111,9 +96,11 @@ void findTrim(const CheckedBoard& checked, std::vector<Finding>& warnings) {
     }
     const int rows = last.row - first.row + 1;
     const int cols = last.col - first.col + 1;
-    finding.message = text + ": " + sizeInHoles(cols, rows) + " (" + holeName(first) + " to " +
-                      holeName(last) + "), " + sizeInMm(cols * board.pitchMm, rows * board.pitchMm);
-    warnings.push_back(std::move(finding));
+    warnings.push_back(Finding::of(FindingType::Trim,
+                                   text + ": " + sizeInHoles(cols, rows) + " (" + holeName(first) +
+                                       " to " + holeName(last) + "), " +
+                                       sizeInMm(cols * board.pitchMm, rows * board.pitchMm),
+                                   {first, last}));
 }
 
 }  // namespace netcheck
