@@ -36,7 +36,8 @@ CheckedBoard::CheckedBoard(const Board& board)
     std::partial_sum(leadStart_.begin(), leadStart_.end(), leadStart_.begin());
     leads_.resize(found.size());
     for (auto lead = found.rbegin(); lead != found.rend(); ++lead) {
-        leads_[--leadStart_[static_cast<std::size_t>(lead->hole)]] = *lead;
+        leads_[static_cast<std::size_t>(--leadStart_[static_cast<std::size_t>(lead->hole)])] =
+            *lead;
     }
 }
 

@@ -35,8 +35,7 @@ public:
     /// The leads in one hole.
     std::span<const Lead> leadsAt(int hole) const {
         const auto at = static_cast<std::size_t>(hole);
-        return std::span<const Lead>(leads_).subspan(leadStart_[at],
-                                                     leadStart_[at + 1] - leadStart_[at]);
+        return {leads_.begin() + leadStart_[at], leads_.begin() + leadStart_[at + 1]};
     }
     /// "R1.2, link A1-C1": the leads in one hole, named.
     std::string leadNames(int hole) const;
@@ -62,7 +61,7 @@ private:
     const Board* board_;
     Connectivity copper_;
     std::vector<Lead> leads_;
-    std::vector<std::size_t> leadStart_;  // by hole, and one past the last: where its leads start
+    std::vector<int> leadStart_;  // by hole, and one past the last: where its leads start
 };
 
 /// A lead touches a bare link when their centres come this close: a 0.6 mm tinned link wire and a
