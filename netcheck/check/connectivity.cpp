@@ -11,7 +11,7 @@ namespace netcheck {
 
 Connectivity::Connectivity(const Board& board) : board_(&board) {
     const auto holes = static_cast<std::size_t>(board.holeCount());
-    auto at = [&](Hole hole) { return static_cast<std::size_t>(hole.row * board.cols + hole.col); };
+    auto at = [&](Hole hole) { return static_cast<std::size_t>(holeNode(hole)); };
     // Copper does not join a hole to the next along its strip across the board's edge, on pad
     // board, over a cut between them, and on either side of a hole cut (a hole without copper
     // joins neither neighbour).
@@ -39,14 +39,12 @@ Connectivity::Connectivity(const Board& board) : board_(&board) {
     }
 
     UnionFind sets(segments);
-    auto segmentOf = [&](const Endpoint& end) {
-        const int node = endpointNode(end);
-        return node < 0 ? -1 : segmentOfNode[static_cast<std::size_t>(node)];
-    };
     auto join = [&](const Endpoint& a, const Endpoint& b) {
-        const int x = segmentOf(a);
-        const int y = segmentOf(b);
-        if (x >= 0 && y >= 0) sets.unite(x, y);
+        const int x = endpointNode(a);
+        const int y = endpointNode(b);
+        if (x < 0 || y < 0) return;
+        sets.unite(segmentOfNode[static_cast<std::size_t>(x)],
+                   segmentOfNode[static_cast<std::size_t>(y)]);
     };
     for (const Link& link : board.links)
         join(Endpoint::atHole(link.from), Endpoint::atHole(link.to));
@@ -71,8 +69,12 @@ int Connectivity::islandOfNode(int node) const {
     return islandOfNode_[static_cast<std::size_t>(node)];
 }
 
+int Connectivity::holeNode(Hole hole) const {
+    return board_->contains(hole) ? hole.row * board_->cols + hole.col : -1;
+}
+
 int Connectivity::islandOfHole(Hole hole) const {
-    return board_->contains(hole) ? islandOfNode(hole.row * board_->cols + hole.col) : -1;
+    return islandOfNode(holeNode(hole));
 }
 
 int Connectivity::lugNode(const PinRef& lug) const {
@@ -81,13 +83,9 @@ int Connectivity::lugNode(const PinRef& lug) const {
 }
 
 int Connectivity::endpointNode(const Endpoint& end) const {
-    const Board& board = *board_;
-    auto holeNode = [&](Hole hole) {
-        return board.contains(hole) ? hole.row * board.cols + hole.col : -1;
-    };
     if (end.isHole()) return holeNode(*end.hole);
     if (const int lug = lugNode(end.lug); lug >= 0) return lug;
-    const Part* part = board.findPart(end.lug.ref);
+    const Part* part = board_->findPart(end.lug.ref);
     const Pin* pin = part ? part->findPin(end.lug.pin) : nullptr;
     return pin ? holeNode(pin->hole) : -1;
 }
@@ -97,13 +95,12 @@ int Connectivity::islandOfPin(const PinRef& pin) const {
 }
 
 bool Connectivity::isHoleCut(Hole hole) const {
-    return board_->contains(hole) &&
-           holeCut_[static_cast<std::size_t>(hole.row * board_->cols + hole.col)];
+    return board_->contains(hole) && holeCut_[static_cast<std::size_t>(holeNode(hole))];
 }
 
 bool Connectivity::joinsNext(Hole hole) const {
-    if (!board_->contains(hole) || hole.col + 1 >= board_->cols) return false;
-    return !breakAfter_[static_cast<std::size_t>(hole.row * board_->cols + hole.col)];
+    return board_->contains(hole) && hole.col + 1 < board_->cols &&
+           !breakAfter_[static_cast<std::size_t>(holeNode(hole))];
 }
 
 Island Connectivity::island(int id) const {

@@ -45,6 +45,8 @@ public:
     bool joinsNext(Hole hole) const;
 
 private:
+    int holeNode(Hole hole) const;  // -1 outside the board
+
     const Board* board_;
     std::vector<int> islandOfNode_;
     std::vector<char> breakAfter_;  // by hole: no copper to the next hole along the strip
