@@ -82,19 +82,11 @@ private:
 // pins. Such a neighbour could be turned round, but still says which nets meet in an island.
 class EitherWayCounts {
 public:
-    EitherWayCounts(const std::vector<MatchedPart>& parts, const std::vector<Freedom>& freedom) {
-        for (std::size_t p = 0; p < parts.size(); ++p) {
-            if (freedom[p] != Freedom::EndForEnd) continue;
-            for (const MatchedPin& at : parts[p].pins) {
-                for (const MatchedPin& of : parts[p].pins) {
-                    if (of.net >= 0 && at.island >= 0) keys_.emplace_back(at.island, of.net);
-                }
-            }
-        }
-        std::sort(keys_.begin(), keys_.end());
-    }
+    EitherWayCounts(const std::vector<MatchedPart>& parts, const std::vector<Freedom>& freedom)
+        : parts_(parts), freedom_(freedom) {}
 
-    int score(const MatchedPart& part) const {
+    int score(const MatchedPart& part) {
+        if (!built_) build();
         int total = 0;
         for (const MatchedPin& pin : part.pins) {
             const auto [first, last] =
@@ -105,6 +97,23 @@ public:
     }
 
 private:
+    // On the first tie, not before: most boards have none.
+    void build() {
+        built_ = true;
+        for (std::size_t p = 0; p < parts_.size(); ++p) {
+            if (freedom_[p] != Freedom::EndForEnd) continue;
+            for (const MatchedPin& at : parts_[p].pins) {
+                for (const MatchedPin& of : parts_[p].pins) {
+                    if (of.net >= 0 && at.island >= 0) keys_.emplace_back(at.island, of.net);
+                }
+            }
+        }
+        std::sort(keys_.begin(), keys_.end());
+    }
+
+    const std::vector<MatchedPart>& parts_;
+    const std::vector<Freedom>& freedom_;
+    bool built_ = false;
     // (island, net), sorted: a count is the length of a run of equal keys.
     std::vector<std::pair<int, int>> keys_;
 };
@@ -122,7 +131,7 @@ std::string partLabel(const MatchedPart& part) {
 // Returns whether the part was turned round. A tie is broken by the end-for-end parts counted
 // either way round: a neighbour that could be turned still says which nets meet in an island (the
 // part's own counts are the same both ways round). A full tie keeps the part as written.
-bool chooseEndForEnd(MatchedPart& part, NetCounts& counts, const EitherWayCounts& eitherWay) {
+bool chooseEndForEnd(MatchedPart& part, NetCounts& counts, EitherWayCounts& eitherWay) {
     counts.add(part, -1);
     const int placed = counts.score(part);
     part.swapPins(0, 1);
@@ -222,7 +231,7 @@ void orientParts(const CheckedBoard& checked, CircuitMatch& match) {
     if (std::all_of(freedom.begin(), freedom.end(), [](Freedom f) { return f == Freedom::Fixed; }))
         return;
     NetCounts counts(parts, checked.copper().islandCount(), match.nets.size());
-    const EitherWayCounts eitherWay(parts, freedom);
+    EitherWayCounts eitherWay(parts, freedom);
     // Two rounds, so a part flipped in the first round is seen by its neighbours in the second.
     bool flipped = true;
     for (int round = 0; round < 2 && flipped; ++round) {
