@@ -47,20 +47,6 @@ std::string CheckedBoard::leadNames(int hole) const {
     return names;
 }
 
-std::vector<std::pair<int, int>> CheckedBoard::jumpers() const {
-    std::vector<std::pair<int, int>> edges;
-    auto add = [&](int a, int b) {
-        if (a >= 0 && b >= 0) edges.emplace_back(a, b);
-    };
-    for (const Link& link : board_->links) {
-        add(copper_.endpointNode(Endpoint::atHole(link.from)),
-            copper_.endpointNode(Endpoint::atHole(link.to)));
-    }
-    for (const Wire& wire : board_->wires)
-        add(copper_.endpointNode(wire.from), copper_.endpointNode(wire.to));
-    return edges;
-}
-
 std::string CheckedBoard::nodeName(int node) const {
     if (isHoleNode(node)) return holeName(holeAt(node));
     int lug = board_->holeCount();

@@ -49,8 +49,6 @@ public:
     int holeIndex(Hole hole) const { return hole.row * board_->cols + hole.col; }
     Hole holeAt(int index) const { return Hole{index / board_->cols, index % board_->cols}; }
     bool isHoleNode(int node) const { return node >= 0 && node < board_->holeCount(); }
-    /// Every link and wire as a pair of nodes (ends that name nothing are left out).
-    std::vector<std::pair<int, int>> jumpers() const;
 
     /// "D7" for a hole node, "VR1.2" for a lug node.
     std::string nodeName(int node) const;
