@@ -23,8 +23,8 @@ using PinsAt = std::multimap<int, PinAt>;
 
 // Nodes from a pin of the first net to the nearest pin of another net, both ends included.
 std::vector<int> shortestPath(const CheckedBoard& checked, const PinsAt& pinsAt) {
-    std::multimap<int, int>
-        jumpers;  // the nodes each link and wire joins, both ways, in board order
+    // The nodes each link and wire joins, both ways, in board order.
+    std::multimap<int, int> jumpers;
     auto join = [&](const Endpoint& from, const Endpoint& to) {
         const int a = checked.copper().endpointNode(from);
         const int b = checked.copper().endpointNode(to);
