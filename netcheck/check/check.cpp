@@ -15,13 +15,15 @@
 //   as text (value-differs, a warning). An empty value in the circuit is don't-care.
 // - Orientation: non-polarised two-pin parts of a known kind may sit end for end. Each gets the
 //   orientation whose pins agree best with the copper (the number of pins of other parts in the
-//   same island and the same intended net); a tie keeps the part as written. Two rounds, so
+//   same island and the same intended net). A tie between two different nets is broken by the
+//   other end-for-end parts counted under both of their nets (they could be turned too, but still
+//   say which nets meet in an island); a full tie keeps the part as written. Two rounds, so
 //   neighbouring flipped parts settle. Pots and trimmers whose lugs 1 and 3 agree better swapped,
 //   with the wiper agreeing as placed, are taken as swapped and get a pot-reversed warning (the
 //   control works backwards but nothing is shorted). A pin whose hole lies outside the board
 //   (only a board made in code can have one: the file reader refuses it) joins nothing and is
-//   left out of the nets. Polarised parts keep their pin names; if the
-//   other way round (two pins) or another order (three-pin transistors and regulators) would agree
+//   left out of the nets. Polarised parts keep their pin names; if the other way round (two
+//   pins) or another order (three-pin transistors and regulators) would agree
 //   clearly better - at least two joins and more than twice as many - one reversed-part error
 //   says so, beside the shorts and opens the reversal causes.
 // - Pins of circuit parts that no net lists are don't-care.
