@@ -13,7 +13,10 @@
 #include <string>
 #include <vector>
 
+#include <doctest/doctest.h>
+
 #include "netcheck/check/check.hpp"
+#include "netcheck/file/board_file.hpp"
 #include "netcheck/model/board.hpp"
 #include "netcheck/model/part_kinds.hpp"
 #include "netcheck/repair/finding_fixes.hpp"
@@ -32,7 +35,6 @@ inline std::string sourcePath(const std::string& relative) {
     return root + "/" + relative;
 }
 
-/// The whole file as bytes; throws when it cannot be read.
 /// The check with each short's and open's own fix found, as the reports give them.
 inline netcheck::CheckReport checkWithFixes(const netcheck::Board& board,
                                             const netcheck::Circuit* circuit = nullptr) {
@@ -41,12 +43,20 @@ inline netcheck::CheckReport checkWithFixes(const netcheck::Board& board,
     return report;
 }
 
+/// The whole file as bytes; throws when it cannot be read.
 inline std::string readTextFile(const std::string& path) {
     std::ifstream in(path, std::ios::binary);
     if (!in) throw std::runtime_error("cannot read " + path);
     std::ostringstream text;
     text << in.rdbuf();
     return text.str();
+}
+
+/// A board file that must read (a sample, or one a test wrote).
+inline netcheck::Board readSample(const std::string& path) {
+    auto read = netcheck::readBoard(readTextFile(path), path);
+    REQUIRE(read.ok());
+    return *read.value;
 }
 
 /// Files in a source-tree folder whose names end with `suffix`, sorted; empty if no folder.

@@ -17,16 +17,12 @@
 
 namespace {
 
+using test_support::readSample;
+
 using netcheck::Board;
 using netcheck::Circuit;
 using netcheck::Hole;
 using netcheck::PinRef;
-
-Board readSample(const std::string& path) {
-    auto read = netcheck::readBoard(test_support::readTextFile(path), path);
-    REQUIRE(read.ok());
-    return *read.value;
-}
 
 std::string errors(const Board& board) {
     std::string text;

@@ -16,17 +16,13 @@
 
 namespace {
 
+using test_support::readSample;
+
 using netcheck::Board;
 using netcheck::Circuit;
 using netcheck::CircuitPart;
 using netcheck::FindingType;
 using netcheck::PinRef;
-
-Board readSample(const std::string& path) {
-    auto read = netcheck::readBoard(test_support::readTextFile(path), path);
-    REQUIRE(read.ok());
-    return *read.value;
-}
 
 // The check's verdict in one line per finding that the engine must never cause.
 std::string faults(const Board& board) {

@@ -100,9 +100,7 @@ TEST_CASE("canvas labels: no overlaps on any sample") {
     REQUIRE(files.size() >= 10);
     int total = 0, labelsSeen = 0;
     for (const std::string& file : files) {
-        auto read = netcheck::readBoard(test_support::readTextFile(file), file);
-        REQUIRE(read.ok());
-        const netcheck::Board& board = *read.value;
+        const netcheck::Board board = test_support::readSample(file);
         Overlaps sum;
         for (float holePx : {16.0f, 24.0f, 40.0f, 64.0f}) {
             for (bool mirrored : {false, true}) {

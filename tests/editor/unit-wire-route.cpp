@@ -17,6 +17,8 @@ using namespace stripsmith;
 
 namespace {
 
+using test_support::readSample;
+
 // A lug is drawn 0.28 pitch round, a lead end 0.17, a chip's pin 0.2 square: a wire nearer
 // than this to one looks joined to it.
 constexpr float kLugClear = 0.35f;
@@ -112,12 +114,6 @@ void checkWire(const netcheck::Board& board, const std::vector<OffboardSpot>& sp
     float inside = 0;
     for (std::size_t i = 1; i < path.size(); ++i) inside += lengthInside(path[i - 1], path[i], w, h);
     problems.backOverBoard += inside > allowed + 1e-3f;
-}
-
-netcheck::Board readSample(const std::string& file) {
-    auto read = netcheck::readBoard(test_support::readTextFile(file), file);
-    REQUIRE(read.ok());
-    return *read.value;
 }
 
 }  // namespace

@@ -124,9 +124,7 @@ TEST_CASE("sheet labels: no overlaps on any sample's sheet") {
     REQUIRE(files.size() >= 10);
     int total = 0, labelsSeen = 0;
     for (const std::string& file : files) {
-        auto read = netcheck::readBoard(test_support::readTextFile(file), file);
-        REQUIRE(read.ok());
-        const Board& board = *read.value;
+        const Board board = test_support::readSample(file);
         const auto component = sheet::componentSideLabels(scrap.cr, board, kPitchMm);
         const auto copper = sheet::copperSideLabels(scrap.cr, board, board.cuts, kPitchMm);
         const Overlaps top = countOverlaps(board, printedBoxes(scrap.cr, component));
