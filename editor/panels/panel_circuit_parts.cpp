@@ -6,6 +6,7 @@
 
 #include "editor/panels/circuit_views.hpp"
 #include "netcheck/model/part_kinds.hpp"
+#include "netcheck/model/wording.hpp"
 
 namespace stripsmith {
 namespace {
@@ -18,12 +19,6 @@ std::vector<std::string> splitPins(const std::string& text) {
         if (!pin.empty()) pins.push_back(pin);
     }
     return pins;
-}
-
-std::string joinPins(const std::vector<std::string>& pins) {
-    std::string text;
-    for (const auto& pin : pins) text += (text.empty() ? "" : " ") + pin;
-    return text;
 }
 
 std::string usualPins(const netcheck::PartKind& kind) {
@@ -158,7 +153,7 @@ void drawCircuitParts(const CircuitPanelContext& c, const netcheck::Circuit& cir
             s.editRef = ref;
             s.editKind = part.kind;
             s.editValue = part.value;
-            s.editPins = joinPins(part.pins);
+            s.editPins = netcheck::joined(part.pins, " ");
         }
         ImGui::SameLine();
         if (ImGui::SmallButton("Remove"))

@@ -2,15 +2,11 @@
 
 #include "sheet_text.hpp"
 
+#include "netcheck/model/wording.hpp"
+
 namespace sheet {
 
-namespace {
-
-std::string plural(std::size_t count, const char* word) {
-    return std::to_string(count) + " " + word + (count == 1 ? "" : "s");
-}
-
-}  // namespace
+using netcheck::plural;
 
 CheckBanner checkBanner(const netcheck::CheckReport& report) {
     if (!report.ok()) {

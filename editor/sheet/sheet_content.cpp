@@ -11,6 +11,7 @@
 #include "netcheck/model/colour_code.hpp"
 #include "netcheck/model/part_kinds.hpp"
 #include "netcheck/model/value.hpp"
+#include "netcheck/model/wording.hpp"
 
 namespace sheet {
 
@@ -18,12 +19,6 @@ using netcheck::Board;
 using netcheck::Cut;
 
 namespace {
-
-std::string join(const std::vector<std::string>& items, const std::string& separator) {
-    std::string out;
-    for (const std::string& item : items) out += (out.empty() ? "" : separator) + item;
-    return out;
-}
 
 std::string kindLabel(const std::string& kind) {
     const netcheck::PartKind* known = netcheck::findPartKind(kind);
@@ -64,7 +59,7 @@ std::string partNotes(const std::string& kind, const std::string& value,
     std::string note = extraText(extra, "note");
     if (!note.empty()) notes.push_back(note);
     if (offboard) notes.push_back("off-board");
-    return join(notes, "; ");
+    return netcheck::joined(notes, "; ");
 }
 
 /// Kinds in the order the BOM lists them (the kinds table order), unknown kinds last.
@@ -131,7 +126,7 @@ std::string colourBandsText(const std::string& value, double tolerancePercent) {
     if (!bands) return {};
     std::vector<std::string> names;
     for (netcheck::BandColour band : *bands) names.emplace_back(netcheck::bandName(band));
-    return join(names, " ");
+    return netcheck::joined(names, " ");
 }
 
 std::vector<BomLine> billOfMaterials(const Board& board) {
@@ -183,7 +178,7 @@ std::vector<WiringLine> wiringList(const Board& board) {
         }
         lines.push_back({wire.from.name(), wire.to.name(),
                          wire.color.empty() ? std::string("(not given)") : wire.color,
-                         join(notes, "; ")});
+                         netcheck::joined(notes, "; ")});
     }
     return lines;
 }

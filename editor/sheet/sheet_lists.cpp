@@ -8,6 +8,8 @@
 #include "sheet_content.hpp"
 #include "sheet_table.hpp"
 
+#include "netcheck/model/wording.hpp"
+
 namespace sheet {
 
 namespace {
@@ -15,15 +17,6 @@ namespace {
 using netcheck::Board;
 using netcheck::Cut;
 
-std::string joined(const std::vector<std::string>& items) {
-    std::string out;
-    for (const std::string& item : items) out += (out.empty() ? "" : ", ") + item;
-    return out;
-}
-
-std::string count(std::size_t n, const char* word) {
-    return std::to_string(n) + " " + word + (n == 1 ? "" : "s");
-}
 
 std::string millimetres(double mm) {
     char text[32];
@@ -59,11 +52,11 @@ void drawBoardFacts(PageFlow& flow, const Board& board) {
     char pitch[32];
     std::snprintf(pitch, sizeof pitch, "%.2f", board.pitchMm);
     drawParagraph(flow, "Size: " + boardSizeText(board) + ", pitch " + pitch + " mm; " + copper +
-                            ". " + count(board.parts.size(), "part") + " on the board, " +
+                            ". " + netcheck::plural(board.parts.size(), "part") + " on the board, " +
                             std::to_string(board.offboard.size()) + " off the board, " +
-                            count(board.cuts.size(), "cut") + ", " +
-                            count(board.links.size(), "link") + ", " +
-                            count(board.wires.size(), "wire") + ".");
+                            netcheck::plural(board.cuts.size(), "cut") + ", " +
+                            netcheck::plural(board.links.size(), "link") + ", " +
+                            netcheck::plural(board.wires.size(), "wire") + ".");
 }
 
 void drawAssembly(PageFlow& flow, const Board& board) {
@@ -71,7 +64,7 @@ void drawAssembly(PageFlow& flow, const Board& board) {
     Table table{{{"step"}, {"what to do", 3}, {"parts", 2}}, {}, true};
     int step = 1;
     for (const AssemblyStep& item : assemblyOrder(board)) {
-        table.rows.push_back({std::to_string(step++), item.text, joined(item.refs)});
+        table.rows.push_back({std::to_string(step++), item.text, netcheck::joined(item.refs)});
     }
     drawTable(flow, table);
 }
@@ -82,7 +75,7 @@ void drawBom(PageFlow& flow, const Board& board) {
         {{"qty", 0, Align::Right}, {"refs", 1}, {"value"}, {"kind"}, {"notes", 2}}, {}, true};
     for (const BomLine& line : billOfMaterials(board)) {
         table.rows.push_back(
-            {std::to_string(line.quantity), joined(line.refs), line.value, line.label, line.notes});
+            {std::to_string(line.quantity), netcheck::joined(line.refs), line.value, line.label, line.notes});
     }
     if (table.rows.empty()) {
         drawParagraph(flow, "No parts.");

@@ -92,35 +92,6 @@ void findOpens(const CheckedBoard& checked, const std::vector<Net>& nets, bool l
     }
 }
 
-// Islands that hold at least one pin or lug, in id order, with their holes and pins.
-std::vector<Island> pinIslands(const CheckedBoard& checked) {
-    const Board& board = checked.board();
-    const Connectivity& copper = checked.copper();
-    std::vector<Island> islands(static_cast<std::size_t>(copper.islandCount()));
-    auto islandOf = [&](int node) -> Island& {
-        return islands[static_cast<std::size_t>(copper.islandOfNode(node))];
-    };
-    for (const Part& part : board.parts) {
-        for (const Pin& pin : part.pins) {
-            if (board.contains(pin.hole))
-                islandOf(checked.holeIndex(pin.hole)).pins.push_back({part.ref, pin.name});
-        }
-    }
-    int node = board.holeCount();
-    for (const OffboardPart& part : board.offboard) {
-        for (const std::string& lug : part.pins) islandOf(node++).pins.push_back({part.ref, lug});
-    }
-    for (int hole = 0; hole < board.holeCount(); ++hole) {
-        if (!islandOf(hole).pins.empty()) islandOf(hole).holes.push_back(checked.holeAt(hole));
-    }
-    for (std::size_t id = 0; id < islands.size(); ++id) {
-        islands[id].id = static_cast<int>(id);
-        std::sort(islands[id].pins.begin(), islands[id].pins.end());
-    }
-    std::erase_if(islands, [](const Island& island) { return island.pins.empty(); });
-    return islands;
-}
-
 CheckReport checkBoard(const CheckedBoard& checked, const Circuit* circuit,
                        const CheckOptions& options) {
     if (circuit == nullptr && checked.board().circuit) circuit = &*checked.board().circuit;
@@ -140,7 +111,10 @@ CheckReport checkBoard(const CheckedBoard& checked, const Circuit* circuit,
     findBareLinkContacts(checked, report.warnings);
     findTrim(checked, report.warnings);
     // With a circuit the findings say everything; the island list is the report of a board alone.
-    if (circuit == nullptr) report.islands = pinIslands(checked);
+    if (circuit == nullptr) {
+        report.islands = checked.copper().islands();
+        std::erase_if(report.islands, [](const Island& island) { return island.pins.empty(); });
+    }
     return report;
 }
 

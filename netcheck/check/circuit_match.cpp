@@ -8,6 +8,7 @@
 
 #include "netcheck/model/part_kinds.hpp"
 #include "netcheck/model/value.hpp"
+#include "netcheck/model/wording.hpp"
 
 namespace netcheck {
 
@@ -39,12 +40,6 @@ Finding MatchedPart::finding(FindingType type, std::string message) const {
 
 namespace {
 
-std::string joinNames(const std::vector<std::string>& names) {
-    std::string text;
-    for (const std::string& name : names) text += (text.empty() ? "" : ", ") + name;
-    return text;
-}
-
 std::vector<std::string> pinNames(std::span<const MatchedPin> pins) {
     std::vector<std::string> names;
     for (const MatchedPin& pin : pins) names.emplace_back(pin.name);
@@ -64,7 +59,7 @@ bool samePinNames(std::vector<std::string> declared, const MatchedPart& part) {
 Finding placedPartFinding(FindingType type, const MatchedPart& part, const std::string& message) {
     std::vector<std::string> places;
     for (std::size_t k = 0; k < part.pins.size(); ++k) places.push_back(part.place(k));
-    return part.finding(type, message + (places.empty() ? "" : " (at " + joinNames(places) + ")"));
+    return part.finding(type, message + (places.empty() ? "" : " (at " + joined(places) + ")"));
 }
 
 // The ref's part as placed: its pins, appended to `pins`, with their nodes and islands, no net yet.
@@ -188,7 +183,7 @@ private:
             }
             extra.push_back(Finding::of(FindingType::ExtraPart,
                                         part.ref + " (" + part.kind + ") is on the board (at " +
-                                            joinNames(names) + ") but not in the circuit",
+                                            joined(names) + ") but not in the circuit",
                                         std::move(holes)));
             extra.back().ref = part.ref;
         }
@@ -210,12 +205,12 @@ private:
         if (!part.unknownPins.empty()) {
             problem = "the circuit uses pin" +
                       std::string(part.unknownPins.size() > 1 ? "s " : " ") +
-                      joinNames(part.unknownPins);
+                      joined(part.unknownPins);
         } else if (part.declared && !samePinNames(part.declared->pins, part)) {
-            problem = "the circuit declares pins " + joinNames(part.declared->pins);
+            problem = "the circuit declares pins " + joined(part.declared->pins);
         }
         if (problem.empty()) return;
-        problem += ", but the board part has " + joinNames(pinNames(part.pins));
+        problem += ", but the board part has " + joined(pinNames(part.pins));
         match_.errors.push_back(placedPartFinding(FindingType::PinMismatch, part,
                                                   std::string(part.ref) + ": " + problem));
     }

@@ -69,7 +69,8 @@ struct Net {
 /// The pins of all parts, and of all nets, each lie in one array (two allocations for a whole
 /// board rather than one per part and per net: on the editor's board that halves the time of a
 /// check); parts and nets hold their stretch of it. Moving a match keeps the stretches valid,
-/// copying would not. Names point into the board and the circuit, which must outlive the match.
+/// copying would not (so the move operations are declared: that leaves it without a copy). Names
+/// point into the board and the circuit, which must outlive the match.
 struct CircuitMatch {
     std::vector<MatchedPart> parts;  ///< every ref the circuit names, by ref
     std::vector<Net> nets;           ///< in the circuit's order (by name)
@@ -81,8 +82,6 @@ struct CircuitMatch {
     CircuitMatch() = default;
     CircuitMatch(CircuitMatch&&) = default;
     CircuitMatch& operator=(CircuitMatch&&) = default;
-    CircuitMatch(const CircuitMatch&) = delete;
-    CircuitMatch& operator=(const CircuitMatch&) = delete;
 };
 
 /// The pins of a net that lie in one island.

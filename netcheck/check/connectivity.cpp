@@ -106,20 +106,37 @@ bool Connectivity::joinsNext(Hole hole) const {
 Island Connectivity::island(int id) const {
     Island result;
     result.id = id;
-    if (id < 0 || id >= islandCount_) return result;
-    for (int i = 0; i < board_->holeCount(); ++i) {
-        if (islandOfNode(i) == id) result.holes.push_back(Hole{i / board_->cols, i % board_->cols});
+    gather([&](int of) { return of == id ? &result : nullptr; });
+    std::sort(result.pins.begin(), result.pins.end());
+    return result;
+}
+
+std::vector<Island> Connectivity::islands() const {
+    std::vector<Island> all(static_cast<std::size_t>(islandCount_));
+    for (int id = 0; id < islandCount_; ++id) all[static_cast<std::size_t>(id)].id = id;
+    gather([&](int id) { return &all[static_cast<std::size_t>(id)]; });
+    for (Island& island : all) std::sort(island.pins.begin(), island.pins.end());
+    return all;
+}
+
+void Connectivity::gather(const std::function<Island*(int)>& into) const {
+    auto at = [&](int node) {
+        const int id = islandOfNode(node);
+        return id < 0 ? nullptr : into(id);
+    };
+    for (int node = 0; node < board_->holeCount(); ++node) {
+        if (Island* island = at(node))
+            island->holes.push_back(Hole{node / board_->cols, node % board_->cols});
     }
     for (const Part& part : board_->parts) {
         for (const Pin& pin : part.pins) {
-            if (islandOfHole(pin.hole) == id) result.pins.push_back(PinRef{part.ref, pin.name});
+            if (Island* island = at(holeNode(pin.hole)))
+                island->pins.push_back(PinRef{part.ref, pin.name});
         }
     }
     for (const auto& [lug, node] : lugNodes_) {
-        if (islandOfNode(node) == id) result.pins.push_back(lug);
+        if (Island* island = at(node)) island->pins.push_back(lug);
     }
-    std::sort(result.pins.begin(), result.pins.end());
-    return result;
 }
 
 }  // namespace netcheck

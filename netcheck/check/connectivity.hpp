@@ -1,6 +1,7 @@
 // Tracing the copper: which holes and pins are joined by strips, links and wires.
 #pragma once
 
+#include <functional>
 #include <map>
 #include <vector>
 
@@ -39,6 +40,8 @@ public:
     /// Holes and pins of island `id` (empty when out of range), gathered on demand: a viewer asks
     /// for the one island under the pointer, not for every island on each edit.
     Island island(int id) const;
+    /// Every island, by id, with its holes and pins.
+    std::vector<Island> islands() const;
     /// True when a hole cut removed this hole's copper.
     bool isHoleCut(Hole hole) const;
     /// True when copper joins `hole` with the next hole along its strip (column + 1).
@@ -46,6 +49,8 @@ public:
 
 private:
     int holeNode(Hole hole) const;  // -1 outside the board
+    // Adds every hole, pin and lug to the island into(its island id) gives, if any.
+    void gather(const std::function<Island*(int)>& into) const;
 
     const Board* board_;
     std::vector<int> islandOfNode_;

@@ -10,14 +10,11 @@
 #include <unordered_map>
 
 #include "netcheck/model/printable.hpp"
+#include "netcheck/model/wording.hpp"
 
 namespace netcheck {
 
 namespace {
-
-std::string plural(std::size_t count, const char* word) {
-    return std::to_string(count) + " " + word + (count == 1 ? "" : "s");
-}
 
 std::string findingLine(const Finding& finding) {
     std::string line = (finding.severity() == Severity::Error ? "error " : "warning ") +

@@ -4,6 +4,7 @@
 
 #include "netcheck/check/detail/finders.hpp"
 #include "netcheck/model/board_size.hpp"
+#include "netcheck/model/wording.hpp"
 
 namespace netcheck {
 
@@ -15,10 +16,6 @@ Finding holeFinding(FindingType type, Hole hole, std::string message) {
     return finding;
 }
 
-std::string plural(int count, const std::string& word) {
-    return std::to_string(count) + " " + word + (count == 1 ? "" : "s");
-}
-
 }  // namespace
 
 void findSharedHoles(const CheckedBoard& checked, std::vector<Finding>& errors) {
@@ -28,7 +25,7 @@ void findSharedHoles(const CheckedBoard& checked, std::vector<Finding>& errors) 
         const Hole hole = checked.holeAt(lead.hole);
         errors.push_back(holeFinding(FindingType::SharedHole, hole,
                                      holeName(hole) + " holds " +
-                                         plural(static_cast<int>(here.size()), "lead") + ": " +
+                                         plural(here.size(), "lead") + ": " +
                                          checked.leadNames(lead.hole)));
     }
 }
@@ -91,7 +88,7 @@ void findTrim(const CheckedBoard& checked, std::vector<Finding>& warnings) {
     for (int i = 0, listed = 0; i < 4; ++i) {
         if (spare[i] == 0) continue;
         if (listed > 0) text += listed + 1 == sides ? " and " : ", ";
-        text += plural(spare[i], what[i]) + where[i];
+        text += plural(static_cast<std::size_t>(spare[i]), what[i]) + where[i];
         ++listed;
     }
     const int rows = last.row - first.row + 1;

@@ -136,13 +136,11 @@ std::string leadsPassedOver(const CheckedBoard& checked, const std::vector<Hole>
     return text;
 }
 
-// link-over-lead warnings, in link order. Most links join neighbouring holes and pass over nothing.
+// link-over-lead warnings, in link order.
 void findLinksOverLeads(const CheckedBoard& checked, const std::vector<int>& bare, double reach,
                         std::vector<Finding>& warnings) {
     for (int l : bare) {
         const Link& link = checked.board().links[static_cast<std::size_t>(l)];
-        if (std::abs(link.to.row - link.from.row) < 2 && std::abs(link.to.col - link.from.col) < 2)
-            continue;
         std::vector<Hole> under;
         forEachHoleNear(link, reach, false, [&](Hole h) {
             if (checked.holdsLead(checked.holeIndex(h))) under.push_back(h);

@@ -3,7 +3,9 @@
 // intended net: the way round that agrees best with the rest of the board is the one meant.
 #include <algorithm>
 #include <array>
+#include <functional>
 #include <map>
+#include <optional>
 
 #include "netcheck/check/circuit_match.hpp"
 #include "netcheck/model/part_kinds.hpp"
@@ -35,10 +37,8 @@ Freedom freedomOf(const MatchedPart& part) {
 // a plain array by island; only where nets meet (a short) do counts go to a map.
 class NetCounts {
 public:
-    NetCounts(const std::vector<MatchedPart>& parts, int islands, std::size_t nets)
-        : first_(static_cast<std::size_t>(islands)), total_(nets, 0) {
-        for (const MatchedPart& part : parts) add(part, +1);
-    }
+    NetCounts(int islands, std::size_t nets)
+        : first_(static_cast<std::size_t>(islands)), total_(nets, 0) {}
 
     void add(const MatchedPart& part, int delta) {
         for (const MatchedPin& pin : part.pins) {
@@ -78,46 +78,6 @@ private:
     std::vector<int> total_;                     // by net
 };
 
-// The end-for-end parts counted either way round: each pin under the nets of both of its part's
-// pins. Such a neighbour could be turned round, but still says which nets meet in an island.
-class EitherWayCounts {
-public:
-    EitherWayCounts(const std::vector<MatchedPart>& parts, const std::vector<Freedom>& freedom)
-        : parts_(parts), freedom_(freedom) {}
-
-    int score(const MatchedPart& part) {
-        if (!built_) build();
-        int total = 0;
-        for (const MatchedPin& pin : part.pins) {
-            const auto [first, last] =
-                std::equal_range(keys_.begin(), keys_.end(), std::pair{pin.island, pin.net});
-            total += static_cast<int>(last - first);
-        }
-        return total;
-    }
-
-private:
-    // On the first tie, not before: most boards have none.
-    void build() {
-        built_ = true;
-        for (std::size_t p = 0; p < parts_.size(); ++p) {
-            if (freedom_[p] != Freedom::EndForEnd) continue;
-            for (const MatchedPin& at : parts_[p].pins) {
-                for (const MatchedPin& of : parts_[p].pins) {
-                    if (of.net >= 0 && at.island >= 0) keys_.emplace_back(at.island, of.net);
-                }
-            }
-        }
-        std::sort(keys_.begin(), keys_.end());
-    }
-
-    const std::vector<MatchedPart>& parts_;
-    const std::vector<Freedom>& freedom_;
-    bool built_ = false;
-    // (island, net), sorted: a count is the length of a run of equal keys.
-    std::vector<std::pair<int, int>> keys_;
-};
-
 // "Clearly better": the other way round explains at least two joins and more than twice as many
 // as the placement does.
 bool clearlyBetter(int other, int placed) {
@@ -128,19 +88,21 @@ std::string partLabel(const MatchedPart& part) {
     return std::string(part.ref) + " (" + part.kind() + ")";
 }
 
-// Returns whether the part was turned round. A tie is broken by the end-for-end parts counted
-// either way round: a neighbour that could be turned still says which nets meet in an island (the
-// part's own counts are the same both ways round). A full tie keeps the part as written.
-bool chooseEndForEnd(MatchedPart& part, NetCounts& counts, EitherWayCounts& eitherWay) {
+// Returns whether the part was turned round. A tie is broken by `eitherWay()`: the end-for-end
+// parts counted either way round (a neighbour that could be turned still says which nets meet in
+// an island; the part's own counts are the same both ways round). A full tie keeps the part as
+// written.
+bool chooseEndForEnd(MatchedPart& part, NetCounts& counts,
+                     const std::function<const NetCounts&()>& eitherWay) {
     counts.add(part, -1);
     const int placed = counts.score(part);
     part.swapPins(0, 1);
     const int swapped = counts.score(part);
     bool better = swapped > placed;
     if (swapped == placed && part.pins[0].net != part.pins[1].net) {
-        const int swappedEitherWay = eitherWay.score(part);
+        const int swappedEitherWay = eitherWay().score(part);
         part.swapPins(0, 1);
-        better = swappedEitherWay > eitherWay.score(part);
+        better = swappedEitherWay > eitherWay().score(part);
         part.swapPins(0, 1);
     }
     if (!better) part.swapPins(0, 1);
@@ -230,15 +192,30 @@ void orientParts(const CheckedBoard& checked, CircuitMatch& match) {
     for (const MatchedPart& part : parts) freedom.push_back(freedomOf(part));
     if (std::all_of(freedom.begin(), freedom.end(), [](Freedom f) { return f == Freedom::Fixed; }))
         return;
-    NetCounts counts(parts, checked.copper().islandCount(), match.nets.size());
-    EitherWayCounts eitherWay(parts, freedom);
+    const int islands = checked.copper().islandCount();
+    NetCounts counts(islands, match.nets.size());
+    for (const MatchedPart& part : parts) counts.add(part, +1);
+    // The tie-break counts, built on the first tie (most boards have none): each end-for-end part
+    // added as placed and turned round.
+    std::optional<NetCounts> eitherWay;
+    auto eitherWayCounts = [&]() -> const NetCounts& {
+        if (eitherWay) return *eitherWay;
+        eitherWay.emplace(islands, match.nets.size());
+        for (std::size_t p = 0; p < parts.size(); ++p) {
+            for (int turn = 0; turn < 2 && freedom[p] == Freedom::EndForEnd; ++turn) {
+                eitherWay->add(parts[p], +1);
+                parts[p].swapPins(0, 1);
+            }
+        }
+        return *eitherWay;
+    };
     // Two rounds, so a part flipped in the first round is seen by its neighbours in the second.
     bool flipped = true;
     for (int round = 0; round < 2 && flipped; ++round) {
         flipped = false;
         for (std::size_t p = 0; p < parts.size(); ++p) {
             if (freedom[p] == Freedom::EndForEnd)
-                flipped = chooseEndForEnd(parts[p], counts, eitherWay) || flipped;
+                flipped = chooseEndForEnd(parts[p], counts, eitherWayCounts) || flipped;
         }
     }
     for (std::size_t p = 0; p < parts.size(); ++p) {

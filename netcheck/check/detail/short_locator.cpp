@@ -10,6 +10,8 @@
 #include <set>
 #include <unordered_map>
 
+#include "netcheck/model/wording.hpp"
+
 namespace netcheck {
 
 namespace {
@@ -112,8 +114,7 @@ Finding locateShort(const CheckedBoard& checked, int island, const std::vector<c
         if (checked.isHoleNode(node)) finding.path.push_back(checked.holeAt(node));
     }
     finding.holes = finding.path;
-    std::string names;
-    for (const std::string& name : finding.nets) names += (names.empty() ? "" : ", ") + name;
+    const std::string names = joined(finding.nets);
     if (path.empty()) {
         finding.message = names + " share one island";
         return finding;
