@@ -50,13 +50,12 @@ Connectivity::Connectivity(const Board& board) : board_(&board) {
         join(Endpoint::atHole(link.from), Endpoint::atHole(link.to));
     for (const Wire& wire : board.wires) join(wire.from, wire.to);
 
-    // A set's root is its smallest segment, so numbering roots in segment order numbers the
-    // islands in order of their first node.
-    std::vector<int> islandOfSegment(static_cast<std::size_t>(segments));
+    // Islands are numbered in order of their first segment, so in order of their first node.
+    std::vector<int> islandOfSegment(static_cast<std::size_t>(segments), -1);
     for (int s = 0; s < segments; ++s) {
-        const int root = sets.find(s);
-        islandOfSegment[static_cast<std::size_t>(s)] =
-            root == s ? islandCount_++ : islandOfSegment[static_cast<std::size_t>(root)];
+        int& island = islandOfSegment[static_cast<std::size_t>(sets.find(s))];
+        if (island < 0) island = islandCount_++;
+        islandOfSegment[static_cast<std::size_t>(s)] = island;
     }
     islandOfNode_.resize(segmentOfNode.size());
     for (std::size_t node = 0; node < segmentOfNode.size(); ++node) {

@@ -7,6 +7,7 @@
 #include <cmath>
 #include <cstdint>
 #include <cstdlib>
+#include <optional>
 #include <utility>
 
 namespace netcheck {
@@ -56,9 +57,10 @@ void forEachHoleNear(const Link& link, double reach, bool ends, Visit visit) {
     }
 }
 
-// Whether the wires a-b and c-d cross at a point inside both: not at an end of either, and not
-// lying along each other (an end on the other wire is a lead under it, reported as such).
-bool crossInside(const Link& first, const Link& second) {
+// Where two wires cross at a point inside both: "at D3" on a hole centre, else "near D3" (the
+// nearest hole). Nothing when they do not cross, meet at an end of either or lie along each other
+// (an end on the other wire is a lead under it, reported as such).
+std::optional<std::string> crossingPlace(const Link& first, const Link& second) {
     const std::int64_t c1 = cross(first.from, first.to, second.from);
     const std::int64_t c2 = cross(first.from, first.to, second.to);
     const std::int64_t c3 = cross(second.from, second.to, first.from);
@@ -66,13 +68,7 @@ bool crossInside(const Link& first, const Link& second) {
     auto opposite = [](std::int64_t x, std::int64_t y) {
         return (x > 0 && y < 0) || (x < 0 && y > 0);
     };
-    return opposite(c1, c2) && opposite(c3, c4);
-}
-
-// Where two crossing wires meet: "at D3" when on a hole centre, else "near D3".
-std::string crossingPlace(const Link& first, const Link& second) {
-    const std::int64_t c3 = cross(second.from, second.to, first.from);
-    const std::int64_t c4 = cross(second.from, second.to, first.to);
+    if (!opposite(c1, c2) || !opposite(c3, c4)) return std::nullopt;
     const std::int64_t dr = first.to.row - first.from.row;
     const std::int64_t dc = first.to.col - first.from.col;
     const std::int64_t span = c3 - c4;  // never zero for wires that cross
@@ -165,11 +161,12 @@ void findCrossings(const Board& board, const std::vector<int>& bare,
     for (const auto& [i, j] : crossingCandidates(board, bare, complete)) {
         const Link& first = board.links[static_cast<std::size_t>(i)];
         const Link& second = board.links[static_cast<std::size_t>(j)];
-        if (!crossInside(first, second)) continue;
+        const std::optional<std::string> place = crossingPlace(first, second);
+        if (!place) continue;
         warnings.push_back(Finding::of(FindingType::LinksTouch,
                                        "Bare links " + linkName(first) + " and " +
-                                           linkName(second) + " cross " +
-                                           crossingPlace(first, second) + ": the wires would touch",
+                                           linkName(second) + " cross " + *place +
+                                           ": the wires would touch",
                                        {first.from, first.to, second.from, second.to}));
         warnings.back().fix = "sleeve one of them or route it round";
     }
@@ -188,7 +185,7 @@ bool liesClear(const CheckedBoard& checked, const Link& link) {
     forEachHoleNear(link, contactReach(board), false,
                     [&](Hole h) { clear = clear && !checked.holdsLead(checked.holeIndex(h)); });
     return clear && std::none_of(board.links.begin(), board.links.end(), [&](const Link& other) {
-               return isBare(board, other) && crossInside(link, other);
+               return isBare(board, other) && crossingPlace(link, other);
            });
 }
 

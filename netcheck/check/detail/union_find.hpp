@@ -1,9 +1,7 @@
-// Disjoint sets over 0..n-1 with path halving; each set's root is its smallest member (private to
-// the tracer, which numbers islands in order of their first segment).
+// Disjoint sets over 0..n-1 with path halving (private to the tracer).
 #pragma once
 
 #include <numeric>
-#include <utility>
 #include <vector>
 
 namespace netcheck {
@@ -16,20 +14,11 @@ public:
     }
 
     int find(int x) {
-        while (parent_[at(x)] != x) {
-            parent_[at(x)] = parent_[at(parent_[at(x)])];
-            x = parent_[at(x)];
-        }
+        while (parent_[at(x)] != x) x = parent_[at(x)] = parent_[at(parent_[at(x)])];
         return x;
     }
 
-    void unite(int a, int b) {
-        a = find(a);
-        b = find(b);
-        if (a == b) return;
-        if (b < a) std::swap(a, b);
-        parent_[at(b)] = a;
-    }
+    void unite(int a, int b) { parent_[at(find(a))] = find(b); }
 
 private:
     static std::size_t at(int x) { return static_cast<std::size_t>(x); }
