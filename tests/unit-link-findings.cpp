@@ -13,6 +13,7 @@
 
 #include "netcheck/check/check.hpp"
 #include "netcheck/check/checked_board.hpp"
+#include "netcheck/model/link_geometry.hpp"
 #include "test_support.hpp"
 
 using namespace netcheck;

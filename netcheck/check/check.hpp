@@ -28,7 +28,7 @@ CheckReport check(const Board& board, const Circuit* circuit = nullptr,
 class Checker {
 public:
     CheckReport check(const Board& board, const Circuit* circuit = nullptr,
-                  const CheckOptions& options = {});
+                      const CheckOptions& options = {});
     /// The copper of the board last checked, valid while that board stays as it was. Call only
     /// after a check.
     const Connectivity& copper() const { return *copper_; }

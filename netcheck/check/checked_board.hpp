@@ -62,12 +62,4 @@ private:
     std::vector<int> leadStart_;  // by hole, and one past the last: where its leads start
 };
 
-/// A lead touches a bare link when their centres come this close: a 0.6 mm tinned link wire and a
-/// 0.6 mm lead (typical of small parts; common practice, not a standard) meet at 0.6 mm.
-inline constexpr double kLinkContactMm = 0.6;
-
-/// Whether a new bare link would lie clear of every lead and every bare link of the board, so
-/// that a suggested fix does not make a contact of its own.
-bool liesClear(const CheckedBoard& checked, const Link& link);
-
 }  // namespace netcheck

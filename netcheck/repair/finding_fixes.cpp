@@ -11,6 +11,7 @@
 
 #include "netcheck/check/checked_board.hpp"
 #include "netcheck/check/circuit_match.hpp"
+#include "netcheck/model/link_geometry.hpp"
 
 namespace netcheck {
 
@@ -196,6 +197,18 @@ std::vector<std::vector<int>> freeHoles(const CheckedBoard& checked, const Conne
         if (it != pieceOfIsland.end() && free) holes[it->second].push_back(hole);
     }
     return holes;
+}
+
+// Whether a new bare link would lie clear of every lead and every bare link of the board, so that
+// a suggested fix does not make a contact of its own.
+bool liesClear(const CheckedBoard& checked, const Link& link) {
+    const Board& board = checked.board();
+    bool clear = true;
+    forEachHoleNear(link, contactReach(board), false,
+                    [&](Hole h) { clear = clear && !checked.holdsLead(checked.holeIndex(h)); });
+    return clear && std::none_of(board.links.begin(), board.links.end(), [&](const Link& other) {
+               return isBare(board, other) && crossingPlace(link, other);
+           });
 }
 
 struct Joint {

@@ -24,9 +24,8 @@ void findSharedHoles(const CheckedBoard& checked, std::vector<Finding>& errors) 
         if (here.size() < 2 || &here.front() != &lead) continue;
         const Hole hole = checked.holeAt(lead.hole);
         errors.push_back(holeFinding(FindingType::SharedHole, hole,
-                                     holeName(hole) + " holds " +
-                                         plural(here.size(), "lead") + ": " +
-                                         checked.leadNames(lead.hole)));
+                                     holeName(hole) + " holds " + plural(here.size(), "lead") +
+                                         ": " + checked.leadNames(lead.hole)));
     }
 }
 

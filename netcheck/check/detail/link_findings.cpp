@@ -1,83 +1,17 @@
-// Bare link contacts. Geometry is in hole coordinates (row, col), where hole centres are whole
-// numbers, so the tests that decide a crossing are exact integer arithmetic; only the "how close"
-// test for a lead uses the board's pitch.
+// Bare link contacts: leads under a bare link and bare links crossing (the geometry is in
+// model/link_geometry.hpp).
 #include "netcheck/check/detail/finders.hpp"
 
 #include <algorithm>
-#include <cmath>
-#include <cstdint>
 #include <cstdlib>
 #include <optional>
 #include <utility>
 
+#include "netcheck/model/link_geometry.hpp"
+
 namespace netcheck {
 
 namespace {
-
-bool isBare(const Board& board, const Link& link) {
-    return !link.copperSide && !link.insulated && board.contains(link.from) &&
-           board.contains(link.to);
-}
-
-// Twice the signed area of the triangle a, b, p: zero when p lies on the line through a and b.
-std::int64_t cross(Hole a, Hole b, Hole p) {
-    return std::int64_t{b.col - a.col} * (p.row - a.row) -
-           std::int64_t{b.row - a.row} * (p.col - a.col);
-}
-
-// How near (in pitches) a lead must come to a wire to touch it on this board. At most half a
-// pitch: further out a lead is nearer the next hole's line, and boards finer than 1.2 mm are not
-// stripboard.
-double contactReach(const Board& board) {
-    return std::min(kLinkContactMm / board.pitchMm, 0.5);
-}
-
-// Calls visit(hole) for every hole whose centre lies within `reach` (at most a pitch) of the wire,
-// strictly between its ends (with `ends`, at them too). Walks the longer axis: in each of its
-// columns (or rows) a hole that close lies within one hole of where the wire crosses it.
-template <typename Visit>
-void forEachHoleNear(const Link& link, double reach, bool ends, Visit visit) {
-    const Hole a = link.from;
-    const Hole b = link.to;
-    const int dr = b.row - a.row;
-    const int dc = b.col - a.col;
-    const double length2 = double{1} * dr * dr + double{1} * dc * dc;
-    const bool alongCols = std::abs(dc) >= std::abs(dr);
-    const int steps = alongCols ? std::abs(dc) : std::abs(dr);
-    const int minorSpan = alongCols ? dr : dc;
-    for (int s = ends ? 0 : 1; s <= (ends ? steps : steps - 1) && steps > 0; ++s) {
-        const int major = (alongCols ? a.col : a.row) + ((alongCols ? dc : dr) > 0 ? s : -s);
-        const double minor = (alongCols ? a.row : a.col) + double{1} * minorSpan * s / steps;
-        for (auto m = static_cast<int>(std::floor(minor)) - 1;
-             m <= static_cast<int>(std::ceil(minor)) + 1; ++m) {
-            const Hole h = alongCols ? Hole{m, major} : Hole{major, m};
-            const auto area = static_cast<double>(cross(a, b, h));
-            if (area * area < reach * reach * length2) visit(h);
-        }
-    }
-}
-
-// Where two wires cross at a point inside both: "at D3" on a hole centre, else "near D3" (the
-// nearest hole). Nothing when they do not cross, meet at an end of either or lie along each other
-// (an end on the other wire is a lead under it, reported as such).
-std::optional<std::string> crossingPlace(const Link& first, const Link& second) {
-    const std::int64_t c1 = cross(first.from, first.to, second.from);
-    const std::int64_t c2 = cross(first.from, first.to, second.to);
-    const std::int64_t c3 = cross(second.from, second.to, first.from);
-    const std::int64_t c4 = cross(second.from, second.to, first.to);
-    auto opposite = [](std::int64_t x, std::int64_t y) {
-        return (x > 0 && y < 0) || (x < 0 && y > 0);
-    };
-    if (!opposite(c1, c2) || !opposite(c3, c4)) return std::nullopt;
-    const std::int64_t dr = first.to.row - first.from.row;
-    const std::int64_t dc = first.to.col - first.from.col;
-    const std::int64_t span = c3 - c4;  // never zero for wires that cross
-    const bool onHole = (c3 * dr) % span == 0 && (c3 * dc) % span == 0;
-    const double t = static_cast<double>(c3) / static_cast<double>(span);
-    const Hole nearest{first.from.row + static_cast<int>(std::lround(t * static_cast<double>(dr))),
-                       first.from.col + static_cast<int>(std::lround(t * static_cast<double>(dc)))};
-    return (onHole ? "at " : "near ") + holeName(nearest);
-}
 
 // A board file may hold millions of links a board long, crossing at the same holes. Past these
 // bounds the contacts are left unchecked, with a warning that says so, rather than taking minutes
@@ -178,16 +112,6 @@ void findCrossings(const Board& board, const std::vector<int>& bare,
 }
 
 }  // namespace
-
-bool liesClear(const CheckedBoard& checked, const Link& link) {
-    const Board& board = checked.board();
-    bool clear = true;
-    forEachHoleNear(link, contactReach(board), false,
-                    [&](Hole h) { clear = clear && !checked.holdsLead(checked.holeIndex(h)); });
-    return clear && std::none_of(board.links.begin(), board.links.end(), [&](const Link& other) {
-               return isBare(board, other) && crossingPlace(link, other);
-           });
-}
 
 void findBareLinkContacts(const CheckedBoard& checked, std::vector<Finding>& warnings) {
     const Board& board = checked.board();
