@@ -68,6 +68,26 @@ TEST_CASE("bare links") {
         CHECK(linkWarnings(board).empty());
     }
 
+    SUBCASE("leads passed over are listed with a final \"and\"; past eight, the rest are counted") {
+        Board board = emptyBoard(3, 14);
+        board.links.push_back(Link{h("B1"), h("B4")});
+        addPin(board, "TP1", h("B2"));
+        addPin(board, "TP2", h("B3"));
+        auto found = linkWarnings(board);
+        REQUIRE(found.size() == 1);
+        CHECK(found[0].message ==
+              "Bare link B1-B4 passes over B2 (TP1.1) and B3 (TP2.1): the wire would touch those leads");
+        board = emptyBoard(3, 14);
+        board.links.push_back(Link{h("B1"), h("B12")});
+        for (int col = 2; col <= 11; ++col) addPin(board, "TP" + std::to_string(col), Hole{1, col - 1});
+        found = linkWarnings(board);
+        REQUIRE(found.size() == 1);
+        CHECK(found[0].message ==
+              "Bare link B1-B12 passes over B2 (TP2.1), B3 (TP3.1), B4 (TP4.1), B5 (TP5.1), B6 (TP6.1), "
+              "B7 (TP7.1), B8 (TP8.1) and 3 more holes: the wire would touch those leads");
+        CHECK(found[0].holes.size() == 2 + 10);
+    }
+
     SUBCASE("crossing at a hole, and crossing between holes") {
         Board board = emptyBoard(6, 10);
         board.links.push_back(Link{h("A3"), h("E3")});

@@ -3,7 +3,7 @@
 #include "netcheck/check/circuit_match.hpp"
 
 #include <algorithm>
-#include <map>
+#include <numeric>
 #include <unordered_map>
 
 #include "netcheck/model/part_kinds.hpp"
@@ -243,25 +243,24 @@ private:
 // The pins of every net, in ref order, each part's pins in board order: counted per net first, so
 // each net's pins are one stretch of match.netPins.
 void placeNets(CircuitMatch& match) {
-    auto placed = [](const MatchedPart& part, const MatchedPin& pin) {
-        return part.unknownPins.empty() && pin.net >= 0 && pin.node >= 0;
+    auto forEachPlaced = [&](auto visit) {
+        for (const MatchedPart& part : match.parts) {
+            for (const MatchedPin& pin : part.pins) {
+                if (part.unknownPins.empty() && pin.net >= 0 && pin.node >= 0) visit(part, pin);
+            }
+        }
     };
     std::vector<std::size_t> start(match.nets.size() + 1, 0);
-    for (const MatchedPart& part : match.parts) {
-        for (const MatchedPin& pin : part.pins) {
-            if (placed(part, pin)) ++start[static_cast<std::size_t>(pin.net) + 1];
-        }
-    }
-    for (std::size_t n = 0; n < match.nets.size(); ++n) start[n + 1] += start[n];
+    forEachPlaced([&](const MatchedPart&, const MatchedPin& pin) {
+        ++start[static_cast<std::size_t>(pin.net) + 1];
+    });
+    std::partial_sum(start.begin(), start.end(), start.begin());
     match.netPins.resize(start.back());
     std::vector<std::size_t> next(start.begin(), start.end() - 1);
-    for (const MatchedPart& part : match.parts) {
-        for (const MatchedPin& pin : part.pins) {
-            if (placed(part, pin))
-                match.netPins[next[static_cast<std::size_t>(pin.net)]++] =
-                    NetPin{part.ref, pin.meant, pin.node, pin.island};
-        }
-    }
+    forEachPlaced([&](const MatchedPart& part, const MatchedPin& pin) {
+        match.netPins[next[static_cast<std::size_t>(pin.net)]++] =
+            NetPin{part.ref, pin.meant, pin.node, pin.island};
+    });
     for (std::size_t n = 0; n < match.nets.size(); ++n) {
         match.nets[n].pins =
             std::span<const NetPin>(match.netPins).subspan(start[n], start[n + 1] - start[n]);
@@ -270,19 +269,17 @@ void placeNets(CircuitMatch& match) {
 
 }  // namespace
 
-std::vector<NetPiece> netPieces(const CheckedBoard& checked, const Net& net) {
-    std::map<int, NetPiece> byIsland;
-    for (const NetPin& pin : net.pins) {
-        const int island = checked.copper().islandOfNode(pin.node);
-        NetPiece& piece = byIsland[island];
-        piece.island = island;
-        piece.pins.push_back(&pin);
-    }
+std::vector<NetPiece> netPieces(const Net& net) {
+    std::vector<const NetPin*> pins;
+    for (const NetPin& pin : net.pins) pins.push_back(&pin);
+    std::sort(pins.begin(), pins.end(), [](const NetPin* a, const NetPin* b) {
+        return a->island != b->island ? a->island < b->island : *a < *b;
+    });
     std::vector<NetPiece> pieces;
-    for (auto& [island, piece] : byIsland) {
-        std::sort(piece.pins.begin(), piece.pins.end(),
-                  [](const NetPin* a, const NetPin* b) { return *a < *b; });
-        pieces.push_back(std::move(piece));
+    for (const NetPin* pin : pins) {
+        if (pieces.empty() || pieces.back().island != pin->island)
+            pieces.push_back({pin->island, {}});
+        pieces.back().pins.push_back(pin);
     }
     std::sort(pieces.begin(), pieces.end(), [](const NetPiece& a, const NetPiece& b) {
         return *a.pins.front() < *b.pins.front();

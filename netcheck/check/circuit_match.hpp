@@ -91,7 +91,7 @@ struct NetPiece {
 };
 
 /// The net's pins grouped by island, pieces in the order of their first pin.
-std::vector<NetPiece> netPieces(const CheckedBoard& checked, const Net& net);
+std::vector<NetPiece> netPieces(const Net& net);
 
 /// Matches the board's parts and pins to `circuit`, orients the parts that may sit either way
 /// round, and reports what differs part by part.

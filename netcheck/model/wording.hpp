@@ -11,6 +11,9 @@ namespace netcheck {
 /// "R1, R2, C3": the items with `separator` between them.
 std::string joined(const std::vector<std::string>& items, std::string_view separator = ", ");
 
+/// "R1", "R1 and R2", "R1, R2 and R3".
+std::string listed(const std::vector<std::string>& items);
+
 /// "1 lead", "3 leads".
 std::string plural(std::size_t count, std::string_view word);
 

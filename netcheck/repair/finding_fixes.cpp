@@ -284,7 +284,7 @@ void fixOpen(const CheckedBoard& checked, const Net& net, const Board& repaired,
         open.fix = "remove the cut at " + cutName(*cut);
         return;
     }
-    const std::vector<NetPiece> pieces = netPieces(checked, net);
+    const std::vector<NetPiece> pieces = netPieces(net);
     open.suggestedLinks = piecesLinks(checked, freeHoles(checked, repairedCopper, pieces));
     for (const Link& link : open.suggestedLinks) {
         open.fix += (open.fix.empty() ? "link " : ", link ") + holeName(link.from) + " to " + holeName(link.to);

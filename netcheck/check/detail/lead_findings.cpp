@@ -81,20 +81,18 @@ void findTrim(const CheckedBoard& checked, std::vector<Finding>& warnings) {
                           board.cols - 1 - last.col};
     const char* const what[4] = {"row", "row", "column", "column"};
     const char* const where[4] = {" at the top", " at the bottom", " at the left", " at the right"};
-    const auto sides = std::count_if(spare, spare + 4, [](int n) { return n > 0; });
-    if (sides == 0) return;
-    std::string text = "the board could lose ";
-    for (int i = 0, listed = 0; i < 4; ++i) {
-        if (spare[i] == 0) continue;
-        if (listed > 0) text += listed + 1 == sides ? " and " : ", ";
-        text += plural(static_cast<std::size_t>(spare[i]), what[i]) + where[i];
-        ++listed;
+    std::vector<std::string> sides;
+    for (int i = 0; i < 4; ++i) {
+        if (spare[i] > 0)
+            sides.push_back(plural(static_cast<std::size_t>(spare[i]), what[i]) + where[i]);
     }
+    if (sides.empty()) return;
     const int rows = last.row - first.row + 1;
     const int cols = last.col - first.col + 1;
     warnings.push_back(Finding::of(FindingType::Trim,
-                                   text + ": " + sizeInHoles(cols, rows) + " (" + holeName(first) +
-                                       " to " + holeName(last) + "), " +
+                                   "the board could lose " + listed(sides) + ": " +
+                                       sizeInHoles(cols, rows) + " (" + holeName(first) + " to " +
+                                       holeName(last) + "), " +
                                        sizeInMm(cols * board.pitchMm, rows * board.pitchMm),
                                    {first, last}));
 }

@@ -8,6 +8,7 @@
 #include <utility>
 
 #include "netcheck/model/link_geometry.hpp"
+#include "netcheck/model/wording.hpp"
 
 namespace netcheck {
 
@@ -56,14 +57,13 @@ std::vector<std::pair<int, int>> crossingCandidates(const Board& board,
 std::string leadsPassedOver(const CheckedBoard& checked, const std::vector<Hole>& under) {
     constexpr std::size_t kNamed = 8;
     const std::size_t shown = under.size() > kNamed ? kNamed - 1 : under.size();
-    std::string text;
+    std::vector<std::string> names;
     for (std::size_t i = 0; i < shown; ++i) {
-        if (i > 0) text += i + 1 == under.size() ? " and " : ", ";
-        text += holeName(under[i]) + " (" + checked.leadNames(checked.holeIndex(under[i])) + ")";
+        names.push_back(holeName(under[i]) + " (" + checked.leadNames(checked.holeIndex(under[i])) +
+                        ")");
     }
-    if (shown < under.size())
-        text += " and " + std::to_string(under.size() - shown) + " more holes";
-    return text;
+    if (shown < under.size()) names.push_back(std::to_string(under.size() - shown) + " more holes");
+    return listed(names);
 }
 
 // link-over-lead warnings, in link order.

@@ -27,7 +27,7 @@ Finding locateOpen(const CheckedBoard& checked, const Net& net, bool locate) {
     finding.type = FindingType::Open;
     finding.net = std::string(net.name);
     if (!locate) return finding;
-    const std::vector<NetPiece> pieces = netPieces(checked, net);
+    const std::vector<NetPiece> pieces = netPieces(net);
     for (const NetPiece& piece : pieces) {
         std::vector<PinRef>& pins = finding.pieces.emplace_back();
         for (const NetPin* pin : piece.pins) {
