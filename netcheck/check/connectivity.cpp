@@ -39,16 +39,10 @@ Connectivity::Connectivity(const Board& board) : board_(&board) {
     }
 
     UnionFind sets(segments);
-    auto join = [&](const Endpoint& a, const Endpoint& b) {
-        const int x = endpointNode(a);
-        const int y = endpointNode(b);
-        if (x < 0 || y < 0) return;
-        sets.unite(segmentOfNode[static_cast<std::size_t>(x)],
-                   segmentOfNode[static_cast<std::size_t>(y)]);
-    };
-    for (const Link& link : board.links)
-        join(Endpoint::atHole(link.from), Endpoint::atHole(link.to));
-    for (const Wire& wire : board.wires) join(wire.from, wire.to);
+    for (const auto& [a, b] : jumpers()) {
+        sets.unite(segmentOfNode[static_cast<std::size_t>(a)],
+                   segmentOfNode[static_cast<std::size_t>(b)]);
+    }
 
     // Islands are numbered in order of their first segment, so in order of their first node.
     std::vector<int> islandOfSegment(static_cast<std::size_t>(segments), -1);
@@ -91,6 +85,19 @@ int Connectivity::endpointNode(const Endpoint& end) const {
 
 int Connectivity::islandOfPin(const PinRef& pin) const {
     return islandOfNode(endpointNode(Endpoint::atLug(pin)));
+}
+
+std::vector<std::pair<int, int>> Connectivity::jumpers() const {
+    std::vector<std::pair<int, int>> joined;
+    auto join = [&](const Endpoint& a, const Endpoint& b) {
+        const int x = endpointNode(a);
+        const int y = endpointNode(b);
+        if (x >= 0 && y >= 0) joined.emplace_back(x, y);
+    };
+    for (const Link& link : board_->links)
+        join(Endpoint::atHole(link.from), Endpoint::atHole(link.to));
+    for (const Wire& wire : board_->wires) join(wire.from, wire.to);
+    return joined;
 }
 
 bool Connectivity::isHoleCut(Hole hole) const {

@@ -3,6 +3,7 @@
 
 #include <functional>
 #include <map>
+#include <utility>
 #include <vector>
 
 #include "netcheck/model/board.hpp"
@@ -37,6 +38,9 @@ public:
     /// Node of the hole or lug a wire ends on (a wire may also end on an on-board part's pin: its
     /// hole); -1 when it names nothing on the board.
     int endpointNode(const Endpoint& end) const;
+    /// The two nodes each link and wire joins, links then wires, in board order (a wire end that
+    /// names nothing on the board joins nothing).
+    std::vector<std::pair<int, int>> jumpers() const;
     /// Holes and pins of island `id` (empty when out of range), gathered on demand: a viewer asks
     /// for the one island under the pointer, not for every island on each edit.
     Island island(int id) const;

@@ -25,18 +25,11 @@ using PinsAt = std::multimap<int, PinAt>;
 
 // Nodes from a pin of the first net to the nearest pin of another net, both ends included.
 std::vector<int> shortestPath(const CheckedBoard& checked, const PinsAt& pinsAt) {
-    // The nodes each link and wire joins, both ways, in board order.
-    std::multimap<int, int> jumpers;
-    auto join = [&](const Endpoint& from, const Endpoint& to) {
-        const int a = checked.copper().endpointNode(from);
-        const int b = checked.copper().endpointNode(to);
-        if (a < 0 || b < 0) return;
+    std::multimap<int, int> jumpers;  // both ways, in board order
+    for (const auto& [a, b] : checked.copper().jumpers()) {
         jumpers.emplace(a, b);
         jumpers.emplace(b, a);
-    };
-    for (const Link& link : checked.board().links)
-        join(Endpoint::atHole(link.from), Endpoint::atHole(link.to));
-    for (const Wire& wire : checked.board().wires) join(wire.from, wire.to);
+    }
     std::unordered_map<int, int> parent;  // node -> the node it was reached from
     std::deque<int> queue;
     for (const auto& [node, at] : pinsAt) {
