@@ -4,6 +4,7 @@
 
 #include <algorithm>
 #include <numeric>
+#include <optional>
 #include <unordered_map>
 
 #include "netcheck/model/part_kinds.hpp"
@@ -92,18 +93,20 @@ public:
         for (const Part& part : board.parts) pins += part.pins.size();
         for (const OffboardPart& part : board.offboard) pins += part.pins.size();
         match_.pins.reserve(pins);
-        for (const Part& part : board.parts) refs_.emplace(part.ref, Ref{&part, nullptr});
+        for (const Part& part : board.parts) refs_.emplace(part.ref, Ref{&part, nullptr, {}});
         for (const OffboardPart& part : board.offboard)
-            refs_.emplace(part.ref, Ref{nullptr, &part});
+            refs_.emplace(part.ref, Ref{nullptr, &part, {}});
     }
 
     CircuitMatch run() {
         for (const auto& [ref, part] : circuit_.parts) partNamed(ref).declared = &part;
         for (const auto& [name, pins] : circuit_.nets) assignNet(name, pins);
         // Declared parts come in ref order; refs that only the nets name were added after them.
-        auto byRef = [](const MatchedPart& a, const MatchedPart& b) { return a.ref < b.ref; };
-        if (!std::is_sorted(match_.parts.begin(), match_.parts.end(), byRef))
-            std::stable_sort(match_.parts.begin(), match_.parts.end(), byRef);
+        if (match_.parts.size() > circuit_.parts.size()) {
+            std::stable_sort(
+                match_.parts.begin(), match_.parts.end(),
+                [](const MatchedPart& a, const MatchedPart& b) { return a.ref < b.ref; });
+        }
         for (MatchedPart& part : match_.parts) {
             std::sort(part.unknownPins.begin(), part.unknownPins.end());
             part.unknownPins.erase(std::unique(part.unknownPins.begin(), part.unknownPins.end()),
@@ -122,13 +125,12 @@ private:
     struct Ref {
         const Part* part = nullptr;
         const OffboardPart* offboard = nullptr;
-        std::size_t matched = kNotNamed;
+        std::optional<std::size_t> matched;
     };
-    static constexpr std::size_t kNotNamed = ~std::size_t{0};
 
     MatchedPart& partNamed(std::string_view ref) {
         Ref& named = refs_[ref];
-        if (named.matched != kNotNamed) return match_.parts[named.matched];
+        if (named.matched) return match_.parts[*named.matched];
         named.matched = match_.parts.size();
         MatchedPart& matched = match_.parts.emplace_back();
         matched.ref = ref;
@@ -138,7 +140,7 @@ private:
         return matched;
     }
 
-    bool isNamed(std::string_view ref) const { return refs_.at(ref).matched != kNotNamed; }
+    bool isNamed(std::string_view ref) const { return refs_.at(ref).matched.has_value(); }
 
     // Puts the net on each board pin it names (a pin named by two nets keeps the first).
     void assignNet(std::string_view name, const std::vector<PinRef>& pins) {
