@@ -4,7 +4,6 @@
 
 #include <algorithm>
 #include <numeric>
-#include <optional>
 #include <unordered_map>
 
 #include "netcheck/model/part_kinds.hpp"
@@ -93,9 +92,9 @@ public:
         for (const Part& part : board.parts) pins += part.pins.size();
         for (const OffboardPart& part : board.offboard) pins += part.pins.size();
         match_.pins.reserve(pins);
-        for (const Part& part : board.parts) refs_.emplace(part.ref, Ref{&part, nullptr, {}});
+        for (const Part& part : board.parts) refs_.emplace(part.ref, Ref{&part, nullptr});
         for (const OffboardPart& part : board.offboard)
-            refs_.emplace(part.ref, Ref{nullptr, &part, {}});
+            refs_.emplace(part.ref, Ref{nullptr, &part});
     }
 
     CircuitMatch run() {
@@ -125,12 +124,14 @@ private:
     struct Ref {
         const Part* part = nullptr;
         const OffboardPart* offboard = nullptr;
-        std::optional<std::size_t> matched;
+        std::size_t matched = kNotNamed;
     };
+
+    static constexpr std::size_t kNotNamed = ~std::size_t{0};
 
     MatchedPart& partNamed(std::string_view ref) {
         Ref& named = refs_[ref];
-        if (named.matched) return match_.parts[*named.matched];
+        if (named.matched != kNotNamed) return match_.parts[named.matched];
         named.matched = match_.parts.size();
         MatchedPart& matched = match_.parts.emplace_back();
         matched.ref = ref;
@@ -140,7 +141,7 @@ private:
         return matched;
     }
 
-    bool isNamed(std::string_view ref) const { return refs_.at(ref).matched.has_value(); }
+    bool isNamed(std::string_view ref) const { return refs_.at(ref).matched != kNotNamed; }
 
     // Puts the net on each board pin it names (a pin named by two nets keeps the first).
     void assignNet(std::string_view name, const std::vector<PinRef>& pins) {
