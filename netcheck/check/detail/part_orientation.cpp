@@ -198,7 +198,7 @@ void orientParts(const CheckedBoard& checked, CircuitMatch& match) {
     // The tie-break counts, built on the first tie (most boards have none): each end-for-end part
     // added as placed and turned round.
     std::optional<NetCounts> eitherWay;
-    auto eitherWayCounts = [&]() -> const NetCounts& {
+    const std::function<const NetCounts&()> eitherWayCounts = [&]() -> const NetCounts& {
         if (eitherWay) return *eitherWay;
         eitherWay.emplace(islands, match.nets.size());
         for (std::size_t p = 0; p < parts.size(); ++p) {
