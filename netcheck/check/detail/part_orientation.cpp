@@ -195,8 +195,9 @@ void orientParts(const CheckedBoard& checked, CircuitMatch& match) {
     const int islands = checked.copper().islandCount();
     NetCounts counts(islands, match.nets.size());
     for (const MatchedPart& part : parts) counts.add(part, +1);
-    // The tie-break counts, built on the first tie (most boards have none): each end-for-end part
-    // added as placed and turned round.
+    // The tie-break counts: each end-for-end part added as placed and turned round. Most of their
+    // islands then carry two nets, a map node each, so they are built on the first tie, not before
+    // (most boards have none).
     std::optional<NetCounts> eitherWay;
     const std::function<const NetCounts&()> eitherWayCounts = [&]() -> const NetCounts& {
         if (eitherWay) return *eitherWay;
